@@ -1,0 +1,46 @@
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { z } from "zod";
+
+/** The repository root, so default paths work whichever folder the process starts in. */
+const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../../..");
+
+const flag = z
+  .enum(["1", "0", "true", "false", ""])
+  .optional()
+  .transform((v) => v === "1" || v === "true");
+
+const schema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  DATABASE_PATH: z.string().min(1).default(path.join(repoRoot, "data", "waymark.sqlite")),
+  SESSION_SECRET: z.string().min(16, "SESSION_SECRET must be at least 16 characters").optional(),
+  WAYMARK_DEMO: flag,
+  TRUST_PROXY: flag,
+  BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+  WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),
+});
+
+export type Env = z.infer<typeof schema> & { sessionSecret: string; demoPassword: string };
+
+/** The one place the API reads process.env. Invalid settings stop start-up with a clear message. */
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = schema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new Error(`Invalid configuration:\n${lines.join("\n")}`);
+  }
+  const env = parsed.data;
+  if (env.NODE_ENV === "production" && !env.SESSION_SECRET && !env.WAYMARK_DEMO) {
+    throw new Error("Invalid configuration:\n  SESSION_SECRET: required in production");
+  }
+  return {
+    ...env,
+    // Demo and development get a fixed, clearly non-secret value; production must set its own.
+    sessionSecret: env.SESSION_SECRET ?? "waymark-development-only-session-secret",
+    demoPassword: DEMO_PASSWORD,
+  };
+}
+
+/** Shown on the sign-in page and in the README in demo mode only. */
+export const DEMO_PASSWORD = "trailhead-demo";

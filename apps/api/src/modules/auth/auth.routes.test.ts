@@ -1,0 +1,78 @@
+import request from "supertest";
+import { beforeAll, describe, expect, it } from "vitest";
+import { makeTestApp } from "../../test-support/test-app.js";
+import { DEMO_USERS } from "../../db/seeds/demo-users.js";
+
+let app: Awaited<ReturnType<typeof makeTestApp>>;
+beforeAll(async () => {
+  app = await makeTestApp();
+});
+
+const errorShape = expect.objectContaining({ error: { code: expect.any(String), message: expect.any(String) } });
+
+describe("POST /api/auth/login", () => {
+  it.each(DEMO_USERS)("signs in the demo $role and sets an httpOnly SameSite=Lax cookie", async ({ email, role }) => {
+    const res = await request(app.app).post("/api/auth/login").send({ email, password: app.env.demoPassword });
+    expect(res.status).toBe(200);
+    expect(res.body.user).toMatchObject({ email, role, active: true });
+    expect(res.body.user.passwordHash).toBeUndefined();
+    const cookie = String(res.headers["set-cookie"]);
+    expect(cookie).toMatch(/waymark\.sid=/);
+    expect(cookie).toMatch(/HttpOnly/);
+    expect(cookie).toMatch(/SameSite=Lax/);
+  });
+
+  it("gives 401 for a wrong password, with the same message as for an unknown e-mail", async () => {
+    const wrong = await request(app.app).post("/api/auth/login").send({ email: "analyst@waymark.test", password: "nope" });
+    const unknown = await request(app.app).post("/api/auth/login").send({ email: "nobody@waymark.test", password: "nope" });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body).toEqual(errorShape);
+    expect(wrong.body.error.message).toBe(unknown.body.error.message);
+    expect(wrong.body.error.message).not.toMatch(/password is|e-mail is|no user/i);
+  });
+
+  it("rejects a malformed body with 400 naming the field", async () => {
+    const res = await request(app.app).post("/api/auth/login").send({ email: "not-an-email", password: "" });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe("validation_failed");
+    expect(res.body.error.message).toMatch(/^email:/);
+  });
+});
+
+describe("GET /api/auth/me and POST /api/auth/logout", () => {
+  it("is 401 when signed out", async () => {
+    const res = await request(app.app).get("/api/auth/me");
+    expect(res.status).toBe(401);
+    expect(res.body).toEqual(errorShape);
+  });
+
+  it("returns the user while signed in and 401 after logout", async () => {
+    const agent = request.agent(app.app);
+    await agent.post("/api/auth/login").send({ email: "reviewer@waymark.test", password: app.env.demoPassword }).expect(200);
+    const me = await agent.get("/api/auth/me").expect(200);
+    expect(me.body.user.role).toBe("reviewer");
+    await agent.post("/api/auth/logout").expect(204);
+    await agent.get("/api/auth/me").expect(401);
+  });
+
+  it("ends the session when the account is deactivated", async () => {
+    const agent = request.agent(app.app);
+    await agent.post("/api/auth/login").send({ email: "writer@waymark.test", password: app.env.demoPassword }).expect(200);
+    await app.ds.query(`UPDATE users SET active = 0 WHERE email = 'writer@waymark.test'`);
+    await agent.get("/api/auth/me").expect(401);
+    await app.ds.query(`UPDATE users SET active = 1 WHERE email = 'writer@waymark.test'`);
+  });
+});
+
+describe("GET /api/health", () => {
+  it("reports ok with the version", async () => {
+    const res = await request(app.app).get("/api/health").expect(200);
+    expect(res.body).toEqual({ status: "ok", version: expect.stringMatching(/^\d+\.\d+\.\d+/) });
+  });
+
+  it("unknown API paths get 404 in the error shape", async () => {
+    const res = await request(app.app).get("/api/nowhere").expect(404);
+    expect(res.body).toEqual(errorShape);
+  });
+});

@@ -1,0 +1,48 @@
+import type { RequestHandler } from "express";
+import type passport from "passport";
+import type { DataSource } from "typeorm";
+import { policy } from "../../auth/policy.js";
+import { WRONG_CREDENTIALS } from "../../auth/passport.js";
+import { HttpError } from "../../http/errors.js";
+import type { RouteSpec } from "../../http/route-table.js";
+import { parseBody } from "../../http/validate.js";
+import { User } from "../users/user.entity.js";
+import { loginSchema } from "./auth.schema.js";
+
+export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSpec[] {
+  const login: RequestHandler = (req, res, next) => {
+    req.body = parseBody(loginSchema, req.body);
+    pp.authenticate("local", (err: unknown, user: Express.User | false, info?: { message?: string }) => {
+      if (err) return next(err);
+      if (!user) return next(new HttpError(401, "invalid_credentials", info?.message ?? WRONG_CREDENTIALS));
+      // passport 0.7 regenerates the session id on login, which defeats session fixation.
+      req.logIn(user, (e) => {
+        if (e) return next(e);
+        ds.getRepository(User)
+          .update({ id: user.id }, { lastSignInAt: new Date() })
+          .then(() => res.json({ user }))
+          .catch(next);
+      });
+    })(req, res, next);
+  };
+
+  const logout: RequestHandler = (req, res, next) => {
+    req.logout((err) => {
+      if (err) return next(err);
+      req.session.destroy(() => {
+        res.clearCookie("waymark.sid");
+        res.status(204).end();
+      });
+    });
+  };
+
+  const me: RequestHandler = (req, res) => {
+    res.json({ user: req.user });
+  };
+
+  return [
+    { method: "post", path: "/login", policy: policy.public, handlers: [login], summary: "Sign in with e-mail and password" },
+    { method: "post", path: "/logout", policy: policy.signedIn, handlers: [logout], summary: "Sign out" },
+    { method: "get", path: "/me", policy: policy.signedIn, handlers: [me], summary: "The signed-in user" },
+  ];
+}

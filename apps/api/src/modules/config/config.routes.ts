@@ -1,0 +1,24 @@
+import { policy } from "../../auth/policy.js";
+import type { Env } from "../../config/env.js";
+import type { RouteSpec } from "../../http/route-table.js";
+import { DEMO_USERS } from "../../db/seeds/demo-users.js";
+
+/** What the sign-in page needs before anyone is signed in. Demo details only in demo mode. */
+export function configRoutes(env: Env): RouteSpec[] {
+  return [
+    {
+      method: "get",
+      path: "",
+      policy: policy.public,
+      summary: "Public settings for the sign-in page",
+      handlers: [
+        (_req, res) =>
+          void res.json(
+            env.WAYMARK_DEMO
+              ? { demo: true, demoPassword: env.demoPassword, demoAccounts: DEMO_USERS.map(({ email, role }) => ({ email, role })) }
+              : { demo: false },
+          ),
+      ],
+    },
+  ];
+}
