@@ -1,0 +1,7 @@
+import { useMe } from "@/features/auth/api/get-me";
+import { RoleHome } from "@/features/home/components/role-home";
+
+export function HomeRoute() {
+  const me = useMe();
+  return me.data ? <RoleHome user={me.data} /> : null;
+}

@@ -1,0 +1,61 @@
+/** The API's one error shape. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; details?: unknown };
+}
+
+/** An API failure with the server's message, ready to show to the user. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+}
+
+type Json = Record<string, unknown> | unknown[];
+
+/**
+ * The only place the web app talks HTTP. Same-origin with the session cookie; errors become
+ * ApiError carrying the server's message.
+ */
+export async function apiRequest<T>(method: string, path: string, body?: Json | FormData): Promise<T> {
+  const isForm = typeof FormData !== "undefined" && body instanceof FormData;
+  let res: Response;
+  try {
+    res = await fetch(`/api${path}`, {
+      method,
+      credentials: "same-origin",
+      headers: body && !isForm ? { "content-type": "application/json", accept: "application/json" } : { accept: "application/json" },
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, "network", "Waymark's server could not be reached. Check your connection and try again.");
+  }
+  if (res.status === 204) return undefined as T;
+  const text = await res.text();
+  const data: unknown = text ? safeJson(text) : undefined;
+  if (!res.ok) {
+    const err = (data as ApiErrorBody | undefined)?.error;
+    throw new ApiError(res.status, err?.code ?? "http_error", err?.message ?? `The server answered ${res.status}.`, err?.details);
+  }
+  return data as T;
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+export const api = {
+  get: <T>(path: string) => apiRequest<T>("GET", path),
+  post: <T>(path: string, body?: Json | FormData) => apiRequest<T>("POST", path, body),
+  put: <T>(path: string, body?: Json) => apiRequest<T>("PUT", path, body),
+  patch: <T>(path: string, body?: Json) => apiRequest<T>("PATCH", path, body),
+  delete: <T>(path: string) => apiRequest<T>("DELETE", path),
+};

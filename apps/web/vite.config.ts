@@ -1,0 +1,21 @@
+import tailwindcss from "@tailwindcss/vite";
+import react from "@vitejs/plugin-react";
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias: { "@": fileURLToPath(new URL("./src", import.meta.url)) } },
+  server: {
+    port: 5173,
+    // The fonts live in the repository's top-level fonts/ folder.
+    fs: { allow: ["../.."] },
+    proxy: { "/api": { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },
+  },
+  build: { outDir: "dist", sourcemap: true },
+  test: {
+    environment: "jsdom",
+    include: ["src/**/*.test.{ts,tsx}"],
+    setupFiles: ["src/test/setup.ts"],
+  },
+});

@@ -1,0 +1,55 @@
+import type { Unavailable } from "../types/group-summary.js";
+import type { SampleInput } from "../numeric/centred-sample.js";
+import { centralMoments } from "../numeric/central-moments.js";
+import { prepareSample } from "../numeric/prepare-sample.js";
+import { requireGroupSizes } from "../numeric/require-group-sizes.js";
+import { sampleFromArrays } from "../numeric/sample-from-arrays.js";
+import { sortedValues } from "../numeric/sorted-values.js";
+import { quantileSorted } from "../descriptives/quantile.js";
+import { oneWayAnova } from "../omnibus/one-way-anova.js";
+
+export interface LeveneResult {
+  available: true;
+  method: "Levene (mean-centred)" | "Brown–Forsythe (median-centred)";
+  center: "mean" | "median";
+  F: number;
+  df1: number;
+  df2: number;
+  p: number;
+}
+
+/**
+ * Test of equal variances: a one-way ANOVA on the absolute deviations |x − cᵢ| from each
+ * group's centre cᵢ. center = "mean" is Levene's original test; center = "median" is the
+ * Brown–Forsythe variant, robust to skewed data.
+ * References: Levene, H. (1960). In Contributions to Probability and Statistics (Olkin, ed.),
+ * 278–292; Brown, M. B. & Forsythe, A. B. (1974). JASA 69, 364–367.
+ * Example: levene([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}], "mean") → F = 1.6, p = 0.2746
+ *   (deviations 1,0,1 vs 2,0,2).
+ * Cost: O(N) plus the shared per-group sort for the median.
+ * Unavailable when every deviation is zero within each group (e.g. all groups constant).
+ */
+export function levene(input: SampleInput, center: "mean" | "median"): LeveneResult | Unavailable {
+  const sample = prepareSample(input);
+  const name = center === "mean" ? "Levene's test" : "The Brown–Forsythe test";
+  requireGroupSizes(sample, name, 2);
+  const deviations = sample.groups.map((g) => {
+    const c = center === "mean" ? centralMoments(g.centred).mean : quantileSorted(sortedValues(g), 0.5);
+    const d = new Float64Array(g.centred.length);
+    for (let i = 0; i < d.length; i++) d[i] = Math.abs((g.centred[i] as number) - c);
+    return { name: g.name, values: d };
+  });
+  const result = oneWayAnova(sampleFromArrays(deviations));
+  if (!result.available) {
+    return { available: false, reason: `${name} is undefined: the absolute deviations from the group ${center}s show no spread within groups (${result.reason.charAt(0).toLowerCase()}${result.reason.slice(1)})` };
+  }
+  return {
+    available: true,
+    method: center === "mean" ? "Levene (mean-centred)" : "Brown–Forsythe (median-centred)",
+    center,
+    F: result.F,
+    df1: result.df1,
+    df2: result.df2,
+    p: result.p,
+  };
+}

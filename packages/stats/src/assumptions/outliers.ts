@@ -1,0 +1,132 @@
+import type { Unavailable } from "../types/group-summary.js";
+import type { SampleInput } from "../numeric/centred-sample.js";
+import { centralMoments } from "../numeric/central-moments.js";
+import { prepareSample } from "../numeric/prepare-sample.js";
+import { sortedValues } from "../numeric/sorted-values.js";
+import { toOriginal } from "../numeric/to-original.js";
+import { quantileSorted } from "../descriptives/quantile.js";
+
+/** Tukey's inner and outer fence multipliers (Tukey 1977, Exploratory Data Analysis). */
+export const MILD_FENCE_IQR = 1.5;
+export const EXTREME_FENCE_IQR = 3;
+/** |internally studentized residual| above this is flagged. Common practice. */
+export const STUDENTIZED_RESIDUAL_LIMIT = 3;
+/** At most this many flagged values are listed per group and rule; counts are always complete. */
+export const MAX_LISTED_OUTLIERS = 50;
+
+export interface FlaggedValue {
+  value: number;
+  /** The value's row number as given with the input, else its 1-based position in the group. */
+  row: number;
+  studentizedResidual?: number;
+}
+
+export interface GroupOutliers {
+  group: string;
+  lowerFence: number;
+  upperFence: number;
+  lowerExtremeFence: number;
+  upperExtremeFence: number;
+  /** Beyond 1.5 IQR but within 3 IQR. */
+  mild: FlaggedValue[];
+  mildCount: number;
+  /** Beyond 3 IQR. */
+  extreme: FlaggedValue[];
+  extremeCount: number;
+  /** |e / √(MS_W (1 − 1/nᵢ))| > 3. */
+  largeResidual: FlaggedValue[];
+  largeResidualCount: number;
+}
+
+export interface OutlierReport {
+  available: true;
+  fences: { mild: number; extreme: number; quantileDefinition: string };
+  residualRule: string;
+  groups: GroupOutliers[];
+  totalMild: number;
+  totalExtreme: number;
+  totalLargeResidual: number;
+}
+
+/**
+ * Outlier screening, two rules side by side:
+ * 1. Tukey's fences per group: below Q1 − c·IQR or above Q3 + c·IQR, c = 1.5 (mild) and 3
+ *    (extreme), quartiles by linear interpolation (type 7).
+ * 2. Internally studentized residuals of the one-way model, rᵢⱼ = (xᵢⱼ − x̄ᵢ)/√(MS_W(1 − 1/nᵢ)),
+ *    where 1 − 1/nᵢ is one minus the leverage of a value in a group of nᵢ; |r| > 3 is flagged.
+ * References: Tukey, J. W. (1977). Exploratory Data Analysis, ch. 2; Cook, R. D. & Weisberg,
+ * S. (1982). Residuals and Influence in Regression, §2.2 (studentized residuals).
+ * Example: values 1..9 and 40 in one group → 40 is beyond the 3 IQR fence (Q3 = 7.75, IQR = 4.5).
+ * Cost: O(N) after the shared sorts.
+ */
+export function outliers(input: SampleInput): OutlierReport | Unavailable {
+  const sample = prepareSample(input);
+  const moments = sample.groups.map((g) => centralMoments(g.centred));
+  let ssw = 0;
+  let N = 0;
+  for (const m of moments) {
+    ssw += m.ss;
+    N += m.n;
+  }
+  const dfw = N - sample.groups.length;
+  const msw = dfw > 0 ? ssw / dfw : 0;
+  let totalMild = 0;
+  let totalExtreme = 0;
+  let totalLargeResidual = 0;
+  const groups = sample.groups.map((g, gi) => {
+    const sorted = sortedValues(g);
+    const n = sorted.length;
+    const m = moments[gi] as (typeof moments)[number];
+    const q1 = n > 0 ? quantileSorted(sorted, 0.25) : 0;
+    const q3 = n > 0 ? quantileSorted(sorted, 0.75) : 0;
+    const iqr = q3 - q1;
+    const lowMild = q1 - MILD_FENCE_IQR * iqr;
+    const highMild = q3 + MILD_FENCE_IQR * iqr;
+    const lowExtreme = q1 - EXTREME_FENCE_IQR * iqr;
+    const highExtreme = q3 + EXTREME_FENCE_IQR * iqr;
+    const scale = msw > 0 && n > 1 ? Math.sqrt(msw * (1 - 1 / n)) : 0;
+    const out: GroupOutliers = {
+      group: g.name,
+      lowerFence: toOriginal(sample, lowMild),
+      upperFence: toOriginal(sample, highMild),
+      lowerExtremeFence: toOriginal(sample, lowExtreme),
+      upperExtremeFence: toOriginal(sample, highExtreme),
+      mild: [],
+      mildCount: 0,
+      extreme: [],
+      extremeCount: 0,
+      largeResidual: [],
+      largeResidualCount: 0,
+    };
+    for (let i = 0; i < n; i++) {
+      const x = g.centred[i] as number;
+      const row = g.rows?.[i] ?? i + 1;
+      const r = scale > 0 ? (x - m.mean) / scale : 0;
+      const flagged = (): FlaggedValue => ({ value: toOriginal(sample, x), row, ...(scale > 0 ? { studentizedResidual: r } : {}) });
+      if (x < lowExtreme || x > highExtreme) {
+        out.extremeCount++;
+        if (out.extreme.length < MAX_LISTED_OUTLIERS) out.extreme.push(flagged());
+      } else if (x < lowMild || x > highMild) {
+        out.mildCount++;
+        if (out.mild.length < MAX_LISTED_OUTLIERS) out.mild.push(flagged());
+      }
+      if (Math.abs(r) > STUDENTIZED_RESIDUAL_LIMIT) {
+        out.largeResidualCount++;
+        if (out.largeResidual.length < MAX_LISTED_OUTLIERS) out.largeResidual.push(flagged());
+      }
+    }
+    totalMild += out.mildCount;
+    totalExtreme += out.extremeCount;
+    totalLargeResidual += out.largeResidualCount;
+    return out;
+  });
+  return {
+    available: true,
+    fences: { mild: MILD_FENCE_IQR, extreme: EXTREME_FENCE_IQR, quantileDefinition: "linear interpolation between order statistics (type 7)" },
+    residualRule: `internally studentized residual (x − group mean) / √(MS_within · (1 − 1/n)), flagged beyond ±${STUDENTIZED_RESIDUAL_LIMIT}`,
+    groups,
+    totalMild,
+    totalExtreme,
+    totalLargeResidual,
+  };
+}

@@ -1,0 +1,26 @@
+#!/usr/bin/env bash
+# Installs the Debian packages the test suites need, only when they are missing:
+# chromium (browser tests) and python3-scipy / python3-statsmodels (reference checks run by /usr/bin/python3).
+set -euo pipefail
+
+need=()
+[ -x /usr/bin/chromium ] || need+=(chromium)
+/usr/bin/python3 -c "import scipy" 2>/dev/null || need+=(python3-scipy)
+/usr/bin/python3 -c "import statsmodels" 2>/dev/null || need+=(python3-statsmodels)
+
+if [ ${#need[@]} -eq 0 ]; then
+  echo "system packages: all present"
+  exit 0
+fi
+
+echo "system packages: installing ${need[*]}"
+SUDO=""
+if [ "$(id -u)" -ne 0 ]; then
+  if command -v sudo >/dev/null 2>&1; then SUDO="sudo"; else
+    echo "Missing ${need[*]}; run as root or install them: apt-get install -y ${need[*]}" >&2
+    exit 1
+  fi
+fi
+export DEBIAN_FRONTEND=noninteractive
+$SUDO apt-get update -q || true
+$SUDO apt-get install -y -q "${need[@]}"
