@@ -9,13 +9,28 @@ import { createPassport } from "./auth/passport.js";
 import type { Env } from "./config/env.js";
 import { errorHandler, notFoundHandler } from "./http/error-handler.js";
 import { mountRoutes, type MountedRoute } from "./http/route-table.js";
+import { analysisRoutes } from "./modules/analyses/analysis.routes.js";
+import { auditRoutes } from "./modules/audit/audit.routes.js";
 import { authRoutes } from "./modules/auth/auth.routes.js";
 import { configRoutes } from "./modules/config/config.routes.js";
+import { datasetRoutes } from "./modules/datasets/dataset.routes.js";
 import { healthRoutes } from "./modules/health/health.routes.js";
+import { invitationRoutes } from "./modules/invitations/invitation.routes.js";
+import { devMailRoutes } from "./modules/mail/dev-mail.routes.js";
+import type { MailDispatcher } from "./modules/mail/mail-dispatcher.js";
+import { organizationRoutes } from "./modules/organization/organization.routes.js";
+import { powerRoutes } from "./modules/power/power.routes.js";
+import { reviewQueueRoutes, studyReviewRoutes } from "./modules/reviews/review.routes.js";
 import { TypeormSessionStore } from "./modules/sessions/typeorm-session-store.js";
+import { studyRoutes } from "./modules/studies/study.routes.js";
+import { userRoutes } from "./modules/users/user.routes.js";
 
 export const SESSION_COOKIE = "waymark.sid";
 const SESSION_MAX_AGE_MS = 8 * 60 * 60 * 1000;
+
+export interface AppServices {
+  mail: MailDispatcher;
+}
 
 export interface BuiltApp {
   app: express.Express;
@@ -24,7 +39,7 @@ export interface BuiltApp {
 }
 
 /** Builds the Express app around an open data source; server.ts listens, tests use supertest. */
-export function createApp(ds: DataSource, env: Env): BuiltApp {
+export function createApp(ds: DataSource, env: Env, services: AppServices): BuiltApp {
   const app = express();
   app.disable("x-powered-by");
   if (env.TRUST_PROXY) app.set("trust proxy", 1);
@@ -32,7 +47,11 @@ export function createApp(ds: DataSource, env: Env): BuiltApp {
   app.use(
     helmet({
       contentSecurityPolicy: {
-        directives: { defaultSrc: ["'self'"], imgSrc: ["'self'", "data:", "blob:"], styleSrc: ["'self'", "'unsafe-inline'"] },
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", "data:", "blob:"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+        },
       },
     }),
   );
@@ -53,12 +72,28 @@ export function createApp(ds: DataSource, env: Env): BuiltApp {
   const pp = createPassport(ds, env.BCRYPT_COST);
   app.use(pp.initialize());
   app.use(pp.session());
+  // Mail queued by a request goes out right after it, without the request waiting for it.
+  app.use((req, res, next) => {
+    if (req.method !== "GET") res.on("finish", () => void services.mail.kick());
+    next();
+  });
 
   const api = Router();
   const routes = [
     ...mountRoutes(api, "/health", healthRoutes()),
     ...mountRoutes(api, "/config", configRoutes(env)),
     ...mountRoutes(api, "/auth", authRoutes(pp, ds)),
+    ...mountRoutes(api, "/studies", studyRoutes(ds)),
+    ...mountRoutes(api, "/studies", datasetRoutes(ds, env)),
+    ...mountRoutes(api, "/studies", analysisRoutes(ds)),
+    ...mountRoutes(api, "/studies", studyReviewRoutes(ds, env)),
+    ...mountRoutes(api, "/reviews", reviewQueueRoutes(ds)),
+    ...mountRoutes(api, "/power", powerRoutes()),
+    ...mountRoutes(api, "/audit", auditRoutes(ds)),
+    ...mountRoutes(api, "/invitations", invitationRoutes(ds, env)),
+    ...mountRoutes(api, "/users", userRoutes(ds, sessionStore)),
+    ...mountRoutes(api, "/organization", organizationRoutes(ds)),
+    ...(env.fakeMail ? mountRoutes(api, "/dev", devMailRoutes(ds)) : []),
   ];
   app.use("/api", api);
   app.use("/api", notFoundHandler);

@@ -22,7 +22,10 @@ export function createPassport(ds: DataSource, bcryptCost: number): passport.Pas
         .then(async (user) => {
           const ok = await verifyPassword(password, user?.passwordHash ?? (await dummyHash(bcryptCost)));
           if (!user || !ok) return done(null, false, { message: WRONG_CREDENTIALS });
-          if (!user.active) return done(null, false, { message: "This account has been deactivated. Ask your admin to reactivate it." });
+          if (!user.active)
+            return done(null, false, {
+              message: "This account has been deactivated. Ask your admin to reactivate it.",
+            });
           return done(null, toPublicUser(user));
         })
         .catch(done);

@@ -1,10 +1,7 @@
 import type { Role } from "./roles.js";
 
 /** Who may call a route. Every route declares one; the route table refuses a route without. */
-export type Policy =
-  | { kind: "public" }
-  | { kind: "signed-in" }
-  | { kind: "roles"; roles: readonly Role[] };
+export type Policy = { kind: "public" } | { kind: "signed-in" } | { kind: "roles"; roles: readonly Role[] };
 
 export const policy = {
   public: { kind: "public" } as Policy,

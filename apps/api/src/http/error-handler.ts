@@ -13,16 +13,23 @@ export const notFoundHandler: RequestHandler = (req, _res, next) => {
 /** Registered last. Express 5 forwards rejected promises here by itself. */
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   let status = 500;
-  let body: ErrorBody = { error: { code: "internal", message: "Something went wrong on our side. Please try again." } };
+  let body: ErrorBody = {
+    error: { code: "internal", message: "Something went wrong on our side. Please try again." },
+  };
   if (err instanceof HttpError) {
     status = err.status;
-    body = { error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) } };
+    body = {
+      error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) },
+    };
   } else if (isBodyParserError(err)) {
     status = err.status;
     body = {
       error: {
         code: err.type === "entity.too.large" ? "payload_too_large" : "bad_request",
-        message: err.type === "entity.too.large" ? "The request body is too large." : "The request body is not valid JSON.",
+        message:
+          err.type === "entity.too.large"
+            ? "The request body is too large."
+            : "The request body is not valid JSON.",
       },
     };
   } else {

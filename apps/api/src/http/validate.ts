@@ -7,7 +7,11 @@ export function parseBody<S extends z.ZodType>(schema: S, value: unknown): z.inf
   if (!result.success) {
     const issues = result.error.issues.map((i) => ({ field: i.path.join("."), message: i.message }));
     const first = issues[0];
-    const message = first ? (first.field ? `${first.field}: ${first.message}` : first.message) : "Invalid request.";
+    const message = first
+      ? first.field
+        ? `${first.field}: ${first.message}`
+        : first.message
+      : "Invalid request.";
     throw new ValidationError(message, { issues });
   }
   return result.data;

@@ -1,4 +1,12 @@
 import { CreateUsersAndSessions1764626400000 } from "./1764626400000-create-users-and-sessions.js";
+import { CreateStudiesDatasetsAnalyses1764630000000 } from "./1764630000000-create-studies-datasets-analyses.js";
+import { CreateAuditEvents1764633600000 } from "./1764633600000-create-audit-events.js";
+import { CreateReviewMailPeople1764637200000 } from "./1764637200000-create-review-mail-people.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
-export const migrations = [CreateUsersAndSessions1764626400000];
+export const migrations = [
+  CreateUsersAndSessions1764626400000,
+  CreateStudiesDatasetsAnalyses1764630000000,
+  CreateAuditEvents1764633600000,
+  CreateReviewMailPeople1764637200000,
+];

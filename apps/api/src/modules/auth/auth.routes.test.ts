@@ -8,23 +8,34 @@ beforeAll(async () => {
   app = await makeTestApp();
 });
 
-const errorShape = expect.objectContaining({ error: { code: expect.any(String), message: expect.any(String) } });
+const errorShape = expect.objectContaining({
+  error: { code: expect.any(String), message: expect.any(String) },
+});
 
 describe("POST /api/auth/login", () => {
-  it.each(DEMO_USERS)("signs in the demo $role and sets an httpOnly SameSite=Lax cookie", async ({ email, role }) => {
-    const res = await request(app.app).post("/api/auth/login").send({ email, password: app.env.demoPassword });
-    expect(res.status).toBe(200);
-    expect(res.body.user).toMatchObject({ email, role, active: true });
-    expect(res.body.user.passwordHash).toBeUndefined();
-    const cookie = String(res.headers["set-cookie"]);
-    expect(cookie).toMatch(/waymark\.sid=/);
-    expect(cookie).toMatch(/HttpOnly/);
-    expect(cookie).toMatch(/SameSite=Lax/);
-  });
+  it.each(DEMO_USERS)(
+    "signs in the demo $role and sets an httpOnly SameSite=Lax cookie",
+    async ({ email, role }) => {
+      const res = await request(app.app)
+        .post("/api/auth/login")
+        .send({ email, password: app.env.demoPassword });
+      expect(res.status).toBe(200);
+      expect(res.body.user).toMatchObject({ email, role, active: true });
+      expect(res.body.user.passwordHash).toBeUndefined();
+      const cookie = String(res.headers["set-cookie"]);
+      expect(cookie).toMatch(/waymark\.sid=/);
+      expect(cookie).toMatch(/HttpOnly/);
+      expect(cookie).toMatch(/SameSite=Lax/);
+    },
+  );
 
   it("gives 401 for a wrong password, with the same message as for an unknown e-mail", async () => {
-    const wrong = await request(app.app).post("/api/auth/login").send({ email: "analyst@waymark.test", password: "nope" });
-    const unknown = await request(app.app).post("/api/auth/login").send({ email: "nobody@waymark.test", password: "nope" });
+    const wrong = await request(app.app)
+      .post("/api/auth/login")
+      .send({ email: "analyst@waymark.test", password: "nope" });
+    const unknown = await request(app.app)
+      .post("/api/auth/login")
+      .send({ email: "nobody@waymark.test", password: "nope" });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(errorShape);
@@ -49,7 +60,10 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
 
   it("returns the user while signed in and 401 after logout", async () => {
     const agent = request.agent(app.app);
-    await agent.post("/api/auth/login").send({ email: "reviewer@waymark.test", password: app.env.demoPassword }).expect(200);
+    await agent
+      .post("/api/auth/login")
+      .send({ email: "reviewer@waymark.test", password: app.env.demoPassword })
+      .expect(200);
     const me = await agent.get("/api/auth/me").expect(200);
     expect(me.body.user.role).toBe("reviewer");
     await agent.post("/api/auth/logout").expect(204);
@@ -58,7 +72,10 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
 
   it("ends the session when the account is deactivated", async () => {
     const agent = request.agent(app.app);
-    await agent.post("/api/auth/login").send({ email: "writer@waymark.test", password: app.env.demoPassword }).expect(200);
+    await agent
+      .post("/api/auth/login")
+      .send({ email: "writer@waymark.test", password: app.env.demoPassword })
+      .expect(200);
     await app.ds.query(`UPDATE users SET active = 0 WHERE email = 'writer@waymark.test'`);
     await agent.get("/api/auth/me").expect(401);
     await app.ds.query(`UPDATE users SET active = 1 WHERE email = 'writer@waymark.test'`);

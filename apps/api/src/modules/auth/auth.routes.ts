@@ -6,6 +6,7 @@ import { WRONG_CREDENTIALS } from "../../auth/passport.js";
 import { HttpError } from "../../http/errors.js";
 import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
+import { recordAudit } from "../audit/audit.service.js";
 import { User } from "../users/user.entity.js";
 import { loginSchema } from "./auth.schema.js";
 
@@ -14,19 +15,41 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSp
     req.body = parseBody(loginSchema, req.body);
     pp.authenticate("local", (err: unknown, user: Express.User | false, info?: { message?: string }) => {
       if (err) return next(err);
-      if (!user) return next(new HttpError(401, "invalid_credentials", info?.message ?? WRONG_CREDENTIALS));
+      if (!user) {
+        const email = (req.body as { email: string }).email;
+        recordAudit(
+          ds,
+          { user: { id: null, email }, ip: req.ip ?? null },
+          { action: "auth.sign-in-failed", summary: `Failed sign-in for ${email}` },
+        )
+          .then(() => next(new HttpError(401, "invalid_credentials", info?.message ?? WRONG_CREDENTIALS)))
+          .catch(next);
+        return;
+      }
       // passport 0.7 regenerates the session id on login, which defeats session fixation.
       req.logIn(user, (e) => {
         if (e) return next(e);
         ds.getRepository(User)
           .update({ id: user.id }, { lastSignInAt: new Date() })
+          .then(() =>
+            recordAudit(
+              ds,
+              { user, ip: req.ip ?? null },
+              { action: "auth.sign-in", summary: `Signed in as ${user.role}` },
+            ),
+          )
           .then(() => res.json({ user }))
           .catch(next);
       });
     })(req, res, next);
   };
 
-  const logout: RequestHandler = (req, res, next) => {
+  const logout: RequestHandler = async (req, res, next) => {
+    await recordAudit(
+      ds,
+      { user: req.user!, ip: req.ip ?? null },
+      { action: "auth.sign-out", summary: "Signed out" },
+    );
     req.logout((err) => {
       if (err) return next(err);
       req.session.destroy(() => {
@@ -41,7 +64,13 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSp
   };
 
   return [
-    { method: "post", path: "/login", policy: policy.public, handlers: [login], summary: "Sign in with e-mail and password" },
+    {
+      method: "post",
+      path: "/login",
+      policy: policy.public,
+      handlers: [login],
+      summary: "Sign in with e-mail and password",
+    },
     { method: "post", path: "/logout", policy: policy.signedIn, handlers: [logout], summary: "Sign out" },
     { method: "get", path: "/me", policy: policy.signedIn, handlers: [me], summary: "The signed-in user" },
   ];

@@ -15,7 +15,11 @@ export function configRoutes(env: Env): RouteSpec[] {
         (_req, res) =>
           void res.json(
             env.WAYMARK_DEMO
-              ? { demo: true, demoPassword: env.demoPassword, demoAccounts: DEMO_USERS.map(({ email, role }) => ({ email, role })) }
+              ? {
+                  demo: true,
+                  demoPassword: env.demoPassword,
+                  demoAccounts: DEMO_USERS.map(({ email, role }) => ({ email, role })),
+                }
               : { demo: false },
           ),
       ],

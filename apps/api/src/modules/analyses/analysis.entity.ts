@@ -1,0 +1,50 @@
+import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
+import { DATETIME } from "../../db/column-types.js";
+import { User } from "../users/user.entity.js";
+
+/** A stored run of the locked plan on one dataset version by one engine version. Never updated. */
+@Entity({ name: "analyses" })
+export class Analysis {
+  @PrimaryGeneratedColumn("increment")
+  id: number;
+
+  @Column("integer", { name: "study_id" })
+  studyId: number;
+
+  @Column("integer", { name: "dataset_id" })
+  datasetId: number;
+
+  @Column("varchar", { name: "engine_version", length: 20 })
+  engineVersion: string;
+
+  @Column("varchar", { name: "recommended_test", length: 20 })
+  recommendedTest: string;
+
+  @Column("varchar", { name: "chosen_test", length: 20 })
+  chosenTest: string;
+
+  @Column("varchar", { name: "posthoc_method", length: 80 })
+  posthocMethod: string;
+
+  @Column("text", { name: "override_justification", nullable: true })
+  overrideJustification: string | null;
+
+  /** The plan as it was locked, copied so the analysis stands on its own. */
+  @Column("simple-json", { name: "plan_snapshot" })
+  planSnapshot: unknown;
+
+  @Column("simple-json")
+  result: unknown;
+
+  @Column("simple-json")
+  summary: string[];
+
+  @Column("integer", { name: "created_by_id" })
+  createdById: number;
+
+  @ManyToOne(() => User, { eager: true })
+  createdBy: Relation<User>;
+
+  @CreateDateColumn({ name: "created_at", type: DATETIME })
+  createdAt: Date;
+}

@@ -1,0 +1,144 @@
+import { createHash, randomBytes } from "node:crypto";
+import { IsNull, type DataSource } from "typeorm";
+import { hashPassword } from "../../auth/password.js";
+import { passwordProblem } from "../../auth/password-policy.js";
+import type { Role } from "../../auth/roles.js";
+import type { Actor } from "../../http/actor.js";
+import { ConflictError, HttpError } from "../../http/errors.js";
+import { recordAudit } from "../audit/audit.service.js";
+import { invitationMessage } from "../mail/messages.js";
+import { enqueueMail } from "../mail/outbox.js";
+import { toPublicUser, User, type PublicUser } from "../users/user.entity.js";
+import { Invitation } from "./invitation.entity.js";
+
+export const INVITATION_HOURS = 72;
+
+export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
+
+export type InvitationState = "open" | "used" | "expired" | "revoked";
+
+export function stateOf(i: Invitation, now = Date.now()): InvitationState {
+  if (i.usedAt) return "used";
+  if (i.revokedAt) return "revoked";
+  if (new Date(i.expiresAt).getTime() <= now) return "expired";
+  return "open";
+}
+
+/** Invites a person with a role; re-inviting the same address revokes the earlier link. */
+export async function invite(
+  ds: DataSource,
+  actor: Actor,
+  input: { email: string; role: Role },
+  baseUrl: string,
+): Promise<Invitation> {
+  const email = input.email.toLowerCase();
+  if (
+    await ds
+      .getRepository(User)
+      .createQueryBuilder("u")
+      .where("lower(u.email) = :email", { email })
+      .getExists()
+  ) {
+    throw new ConflictError(`${email} already has an account.`);
+  }
+  const token = randomBytes(32).toString("base64url");
+  const id = await ds.transaction(async (tx) => {
+    const repo = tx.getRepository(Invitation);
+    await repo.update({ email, usedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() });
+    const saved = await repo.save(
+      repo.create({
+        email,
+        role: input.role,
+        tokenHash: hashToken(token),
+        expiresAt: new Date(Date.now() + INVITATION_HOURS * 3600_000),
+        invitedById: actor.user.id,
+        usedAt: null,
+        revokedAt: null,
+      }),
+    );
+    await recordAudit(tx, actor, {
+      action: "invitation.sent",
+      summary: `Invited ${email} as ${input.role}`,
+      after: { email, role: input.role, invitationId: saved.id },
+    });
+    await enqueueMail(tx, invitationMessage(email, input.role, actor.user, `${baseUrl}/invite/${token}`));
+    return saved.id;
+  });
+  return ds.getRepository(Invitation).findOneByOrFail({ id });
+}
+
+/** Looks up an invitation by its token, with a message for each way it may no longer work. */
+export async function findByToken(ds: DataSource, token: string): Promise<Invitation> {
+  const inv = await ds.getRepository(Invitation).findOneBy({ tokenHash: hashToken(token) });
+  if (!inv)
+    throw new HttpError(
+      404,
+      "invitation_not_found",
+      "This invitation link is not valid. Ask your admin for a new one.",
+    );
+  const state = stateOf(inv);
+  if (state === "used")
+    throw new HttpError(
+      410,
+      "invitation_used",
+      "This invitation has already been used. Sign in with the account it created.",
+    );
+  if (state === "revoked")
+    throw new HttpError(
+      410,
+      "invitation_revoked",
+      "This invitation was replaced by a newer one. Use the link in the latest e-mail.",
+    );
+  if (state === "expired")
+    throw new HttpError(
+      410,
+      "invitation_expired",
+      `This invitation expired (links last ${INVITATION_HOURS} hours). Ask your admin to invite you again.`,
+    );
+  return inv;
+}
+
+/** Creates the invited account and marks the token used, in one transaction. */
+export async function acceptInvitation(
+  ds: DataSource,
+  token: string,
+  input: { displayName: string; password: string },
+  cost: number,
+  ip: string | null,
+): Promise<PublicUser> {
+  const inv = await findByToken(ds, token);
+  const problem = passwordProblem(input.password, [inv.email, input.displayName]);
+  if (problem) throw new HttpError(400, "weak_password", `password: ${problem}`);
+  const passwordHash = await hashPassword(input.password, cost);
+  return ds.transaction(async (tx) => {
+    // Re-check inside the transaction so two tabs cannot both use one token.
+    const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
+    if (stateOf(fresh) !== "open")
+      throw new HttpError(410, "invitation_used", "This invitation has already been used.");
+    const saved = await tx
+      .getRepository(User)
+      .save(
+        tx
+          .getRepository(User)
+          .create({
+            email: inv.email,
+            displayName: input.displayName,
+            role: inv.role,
+            passwordHash,
+            active: true,
+          }),
+      );
+    await tx.getRepository(Invitation).update({ id: inv.id }, { usedAt: new Date() });
+    const user = toPublicUser(saved);
+    await recordAudit(
+      tx,
+      { user, ip },
+      {
+        action: "invitation.accepted",
+        summary: `Accepted the invitation as ${inv.role}`,
+        after: { userId: user.id, role: inv.role },
+      },
+    );
+    return user;
+  });
+}

@@ -1,0 +1,111 @@
+import type { Study } from "../studies/study.entity.js";
+import type { MailContent } from "./outbox.js";
+
+interface Person {
+  email: string;
+  displayName: string;
+}
+
+const escapeHtml = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+
+/** Plain text plus simple HTML, with the product's name and no tracking. */
+function compose(
+  to: Person,
+  subject: string,
+  paragraphs: string[],
+  link: { href: string; label: string },
+): MailContent {
+  const text = [
+    `Hello ${to.displayName},`,
+    "",
+    ...paragraphs.flatMap((p) => [p, ""]),
+    `${link.label}: ${link.href}`,
+    "",
+    "— Waymark",
+  ].join("\n");
+  const html = [
+    `<div style="font-family:sans-serif;color:#1e2a32;max-width:560px">`,
+    `<p>Hello ${escapeHtml(to.displayName)},</p>`,
+    ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
+    `<p><a href="${escapeHtml(link.href)}" style="color:#1f4d45;font-weight:600">${escapeHtml(link.label)}</a></p>`,
+    `<p style="color:#4a5862">— Waymark</p></div>`,
+  ].join("");
+  return { to: to.email, subject: `Waymark: ${subject}`, text, html };
+}
+
+export function invitationMessage(email: string, role: string, inviter: Person, link: string): MailContent {
+  return compose(
+    { email, displayName: "there" },
+    `${inviter.displayName} invited you as ${role}`,
+    [
+      `${inviter.displayName} invited you to join your team's Waymark as ${role}.`,
+      "The link below works once and expires in 72 hours.",
+    ],
+    { href: link, label: "Accept the invitation" },
+  );
+}
+
+export function reviewRequestedMessage(
+  reviewer: Person,
+  study: Study,
+  analyst: Person,
+  baseUrl: string,
+): MailContent {
+  return compose(
+    reviewer,
+    `review requested for "${study.title}"`,
+    [`${analyst.displayName} submitted "${study.title}" for review.`],
+    {
+      href: `${baseUrl}/reviews/${study.id}`,
+      label: "Open the review",
+    },
+  );
+}
+
+export function changesRequestedMessage(
+  analyst: Person,
+  study: Study,
+  reviewer: Person,
+  comment: string,
+  baseUrl: string,
+): MailContent {
+  return compose(
+    analyst,
+    `changes requested on "${study.title}"`,
+    [`${reviewer.displayName} sent "${study.title}" back with this comment:`, comment],
+    {
+      href: `${baseUrl}/studies/${study.id}`,
+      label: "Open the study",
+    },
+  );
+}
+
+export function approvedMessage(
+  analyst: Person,
+  study: Study,
+  reviewer: Person,
+  baseUrl: string,
+): MailContent {
+  return compose(
+    analyst,
+    `"${study.title}" was approved`,
+    [`${reviewer.displayName} approved "${study.title}" with an electronic signature.`],
+    {
+      href: `${baseUrl}/studies/${study.id}`,
+      label: "Open the study",
+    },
+  );
+}
+
+export function reportReadyMessage(writer: Person, study: Study, baseUrl: string): MailContent {
+  return compose(
+    writer,
+    `report ready for "${study.title}"`,
+    [`"${study.title}" was approved; its methods-and-results section can now be downloaded.`],
+    {
+      href: `${baseUrl}/reports/${study.id}`,
+      label: "Open the report",
+    },
+  );
+}

@@ -1,0 +1,68 @@
+import type { DataSource, EntityManager } from "typeorm";
+import { z } from "zod";
+import { policy } from "../../auth/policy.js";
+import { actorOf } from "../../http/actor.js";
+import type { RouteSpec } from "../../http/route-table.js";
+import { parseBody } from "../../http/validate.js";
+import { recordAudit } from "../audit/audit.service.js";
+import { alphaSchema } from "../studies/study.schema.js";
+import { OrganizationSettings } from "./organization-settings.entity.js";
+
+const settingsSchema = z
+  .object({
+    policy: z.enum(["classic-first", "welch-first"]),
+    defaultAlpha: alphaSchema,
+    defaultAdjust: z.enum(["holm", "bonferroni", "bh"]),
+    paperSize: z.enum(["A4", "Letter"]),
+  })
+  .partial()
+  .strict();
+
+export async function loadSettings(db: DataSource | EntityManager): Promise<OrganizationSettings> {
+  return db.getRepository(OrganizationSettings).findOneByOrFail({ id: 1 });
+}
+
+const present = (s: OrganizationSettings) => ({
+  policy: s.policy,
+  defaultAlpha: s.defaultAlpha,
+  defaultAdjust: s.defaultAdjust,
+  paperSize: s.paperSize,
+  updatedAt: s.updatedAt,
+});
+
+export function organizationRoutes(ds: DataSource): RouteSpec[] {
+  return [
+    {
+      method: "get",
+      path: "/settings",
+      policy: policy.signedIn,
+      summary: "The organization's test policy and defaults",
+      handlers: [async (_req, res) => void res.json({ settings: present(await loadSettings(ds)) })],
+    },
+    {
+      method: "put",
+      path: "/settings",
+      policy: policy.roles("admin"),
+      summary: "Set the test policy, default α and adjustment, paper size",
+      handlers: [
+        async (req, res) => {
+          const body = parseBody(settingsSchema, req.body);
+          const saved = await ds.transaction(async (tx) => {
+            const s = await loadSettings(tx);
+            const before = present(s);
+            Object.assign(s, body);
+            await tx.getRepository(OrganizationSettings).save(s);
+            await recordAudit(tx, actorOf(req), {
+              action: "organization.settings-changed",
+              summary: `Changed ${Object.keys(body).join(", ")}`,
+              before,
+              after: body,
+            });
+            return s;
+          });
+          res.json({ settings: present(saved) });
+        },
+      ],
+    },
+  ];
+}

@@ -1,0 +1,31 @@
+import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
+import { DATETIME } from "../../db/column-types.js";
+import { User } from "../users/user.entity.js";
+
+export const REVIEW_STEPS = ["design", "plan", "data", "checks", "choice", "results"] as const;
+export type ReviewStep = (typeof REVIEW_STEPS)[number];
+
+@Entity({ name: "review_comments" })
+export class ReviewComment {
+  @PrimaryGeneratedColumn("increment")
+  id: number;
+
+  @Column("integer", { name: "round_id" })
+  roundId: number;
+
+  /** The step of the study the comment is about, or null for the study as a whole. */
+  @Column("varchar", { length: 20, nullable: true })
+  step: ReviewStep | null;
+
+  @Column("text")
+  body: string;
+
+  @Column("integer", { name: "author_id" })
+  authorId: number;
+
+  @ManyToOne(() => User, { eager: true })
+  author: Relation<User>;
+
+  @CreateDateColumn({ name: "created_at", type: DATETIME })
+  createdAt: Date;
+}

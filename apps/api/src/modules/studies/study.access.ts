@@ -1,0 +1,31 @@
+import type { DataSource, EntityManager } from "typeorm";
+import { ConflictError, ForbiddenError, NotFoundError } from "../../http/errors.js";
+import { Study } from "./study.entity.js";
+
+type Db = DataSource | EntityManager;
+
+/** Loads a study the caller may read: analysts their own, other roles any. */
+export async function loadReadableStudy(db: Db, id: number, user: Express.User): Promise<Study> {
+  const study = Number.isInteger(id) && id > 0 ? await db.getRepository(Study).findOneBy({ id }) : null;
+  if (!study) throw new NotFoundError(`There is no study ${id}.`);
+  if (user.role === "analyst" && study.ownerId !== user.id)
+    throw new ForbiddenError("This study belongs to another analyst.");
+  return study;
+}
+
+/** Loads a study the caller may change: only its owning analyst, and only while it is a draft. */
+export async function loadEditableStudy(db: Db, id: number, user: Express.User): Promise<Study> {
+  const study = await loadReadableStudy(db, id, user);
+  if (study.ownerId !== user.id) throw new ForbiddenError("Only the study's own analyst can change it.");
+  if (study.status !== "draft")
+    throw new ConflictError(`The study is ${study.status.replace("_", " ")}; it can change only as a draft.`);
+  return study;
+}
+
+export function requireUnlockedPlan(study: Study): void {
+  if (study.planLockedAt) {
+    throw new ConflictError(
+      `The plan was locked on ${study.planLockedAt.toISOString()}; the design, plan, levels and α can no longer change.`,
+    );
+  }
+}

@@ -1,0 +1,50 @@
+import type { Dataset } from "../datasets/dataset.entity.js";
+import { presentDataset } from "../datasets/dataset.presenter.js";
+import { missingDesignAnswer, outOfScopeReason } from "./design.js";
+import { comparisonsOf, matchedPosthoc, plannedTest } from "./plan.js";
+import type { Study } from "./study.entity.js";
+
+const person = (u: { id: number; displayName: string } | null | undefined) =>
+  u ? { id: u.id, displayName: u.displayName } : null;
+
+/** The study as the API sends it, with what the web app needs to draw the trail of steps. */
+export function presentStudy(
+  s: Study,
+  extras: { datasetCount: number; latestDataset: Dataset | null; latestAnalysisId: number | null },
+) {
+  const test = plannedTest(s.plan, s.design);
+  const comparisons = comparisonsOf(s.design);
+  return {
+    id: s.id,
+    title: s.title,
+    objective: s.objective,
+    outcomeName: s.outcomeName,
+    outcomeUnit: s.outcomeUnit,
+    factorName: s.factorName,
+    levels: s.levels,
+    controlLevel: s.controlLevel,
+    alpha: s.alpha,
+    context: s.context,
+    status: s.status,
+    owner: person(s.owner),
+    createdAt: s.createdAt,
+    updatedAt: s.updatedAt,
+    design: s.design,
+    designComplete: missingDesignAnswer(s.design, !!s.controlLevel) === null && !outOfScopeReason(s.design),
+    designBlocker: missingDesignAnswer(s.design, !!s.controlLevel),
+    outOfScope: outOfScopeReason(s.design),
+    plan: {
+      ...s.plan,
+      plannedTest: test,
+      plannedPosthoc: matchedPosthoc(test, comparisons),
+      comparisons,
+      lockedAt: s.planLockedAt,
+      lockedBy: person(s.planLockedBy),
+    },
+    datasetCount: extras.datasetCount,
+    latestDataset: extras.latestDataset ? presentDataset(extras.latestDataset, s) : null,
+    latestAnalysisId: extras.latestAnalysisId,
+  };
+}
+
+export type StudyDto = ReturnType<typeof presentStudy>;

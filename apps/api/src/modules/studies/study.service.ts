@@ -1,0 +1,182 @@
+import { anovaSampleSize } from "@waymark/stats";
+import type { DataSource } from "typeorm";
+import type { z } from "zod";
+import type { Actor } from "../../http/actor.js";
+import { ConflictError, HttpError } from "../../http/errors.js";
+import { Analysis } from "../analyses/analysis.entity.js";
+import { recordAudit } from "../audit/audit.service.js";
+import { Dataset } from "../datasets/dataset.entity.js";
+import { missingDesignAnswer, outOfScopeReason, type DesignAnswers } from "./design.js";
+import { DEFAULT_PLAN, type PlanSettings } from "./plan.js";
+import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
+import { Study } from "./study.entity.js";
+import { presentStudy } from "./study.presenter.js";
+import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
+
+export async function studyDto(ds: DataSource, study: Study) {
+  const datasets = ds.getRepository(Dataset);
+  const [datasetCount, latestDataset, latestAnalysis] = await Promise.all([
+    datasets.countBy({ studyId: study.id }),
+    datasets.findOne({ where: { studyId: study.id }, order: { version: "DESC" } }),
+    ds
+      .getRepository(Analysis)
+      .findOne({ where: { studyId: study.id }, order: { id: "DESC" }, select: { id: true } }),
+  ]);
+  return presentStudy(study, { datasetCount, latestDataset, latestAnalysisId: latestAnalysis?.id ?? null });
+}
+
+/** Re-reads a study with its relations after a write. */
+const reload = (ds: DataSource, id: number) => ds.getRepository(Study).findOneByOrFail({ id });
+
+export async function createStudy(
+  ds: DataSource,
+  actor: Actor,
+  input: z.infer<typeof createStudySchema>,
+  defaults: Partial<PlanSettings> = {},
+): Promise<Study> {
+  const plan: PlanSettings = {
+    ...DEFAULT_PLAN,
+    ...defaults,
+    ...(input.alpha !== undefined ? { alpha: input.alpha } : {}),
+  };
+  const id = await ds.transaction(async (tx) => {
+    const repo = tx.getRepository(Study);
+    const saved = await repo.save(
+      repo.create({
+        ...input,
+        controlLevel: input.controlLevel ?? null,
+        alpha: plan.alpha,
+        status: "draft",
+        ownerId: actor.user.id,
+        design: {},
+        plan,
+        planLockedAt: null,
+        planLockedById: null,
+      }),
+    );
+    await recordAudit(tx, actor, {
+      action: "study.created",
+      studyId: saved.id,
+      summary: `Created study "${saved.title}"`,
+      after: { levels: saved.levels, alpha: saved.alpha },
+    });
+    return saved.id;
+  });
+  return reload(ds, id);
+}
+
+export async function updateStudy(
+  ds: DataSource,
+  actor: Actor,
+  id: number,
+  input: z.infer<typeof updateStudySchema>,
+): Promise<Study> {
+  await ds.transaction(async (tx) => {
+    const study = await loadEditableStudy(tx, id, actor.user);
+    const touchesPlan =
+      input.levels !== undefined || input.alpha !== undefined || input.controlLevel !== undefined;
+    if (touchesPlan) requireUnlockedPlan(study);
+    const levels = input.levels ?? study.levels;
+    const control = input.controlLevel === undefined ? study.controlLevel : input.controlLevel;
+    if (control && !levels.includes(control))
+      throw new HttpError(400, "validation_failed", "controlLevel: The control must be one of the levels");
+    const before = Object.fromEntries(Object.keys(input).map((k) => [k, study[k as keyof Study]]));
+    Object.assign(study, input, { controlLevel: control ?? null });
+    if (input.alpha !== undefined) study.plan = { ...study.plan, alpha: input.alpha };
+    await tx.getRepository(Study).save(study);
+    await recordAudit(tx, actor, {
+      action: "study.updated",
+      studyId: id,
+      summary: `Edited ${Object.keys(input).join(", ")}`,
+      before,
+      after: input,
+    });
+  });
+  return reload(ds, id);
+}
+
+export async function saveDesign(
+  ds: DataSource,
+  actor: Actor,
+  id: number,
+  answers: DesignAnswers,
+): Promise<Study> {
+  await ds.transaction(async (tx) => {
+    const study = await loadEditableStudy(tx, id, actor.user);
+    requireUnlockedPlan(study);
+    const before = study.design;
+    study.design = { ...study.design, ...answers };
+    await tx.getRepository(Study).save(study);
+    await recordAudit(tx, actor, {
+      action: "study.design-saved",
+      studyId: id,
+      summary: `Answered ${Object.keys(answers).join(", ")}`,
+      before,
+      after: study.design,
+    });
+  });
+  return reload(ds, id);
+}
+
+export async function savePlan(
+  ds: DataSource,
+  actor: Actor,
+  id: number,
+  input: z.infer<typeof planSchema>,
+): Promise<Study> {
+  await ds.transaction(async (tx) => {
+    const study = await loadEditableStudy(tx, id, actor.user);
+    requireUnlockedPlan(study);
+    const before = study.plan;
+    const next: PlanSettings = { ...study.plan, ...input, power: study.plan.power };
+    if (input.power === null) next.power = null;
+    else if (input.power) {
+      const size = anovaSampleSize({
+        k: study.levels.length,
+        f: input.power.effectF,
+        alpha: next.alpha,
+        power: input.power.targetPower,
+      });
+      next.power = {
+        effectF: input.power.effectF,
+        targetPower: input.power.targetPower,
+        nPerGroup: size.nPerGroup,
+        achievedPower: size.power,
+      };
+    }
+    study.plan = next;
+    study.alpha = next.alpha;
+    await tx.getRepository(Study).save(study);
+    await recordAudit(tx, actor, {
+      action: "study.plan-saved",
+      studyId: id,
+      summary: "Saved the analysis plan",
+      before,
+      after: next,
+    });
+  });
+  return reload(ds, id);
+}
+
+/** Freezes the plan with a timestamp so reviewers can see it came before the data. */
+export async function lockPlan(ds: DataSource, actor: Actor, id: number): Promise<Study> {
+  await ds.transaction(async (tx) => {
+    const study = await loadEditableStudy(tx, id, actor.user);
+    if (study.planLockedAt)
+      throw new ConflictError(`The plan is already locked (since ${study.planLockedAt.toISOString()}).`);
+    const outOfScope = outOfScopeReason(study.design);
+    if (outOfScope) throw new HttpError(422, "out_of_scope", outOfScope);
+    const missing = missingDesignAnswer(study.design, !!study.controlLevel);
+    if (missing) throw new HttpError(422, "design_incomplete", `The plan cannot be locked yet: ${missing}`);
+    study.planLockedAt = new Date();
+    study.planLockedById = actor.user.id;
+    await tx.getRepository(Study).save(study);
+    await recordAudit(tx, actor, {
+      action: "study.plan-locked",
+      studyId: id,
+      summary: "Locked the analysis plan",
+      after: { ...study.plan, design: study.design },
+    });
+  });
+  return reload(ds, id);
+}
