@@ -20,6 +20,7 @@ import { devMailRoutes } from "./modules/mail/dev-mail.routes.js";
 import type { MailDispatcher } from "./modules/mail/mail-dispatcher.js";
 import { organizationRoutes } from "./modules/organization/organization.routes.js";
 import { powerRoutes } from "./modules/power/power.routes.js";
+import { reportRoutes } from "./modules/reports/report.routes.js";
 import { reviewQueueRoutes, studyReviewRoutes } from "./modules/reviews/review.routes.js";
 import { TypeormSessionStore } from "./modules/sessions/typeorm-session-store.js";
 import { studyRoutes } from "./modules/studies/study.routes.js";
@@ -87,6 +88,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
     ...mountRoutes(api, "/studies", datasetRoutes(ds, env)),
     ...mountRoutes(api, "/studies", analysisRoutes(ds)),
     ...mountRoutes(api, "/studies", studyReviewRoutes(ds, env)),
+    ...mountRoutes(api, "/studies", reportRoutes(ds)),
     ...mountRoutes(api, "/reviews", reviewQueueRoutes(ds)),
     ...mountRoutes(api, "/power", powerRoutes()),
     ...mountRoutes(api, "/audit", auditRoutes(ds)),

@@ -115,19 +115,15 @@ export async function acceptInvitation(
     const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
     if (stateOf(fresh) !== "open")
       throw new HttpError(410, "invitation_used", "This invitation has already been used.");
-    const saved = await tx
-      .getRepository(User)
-      .save(
-        tx
-          .getRepository(User)
-          .create({
-            email: inv.email,
-            displayName: input.displayName,
-            role: inv.role,
-            passwordHash,
-            active: true,
-          }),
-      );
+    const saved = await tx.getRepository(User).save(
+      tx.getRepository(User).create({
+        email: inv.email,
+        displayName: input.displayName,
+        role: inv.role,
+        passwordHash,
+        active: true,
+      }),
+    );
     await tx.getRepository(Invitation).update({ id: inv.id }, { usedAt: new Date() });
     const user = toPublicUser(saved);
     await recordAudit(

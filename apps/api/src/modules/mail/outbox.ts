@@ -13,14 +13,12 @@ export interface MailContent {
  * because of, the mail server. The dispatcher sends it and retries on failure.
  */
 export async function enqueueMail(tx: EntityManager, m: MailContent): Promise<void> {
-  await tx
-    .getRepository(OutboxMessage)
-    .insert({
-      ...m,
-      status: "pending",
-      attempts: 0,
-      nextAttemptAt: new Date(),
-      lastError: null,
-      sentAt: null,
-    });
+  await tx.getRepository(OutboxMessage).insert({
+    ...m,
+    status: "pending",
+    attempts: 0,
+    nextAttemptAt: new Date(),
+    lastError: null,
+    sentAt: null,
+  });
 }

@@ -161,12 +161,10 @@ export function reviewQueueRoutes(ds: DataSource): RouteSpec[] {
               const round = await ds
                 .getRepository(ReviewRound)
                 .findOneOrFail({ where: { studyId: s.id }, order: { round: "DESC" } });
-              const analysis = await ds
-                .getRepository(Analysis)
-                .findOneOrFail({
-                  where: { id: round.analysisId },
-                  select: { id: true, recommendedTest: true, chosenTest: true, overrideJustification: true },
-                });
+              const analysis = await ds.getRepository(Analysis).findOneOrFail({
+                where: { id: round.analysisId },
+                select: { id: true, recommendedTest: true, chosenTest: true, overrideJustification: true },
+              });
               return {
                 studyId: s.id,
                 title: s.title,

@@ -66,19 +66,15 @@ export async function submitForReview(
     const last = await tx
       .getRepository(ReviewRound)
       .findOne({ where: { studyId }, order: { round: "DESC" } });
-    const round = await tx
-      .getRepository(ReviewRound)
-      .save(
-        tx
-          .getRepository(ReviewRound)
-          .create({
-            studyId,
-            round: (last?.round ?? 0) + 1,
-            analysisId: analysis.id,
-            datasetId: analysis.datasetId,
-            submittedById: actor.user.id,
-          }),
-      );
+    const round = await tx.getRepository(ReviewRound).save(
+      tx.getRepository(ReviewRound).create({
+        studyId,
+        round: (last?.round ?? 0) + 1,
+        analysisId: analysis.id,
+        datasetId: analysis.datasetId,
+        submittedById: actor.user.id,
+      }),
+    );
     await tx.getRepository(Study).update({ id: studyId }, { status: "in_review" });
     await recordAudit(tx, actor, {
       action: "study.submitted",
@@ -151,17 +147,15 @@ export async function approve(
       );
     const dataset = await tx.getRepository(Dataset).findOneByOrFail({ id: analysis.datasetId });
     const hash = contentHash(approvalContent(study, analysis, dataset.sha256));
-    await tx
-      .getRepository(Signature)
-      .insert({
-        studyId,
-        roundId: round.id,
-        signerId: actor.user.id,
-        signerName: actor.user.displayName,
-        signerEmail: actor.user.email,
-        meaning: input.meaning,
-        contentHash: hash,
-      });
+    await tx.getRepository(Signature).insert({
+      studyId,
+      roundId: round.id,
+      signerId: actor.user.id,
+      signerName: actor.user.displayName,
+      signerEmail: actor.user.email,
+      meaning: input.meaning,
+      contentHash: hash,
+    });
     await tx
       .getRepository(ReviewRound)
       .update({ id: round.id }, { decision: "approved", decidedById: actor.user.id, decidedAt: new Date() });

@@ -1,0 +1,247 @@
+import {
+  checkReadings,
+  formatStat,
+  formatUnit,
+  omnibusSentence,
+  TEST_NAMES,
+  type ResultView,
+} from "@waymark/stats";
+import { comparisonsOf } from "../studies/plan.js";
+import { paragraph, type Block } from "./report-blocks.js";
+import type { ReportInput } from "./report-input.js";
+import { posthocTable } from "./posthoc-table.js";
+import { REFERENCES, type ReferenceKey } from "./references.js";
+
+const ASSIGNMENT: Record<string, string> = {
+  randomized: "Units were randomly assigned to the groups.",
+  convenience:
+    "Units were allocated to groups as they came (not randomized), so differences between groups may partly reflect how units were allocated.",
+  observational:
+    "Groups were observed as they occurred (no assignment), so differences cannot be attributed to the grouping factor alone.",
+  unsure: "How units were assigned to groups was not recorded.",
+};
+
+const ADJUST: Record<string, string> = {
+  holm: "Holm's step-down adjustment",
+  bonferroni: "the Bonferroni adjustment",
+  bh: "the Benjamini–Hochberg false-discovery-rate adjustment",
+};
+
+const CAUTION =
+  "This analysis supports, and does not replace, the judgement of a qualified statistician and the codes, regulations and licensed practice that apply to this work. Decisions that affect safety or health must rest on those, not on a p-value.";
+
+const date = (d: Date | string | null) =>
+  d ? new Date(d).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—";
+
+const list = (xs: string[]) =>
+  xs.length <= 1 ? (xs[0] ?? "") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`;
+
+/**
+ * Builds the methods-and-results section from stored records: the study, its locked plan and
+ * design answers, the dataset version, the stored analysis and the approval. Pure.
+ */
+export function buildReport(input: ReportInput): Block[] {
+  const { study, dataset, analysis, signature } = input;
+  const r = analysis.result as Omit<ResultView, "groups"> & { posthoc: Record<string, unknown>; groups: Record<string, unknown>[] };
+  const view = analysis.result as ResultView;
+  const chosen = analysis.chosenTest;
+  const vsControl = comparisonsOf(study.design) === "vs-control" && !!study.controlLevel;
+  const alpha = study.plan.alpha;
+  const unit = study.outcomeUnit;
+  const refs = new Set<ReferenceKey>(["shapiroWilk", "royston", "brownForsythe", "levene", "tukeyEda"]);
+  const blocks: Block[] = [];
+  const k = study.levels.length;
+
+  blocks.push({ type: "heading", level: 1, text: study.title });
+  if (input.draft)
+    blocks.push({
+      type: "caution",
+      text: "Draft — not approved. This section has not been signed off by a reviewer and must not be used as the analysis of record.",
+    });
+
+  // Methods
+  blocks.push({ type: "heading", level: 2, text: "Methods" });
+  blocks.push({ type: "heading", level: 3, text: "Design" });
+  const control =
+    study.controlLevel && study.design.hasControl === "yes"
+      ? ` ${study.controlLevel} served as the control group.`
+      : "";
+  blocks.push(
+    paragraph(
+      `The study compared ${study.outcomeName}${unit ? ` (${unit})` : ""} across k = ${k} independent groups defined by ${study.factorName.toLowerCase()}: ${list(study.levels)}.${control} ${ASSIGNMENT[study.design.assignment ?? "unsure"]} The outcome was treated as ${study.design.scale === "ordinal" ? "ordinal" : "continuous"}.`,
+      "methods",
+    ),
+  );
+  blocks.push({ type: "heading", level: 3, text: "Pre-specified plan" });
+  blocks.push(
+    paragraph(
+      `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy, ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"} and ${ADJUST[study.plan.adjust]} for rank-based comparisons.` +
+        (study.plan.power
+          ? ` The planned sample size was ${study.plan.power.nPerGroup} per group, for power ${formatUnit(study.plan.power.achievedPower)} to detect an effect of Cohen's f = ${formatStat(study.plan.power.effectF)} with the one-way ANOVA F test.`
+          : ""),
+      "methods",
+    ),
+  );
+  if (study.plan.power) refs.add("cohen");
+  blocks.push({ type: "heading", level: 3, text: "Choice of test" });
+  const rule =
+    study.plan.policy === "welch-first"
+      ? "Under the welch-first policy, Welch's heteroscedastic ANOVA is the default omnibus test, because it keeps its error rate when group variances differ and loses little when they do not; the Kruskal–Wallis test replaces it for ordinal outcomes, clear non-normality in small groups, or extreme outliers."
+      : "Under the classic-first policy, classic one-way ANOVA is the default omnibus test; Welch's ANOVA replaces it when the spread differs between groups (Brown–Forsythe p < α, or the largest SD more than twice the smallest), and the Kruskal–Wallis test replaces both for ordinal outcomes, clear non-normality in small groups, or extreme outliers.";
+  if (study.plan.policy === "welch-first") refs.add("delacre");
+  blocks.push(
+    paragraph(
+      `${rule} Normality was checked with Shapiro–Wilk tests within each group and on the pooled within-group residuals; equality of spread with the Brown–Forsythe (median-centred) and Levene (mean-centred) tests and the ratio of the largest to the smallest SD; outliers with Tukey's fences at 1.5 and 3 IQR and with studentized residuals beyond ±3.`,
+      "methods",
+    ),
+  );
+  const recommended = TEST_NAMES[analysis.recommendedTest] ?? analysis.recommendedTest;
+  const chosenName = TEST_NAMES[chosen] ?? chosen;
+  blocks.push(
+    paragraph(
+      `Reasons recorded for the recommendation (${recommended}): ${r.recommendation.reasons.join(" ")}`,
+      "methods",
+    ),
+  );
+  const posthocSentence: Record<string, string> = {
+    "Tukey–Kramer HSD":
+      "pairwise comparisons with the Tukey–Kramer honestly significant difference procedure, which controls the family-wise error rate with simultaneous 95% confidence intervals",
+    "Games–Howell":
+      "pairwise comparisons with the Games–Howell procedure, which does not assume equal variances and gives simultaneous 95% confidence intervals",
+    Dunn: `pairwise comparisons with Dunn's test on mean ranks (two-sided, tie-corrected), with ${ADJUST[study.plan.adjust]}`,
+    Dunnett: `comparisons of each group with the control by Dunnett's procedure, with simultaneous 95% confidence intervals`,
+    "Welch t-tests against the control, Holm-adjusted":
+      "Welch t-tests of each group against the control with Holm's adjustment",
+    "Dunn against the control": `Dunn's test of each group against the control with ${ADJUST[study.plan.adjust]}`,
+  };
+  blocks.push(
+    paragraph(
+      `The omnibus test was ${chosenName}, followed by ${posthocSentence[analysis.posthocMethod] ?? analysis.posthocMethod}. Effect sizes are reported with each result.`,
+      "methods",
+    ),
+  );
+  if (chosen === "anova") (["fisher", "hays"] as const).forEach((x) => refs.add(x));
+  if (chosen === "welch") (["welch", "hays"] as const).forEach((x) => refs.add(x));
+  if (chosen === "kruskal-wallis") (["kruskal", "tomczak"] as const).forEach((x) => refs.add(x));
+  const m = analysis.posthocMethod;
+  if (m === "Tukey–Kramer HSD") (["tukey", "kramer", "hedges"] as const).forEach((x) => refs.add(x));
+  if (m === "Games–Howell") (["gamesHowell", "hedges"] as const).forEach((x) => refs.add(x));
+  if (m === "Dunnett") (["dunnett", "hedges"] as const).forEach((x) => refs.add(x));
+  if (m.startsWith("Welch t-tests")) (["welch", "holm"] as const).forEach((x) => refs.add(x));
+  if (m.startsWith("Dunn") && !m.startsWith("Dunnett")) {
+    refs.add("dunn");
+    if (study.plan.adjust === "holm") refs.add("holm");
+    if (study.plan.adjust === "bh") refs.add("bh");
+  }
+  if (r.anova && "etaSquaredCi" in (r.anova as object)) refs.add("steiger");
+
+  blocks.push({ type: "heading", level: 3, text: "Data and missing values" });
+  const rep = dataset.report;
+  const reasons = new Map<string, number>();
+  for (const e of rep.excluded) reasons.set(e.reason, (reasons.get(e.reason) ?? 0) + 1);
+  const why = [...reasons].map(([reason, n]) => `${n} ${reason.replace("-", " ")}`).join(", ");
+  blocks.push(
+    paragraph(
+      `The data file (${dataset.fileName}, SHA-256 ${dataset.sha256}) held ${rep.rowsRead} rows; ${rep.rowsUsed} values were analysed` +
+        (rep.excludedCount > 0
+          ? ` and ${rep.excludedCount} row${rep.excludedCount === 1 ? " was" : "s were"} excluded (${why}).`
+          : "; no rows were excluded.") +
+        ` Analyses were run with Waymark ${input.appVersion} (statistics engine ${analysis.engineVersion}).`,
+      "methods",
+    ),
+  );
+
+  // Results
+  blocks.push({ type: "heading", level: 2, text: "Results" });
+  const g = (x: unknown, d = 2) => (typeof x === "number" && Number.isFinite(x) ? formatStat(x, d) : "—");
+  blocks.push({
+    type: "table",
+    caption: `Table 1. ${study.outcomeName}${unit ? ` (${unit})` : ""} by ${study.factorName.toLowerCase()}`,
+    header: ["Group", "n", "Mean", "SD", "95% CI of the mean", "Median", "IQR"],
+    rows: r.groups.map((x) => [
+      String(x.name),
+      String(x.n),
+      g(x.mean),
+      g(x.sd),
+      typeof x.ciLower === "number" && typeof x.ciUpper === "number"
+        ? `[${g(x.ciLower)}, ${g(x.ciUpper)}]`
+        : "—",
+      g(x.median),
+      typeof x.q1 === "number" && typeof x.q3 === "number" ? `${g(x.q1)}–${g(x.q3)}` : "—",
+    ]),
+  });
+  blocks.push({ type: "heading", level: 3, text: "Assumption checks" });
+  for (const reading of checkReadings(view)) blocks.push(paragraph(reading.text, "results"));
+  blocks.push({ type: "heading", level: 3, text: "Omnibus test" });
+  const omni = omnibusSentence(view, chosen);
+  blocks.push(paragraph(`${chosenName[0]!.toUpperCase()}${chosenName.slice(1)}: ${omni}.`, "results"));
+  for (const line of analysis.summary) blocks.push(paragraph(line, "results"));
+  if (analysis.overrideJustification) {
+    blocks.push(
+      paragraph(
+        `The analyst chose ${chosenName} instead of the recommended ${recommended}, with this justification: “${analysis.overrideJustification}”`,
+        "results",
+      ),
+    );
+  }
+  blocks.push({ type: "heading", level: 3, text: "Post-hoc comparisons" });
+  const table = posthocTable(r.posthoc ?? {}, chosen, vsControl, unit);
+  if ("reason" in table)
+    blocks.push(paragraph(`The post-hoc comparisons could not be computed: ${table.reason}.`, "results"));
+  else
+    blocks.push({
+      type: "table",
+      caption: `Table 2. ${analysis.posthocMethod}`,
+      header: table.header,
+      rows: table.rows,
+    });
+  blocks.push({
+    type: "figure",
+    figure: "groups",
+    caption: `Figure 1. ${study.outcomeName} in each group: box (quartiles and median) with every value shown.`,
+  });
+  if (chosen !== "kruskal-wallis" && !("reason" in table)) {
+    blocks.push({
+      type: "figure",
+      figure: "intervals",
+      caption: `Figure 2. Differences between group means with simultaneous 95% confidence intervals (${analysis.posthocMethod}); intervals that cross zero show no clear difference.`,
+    });
+  }
+  const fwer = r as unknown as { familyWiseError?: { m?: number; fwerIndependent?: number } };
+  if (
+    typeof fwer.familyWiseError?.m === "number" &&
+    typeof fwer.familyWiseError.fwerIndependent === "number"
+  ) {
+    blocks.push(
+      paragraph(
+        `With m = ${fwer.familyWiseError.m} comparisons, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwer.familyWiseError.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
+        "results",
+      ),
+    );
+  }
+
+  if (study.context !== "general") blocks.push({ type: "caution", text: CAUTION });
+
+  blocks.push({ type: "heading", level: 2, text: "Sign-off" });
+  blocks.push(
+    paragraph(
+      signature
+        ? `Approved by ${signature.signerName} on ${date(signature.signedAt)} with the signature “${signature.meaning}” (content hash ${signature.contentHash.slice(0, 16)}…).`
+        : "Not approved: no reviewer has signed this analysis.",
+      "sign-off",
+    ),
+  );
+  blocks.push(
+    paragraph(
+      `Generated by Waymark ${input.appVersion} on ${date(input.generatedAt)} from analysis ${analysis.id} of study ${study.id}.`,
+      "sign-off",
+    ),
+  );
+
+  blocks.push({ type: "heading", level: 2, text: "References" });
+  blocks.push({
+    type: "references",
+    items: [...refs].map((k) => REFERENCES[k]).sort((a, b) => a.localeCompare(b)),
+  });
+  return blocks;
+}
