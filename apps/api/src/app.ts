@@ -6,6 +6,7 @@ import session from "express-session";
 import helmet from "helmet";
 import type { DataSource } from "typeorm";
 import { createPassport } from "./auth/passport.js";
+import { absoluteSessionLimit } from "./auth/session-limit.js";
 import type { Env } from "./config/env.js";
 import { errorHandler, notFoundHandler } from "./http/error-handler.js";
 import { mountRoutes, type MountedRoute } from "./http/route-table.js";
@@ -27,7 +28,6 @@ import { studyRoutes } from "./modules/studies/study.routes.js";
 import { userRoutes } from "./modules/users/user.routes.js";
 
 export const SESSION_COOKIE = "waymark.sid";
-const SESSION_MAX_AGE_MS = 8 * 60 * 60 * 1000;
 
 export interface AppServices {
   mail: MailDispatcher;
@@ -67,11 +67,13 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: SESSION_MAX_AGE_MS },
+      // Idle timeout: the cookie and the stored session expire after SESSION_IDLE_MINUTES without a request.
+      cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
     }),
   );
   const pp = createPassport(ds, env.BCRYPT_COST);
   app.use(pp.initialize());
+  app.use(absoluteSessionLimit(env.SESSION_MAX_HOURS));
   app.use(pp.session());
   // Mail queued by a request goes out right after it, without the request waiting for it.
   app.use((req, res, next) => {
@@ -83,7 +85,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   const routes = [
     ...mountRoutes(api, "/health", healthRoutes()),
     ...mountRoutes(api, "/config", configRoutes(env)),
-    ...mountRoutes(api, "/auth", authRoutes(pp, ds)),
+    ...mountRoutes(api, "/auth", authRoutes(pp, ds, env)),
     ...mountRoutes(api, "/studies", studyRoutes(ds)),
     ...mountRoutes(api, "/studies", datasetRoutes(ds, env)),
     ...mountRoutes(api, "/studies", analysisRoutes(ds)),

@@ -1,6 +1,7 @@
 import "reflect-metadata";
 import { createApp } from "./app.js";
 import { startServices } from "./bootstrap.js";
+import { closeTaskPool } from "./workers/task-pool.js";
 import { loadEnv } from "./config/env.js";
 import { openDatabase } from "./db/data-source.js";
 import { seedDemoStudies } from "./db/seeds/demo-studies.js";
@@ -30,6 +31,7 @@ async function main(): Promise<void> {
     server.close(() => {
       void services
         .stop()
+        .then(() => closeTaskPool())
         .then(() => ds.destroy())
         .finally(() => process.exit(0));
     });

@@ -25,7 +25,13 @@ const schema = z.object({
   MAIL_FROM: z.string().default("Waymark <no-reply@waymark.test>"),
   /** The address people use to reach Waymark, for links in e-mail. */
   PUBLIC_URL: z.string().url().optional(),
+  SIGNIN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(10),
+  SIGNIN_LIMIT_PER_IP: z.coerce.number().int().min(1).default(50),
+  SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).default(120),
+  SESSION_MAX_HOURS: z.coerce.number().int().min(1).default(12),
   UPLOAD_LIMIT_MB: z.coerce.number().positive().max(1024).default(50),
+  /** Set by npm to the folder the command was typed in; scripts resolve file arguments against it. */
+  INIT_CWD: z.string().optional(),
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),
 });
 

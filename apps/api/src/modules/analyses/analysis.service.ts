@@ -9,6 +9,7 @@ import {
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";
+import { runTask } from "../../workers/task-pool.js";
 import { recordAudit } from "../audit/audit.service.js";
 import type { Dataset } from "../datasets/dataset.entity.js";
 import { loadDatasetForAnalysis } from "../datasets/dataset.service.js";
@@ -19,23 +20,18 @@ import { Analysis } from "./analysis.entity.js";
 import { analysisOptions } from "./analysis-options.js";
 import { MIN_JUSTIFICATION } from "./analysis.schema.js";
 
-function runEngine(study: Study, dataset: Dataset) {
-  const rowsByGroup = new Map(dataset.observations.groups.map((g) => [g.name, g.rows]));
-  try {
-    const result = analyze({
-      groups: dataset.observations.groups.map((g) => ({ name: g.name, values: g.values, rows: g.rows })),
-      options: analysisOptions(study),
-    });
-    return { result, rowsByGroup };
-  } catch (e) {
-    if (e instanceof StatsInputError) throw new HttpError(422, "cannot_analyse", e.message);
-    throw e;
-  }
+/** Runs the engine on a stored dataset under the study's plan, off the request thread. */
+async function runEngine(study: Study, dataset: Dataset) {
+  const { result } = await runTask("analyzeTask", {
+    groups: dataset.observations.groups.map((g) => ({ name: g.name, values: g.values, rows: g.rows })),
+    options: analysisOptions(study),
+  });
+  return { result };
 }
 
 /** Checks and recommendation for a dataset under the study's plan; computed, not stored. */
-export function runChecks(study: Study, dataset: Dataset) {
-  const { result } = runEngine(study, dataset);
+export async function runChecks(study: Study, dataset: Dataset) {
+  const { result } = await runEngine(study, dataset);
   return { checks: result, readings: checkReadings(result as unknown as ResultView) };
 }
 
@@ -54,7 +50,7 @@ export async function runAnalysis(
   if (!study.planLockedAt)
     throw new HttpError(409, "plan_not_locked", "Lock the analysis plan before running the analysis.");
   const dataset = await loadDatasetForAnalysis(ds, study.id, input.datasetId);
-  const { result } = runEngine(study, dataset);
+  const { result } = await runEngine(study, dataset);
   const recommended = result.recommendation.test;
   if (recommended === "out-of-scope")
     throw new HttpError(

@@ -2,6 +2,8 @@ import type { RequestHandler } from "express";
 import type passport from "passport";
 import type { DataSource } from "typeorm";
 import { policy } from "../../auth/policy.js";
+import { signInThrottle } from "../../auth/sign-in-throttle.js";
+import type { Env } from "../../config/env.js";
 import { WRONG_CREDENTIALS } from "../../auth/passport.js";
 import { HttpError } from "../../http/errors.js";
 import type { RouteSpec } from "../../http/route-table.js";
@@ -10,7 +12,11 @@ import { recordAudit } from "../audit/audit.service.js";
 import { User } from "../users/user.entity.js";
 import { loginSchema } from "./auth.schema.js";
 
-export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSpec[] {
+export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env): RouteSpec[] {
+  const throttle = signInThrottle({
+    perAccount: env.SIGNIN_LIMIT_PER_ACCOUNT,
+    perIp: env.SIGNIN_LIMIT_PER_IP,
+  });
   const login: RequestHandler = (req, res, next) => {
     req.body = parseBody(loginSchema, req.body);
     pp.authenticate("local", (err: unknown, user: Express.User | false, info?: { message?: string }) => {
@@ -29,6 +35,7 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSp
       // passport 0.7 regenerates the session id on login, which defeats session fixation.
       req.logIn(user, (e) => {
         if (e) return next(e);
+        (req.session as unknown as { startedAt: number }).startedAt = Date.now();
         ds.getRepository(User)
           .update({ id: user.id }, { lastSignInAt: new Date() })
           .then(() =>
@@ -68,7 +75,7 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource): RouteSp
       method: "post",
       path: "/login",
       policy: policy.public,
-      handlers: [login],
+      handlers: [...throttle, login],
       summary: "Sign in with e-mail and password",
     },
     { method: "post", path: "/logout", policy: policy.signedIn, handlers: [logout], summary: "Sign out" },

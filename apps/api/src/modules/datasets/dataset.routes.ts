@@ -75,7 +75,7 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
         async (req, res) => {
           const study = await loadReadableStudy(ds, Number(req.params.id), req.user!);
           const dataset = await loadDatasetForAnalysis(ds, study.id, Number(req.params.datasetId));
-          res.json({ datasetId: dataset.id, ...runChecks(study, dataset) });
+          res.json({ datasetId: dataset.id, ...(await runChecks(study, dataset)) });
         },
       ],
     },

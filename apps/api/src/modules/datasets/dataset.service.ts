@@ -6,8 +6,8 @@ import { recordAudit } from "../audit/audit.service.js";
 import { loadEditableStudy } from "../studies/study.access.js";
 import type { Study } from "../studies/study.entity.js";
 import { Dataset } from "./dataset.entity.js";
-import { extractGroups, guessColumns, type ColumnChoice } from "./extract-groups.js";
-import { parseUpload } from "./parse-upload.js";
+import { runTask } from "../../workers/task-pool.js";
+import { guessColumns, type ColumnChoice } from "./extract-groups.js";
 import { safeFileName } from "./upload-middleware.js";
 
 export interface UploadedFile {
@@ -18,13 +18,16 @@ export interface UploadedFile {
 }
 
 export async function previewUpload(file: UploadedFile, study: Study) {
-  const table = await parseUpload(safeFileName(file.originalname), file.buffer);
+  const table = await runTask("previewTask", {
+    fileName: safeFileName(file.originalname),
+    bytes: file.buffer,
+  });
   return {
     columns: table.columns,
-    rows: table.rows.slice(0, 8).map((r) => r.cells),
-    rowCount: table.rows.length,
+    rows: table.head.slice(0, 8).map((r) => r.cells),
+    rowCount: table.rowCount,
     format: table.format,
-    guess: guessColumns(table, study.levels),
+    guess: guessColumns({ columns: table.columns, rows: table.head, format: table.format }, study.levels),
   };
 }
 
@@ -49,8 +52,13 @@ export async function storeDataset(
       "Lock the analysis plan before uploading data, so the plan is seen to come first.",
     );
   const fileName = safeFileName(file.originalname);
-  const table = await parseUpload(fileName, file.buffer);
-  const { data, report } = extractGroups(table, choice, study.levels);
+  // Parsing a large file is CPU work: it runs off the request thread.
+  const { data, report, format } = await runTask("extractTask", {
+    fileName,
+    bytes: file.buffer,
+    choice,
+    levels: study.levels,
+  });
   if (!report.usable) {
     throw new HttpError(
       422,
@@ -74,7 +82,7 @@ export async function storeDataset(
       sizeBytes: file.size,
       sha256,
       mediaType:
-        table.format === "xlsx"
+        format === "xlsx"
           ? "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
           : "text/csv",
       content: file.buffer,

@@ -42,7 +42,10 @@ const list = (xs: string[]) =>
  */
 export function buildReport(input: ReportInput): Block[] {
   const { study, dataset, analysis, signature } = input;
-  const r = analysis.result as Omit<ResultView, "groups"> & { posthoc: Record<string, unknown>; groups: Record<string, unknown>[] };
+  const r = analysis.result as Omit<ResultView, "groups"> & {
+    posthoc: Record<string, unknown>;
+    groups: Record<string, unknown>[];
+  };
   const view = analysis.result as ResultView;
   const chosen = analysis.chosenTest;
   const vsControl = comparisonsOf(study.design) === "vs-control" && !!study.controlLevel;

@@ -17,10 +17,20 @@ let studies: { id: number; title: string; latestAnalysisId: number }[];
 async function readDocx(buf: Buffer) {
   const zip = await JSZip.loadAsync(buf);
   const xml = await zip.file("word/document.xml")!.async("string");
-  const headers = await Promise.all(Object.keys(zip.files).filter((f) => /^word\/header\d*\.xml$/.test(f)).map((f) => zip.file(f)!.async("string")));
+  const headers = await Promise.all(
+    Object.keys(zip.files)
+      .filter((f) => /^word\/header\d*\.xml$/.test(f))
+      .map((f) => zip.file(f)!.async("string")),
+  );
   const text = (x: string) => [...x.matchAll(/<w:t(?: [^>]*)?>([^<]*)<\/w:t>/g)].map((m) => m[1]).join("");
   const paragraphs = xml.split("</w:p>").map(text).filter(Boolean);
-  return { xml, text: paragraphs.join("\n"), headers: headers.map(text).join("\n"), media: Object.keys(zip.files).filter((f) => f.startsWith("word/media/")), fonts: Object.keys(zip.files).filter((f) => f.startsWith("word/fonts/")) };
+  return {
+    xml,
+    text: paragraphs.join("\n"),
+    headers: headers.map(text).join("\n"),
+    media: Object.keys(zip.files).filter((f) => f.startsWith("word/media/")),
+    fonts: Object.keys(zip.files).filter((f) => f.startsWith("word/fonts/")),
+  };
 }
 
 const binary = (res: request.Response, cb: (e: Error | null, b: Buffer) => void) => {
@@ -49,7 +59,11 @@ describe("report rules", () => {
   });
 
   it("gives the analyst a draft marked as not approved on every page", async () => {
-    const res = await analyst.get(`/api/studies/${studies[0]!.id}/report.docx?draft=1`).buffer(true).parse(binary).expect(200);
+    const res = await analyst
+      .get(`/api/studies/${studies[0]!.id}/report.docx?draft=1`)
+      .buffer(true)
+      .parse(binary)
+      .expect(200);
     const doc = await readDocx(res.body as Buffer);
     expect(doc.headers).toMatch(/NOT APPROVED/);
     expect(doc.text).toMatch(/Draft — not approved/);
@@ -60,26 +74,48 @@ describe("approved reports of the three demo studies", () => {
   it("hold the stored numbers, the methods' references, the figures and the sign-off", async () => {
     for (const s of studies) {
       await analyst.post(`/api/studies/${s.id}/submit`).send({}).expect(200);
-      await reviewer.post(`/api/studies/${s.id}/approve`).send({ password: t.env.demoPassword, meaning: "Approved as the analysis of record" }).expect(200);
-      const analysis = (await writer.get(`/api/studies/${s.id}/analyses/${s.latestAnalysisId}`).expect(200)).body.analysis;
+      await reviewer
+        .post(`/api/studies/${s.id}/approve`)
+        .send({ password: t.env.demoPassword, meaning: "Approved as the analysis of record" })
+        .expect(200);
+      const analysis = (await writer.get(`/api/studies/${s.id}/analyses/${s.latestAnalysisId}`).expect(200))
+        .body.analysis;
       const res = await writer.get(`/api/studies/${s.id}/report.docx`).buffer(true).parse(binary).expect(200);
       const doc = await readDocx(res.body as Buffer);
-      for (const h of ["Methods", "Results", "Sign-off", "References", "Assumption checks", "Post-hoc comparisons"]) expect(doc.text).toContain(h);
+      for (const h of [
+        "Methods",
+        "Results",
+        "Sign-off",
+        "References",
+        "Assumption checks",
+        "Post-hoc comparisons",
+      ])
+        expect(doc.text).toContain(h);
       expect(doc.text).not.toMatch(/NaN|undefined|\[object|Infinity/);
       expect(doc.media.length).toBeGreaterThanOrEqual(1);
       expect(doc.fonts.length).toBeGreaterThanOrEqual(1);
       expect(doc.text).toContain(analysis.result.data ? `${s.title}` : s.title);
       // The omnibus statistic in the text is the stored one.
       const r = analysis.result;
-      const stat = analysis.chosenTest === "anova" ? r.anova.F : analysis.chosenTest === "welch" ? r.welch.F : r.kruskalWallis.H;
+      const stat =
+        analysis.chosenTest === "anova"
+          ? r.anova.F
+          : analysis.chosenTest === "welch"
+            ? r.welch.F
+            : r.kruskalWallis.H;
       expect(doc.text).toContain(formatStat(stat).replace("-", "\u2212"));
       // Each group's mean in Table 1 is the stored mean.
       for (const g of r.groups) expect(doc.text).toContain(formatStat(g.mean));
       // References match the methods used, and only those.
-      const chosenRef = { anova: REFERENCES.fisher, welch: REFERENCES.welch, "kruskal-wallis": REFERENCES.kruskal }[analysis.chosenTest as "anova" | "welch" | "kruskal-wallis"];
+      const chosenRef = {
+        anova: REFERENCES.fisher,
+        welch: REFERENCES.welch,
+        "kruskal-wallis": REFERENCES.kruskal,
+      }[analysis.chosenTest as "anova" | "welch" | "kruskal-wallis"];
       expect(doc.text).toContain(chosenRef);
       if (analysis.chosenTest !== "kruskal-wallis") expect(doc.text).not.toContain(REFERENCES.kruskal);
-      if (analysis.chosenTest !== "welch" && !analysis.posthocMethod.startsWith("Welch")) expect(doc.text).not.toContain(REFERENCES.welch);
+      if (analysis.chosenTest !== "welch" && !analysis.posthocMethod.startsWith("Welch"))
+        expect(doc.text).not.toContain(REFERENCES.welch);
       expect(doc.text).toMatch(/Approved by Rui Takahashi/);
       expect(doc.headers).not.toMatch(/NOT APPROVED/);
     }
@@ -89,8 +125,15 @@ describe("approved reports of the three demo studies", () => {
 
   it("shows the same content in the HTML preview", async () => {
     const res = await writer.get(`/api/studies/${studies[0]!.id}/report/preview`).expect(200);
-    const headings = res.body.report.blocks.filter((b: { type: string }) => b.type === "heading").map((b: { text: string }) => b.text);
+    const headings = res.body.report.blocks
+      .filter((b: { type: string }) => b.type === "heading")
+      .map((b: { text: string }) => b.text);
     expect(headings).toEqual(expect.arrayContaining(["Methods", "Results", "Sign-off", "References"]));
-    expect(res.body.report.blocks.some((b: { type: string; image?: string }) => b.type === "figure" && b.image?.startsWith("data:image/png;base64,"))).toBe(true);
+    expect(
+      res.body.report.blocks.some(
+        (b: { type: string; image?: string }) =>
+          b.type === "figure" && b.image?.startsWith("data:image/png;base64,"),
+      ),
+    ).toBe(true);
   });
 });
