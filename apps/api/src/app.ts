@@ -104,7 +104,8 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
 
   serveWebApp(app, env.WEB_DIST);
   app.use(errorHandler);
-  return { app, routes, sessionStore };
+  // The table records full paths, as a client sees them.
+  return { app, routes: routes.map((r) => ({ ...r, path: `/api${r.path}` })), sessionStore };
 }
 
 /** Serves the built web app (one port for both) with the SPA fallback, when a build exists. */

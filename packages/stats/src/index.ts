@@ -49,3 +49,11 @@ export * from "./distributions/index.js";
 export { formatDf, formatP, formatPercent, formatStat, formatUnit } from "./reporting/format.js";
 export { checkReadings, omnibusSentence, resultSummary, TEST_NAMES, type Reading } from "./reporting/readings.js";
 export type { ResultView } from "./reporting/result-view.js";
+
+// Effect sizes (η² interval, Hedges' g, rank-biserial r).
+export * from "./effect-sizes/index.js";
+
+// Post-hoc comparisons and planning (power, sample size, family-wise error).
+export * from "./posthoc/index.js";
+export * from "./planning/index.js";
+export { DUNN_MAX_TOTAL } from "./posthoc-plan.js";

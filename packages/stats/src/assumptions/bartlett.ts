@@ -1,7 +1,7 @@
 import { chiSquareSf } from "../distributions/chi-square.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { requireGroupSizes } from "../numeric/require-group-sizes.js";
 
@@ -19,7 +19,7 @@ export interface BartlettResult {
  * with the pooled variance s²_p = Σ(nᵢ − 1)sᵢ²/(N − k); p from χ² with k − 1 df.
  * Reference: Bartlett, M. S. (1937). Properties of sufficiency and statistical tests.
  * Proc. R. Soc. A 160, 268–282.
- * Example: bartlett([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}]) → T = 0.6796…, p = 0.4097…
+ * Example: bartlett([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}]) → T = 0.7141, p = 0.3981
  * Cost: O(N). Integer input is fine: everything is computed in doubles.
  * Unavailable when a group has zero variance (its log variance is −∞); the reason names it.
  */
@@ -28,7 +28,7 @@ export function bartlett(input: SampleInput): BartlettResult | Unavailable {
   requireGroupSizes(sample, "Bartlett's test", 2);
   const k = sample.groups.length;
   const parts = sample.groups.map((g) => {
-    const m = centralMoments(g.centred);
+    const m = groupMoments(g);
     return { name: g.name, dof: m.n - 1, variance: m.ss / (m.n - 1) };
   });
   const constant = parts.filter((p) => p.variance === 0).map((p) => `'${p.name}'`);

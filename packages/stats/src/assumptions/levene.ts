@@ -1,6 +1,6 @@
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { requireGroupSizes } from "../numeric/require-group-sizes.js";
 import { sampleFromArrays } from "../numeric/sample-from-arrays.js";
@@ -24,7 +24,7 @@ export interface LeveneResult {
  * Brown–Forsythe variant, robust to skewed data.
  * References: Levene, H. (1960). In Contributions to Probability and Statistics (Olkin, ed.),
  * 278–292; Brown, M. B. & Forsythe, A. B. (1974). JASA 69, 364–367.
- * Example: levene([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}], "mean") → F = 1.6, p = 0.2746
+ * Example: levene([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}], "mean") → F = 0.8, p = 0.4216
  *   (deviations 1,0,1 vs 2,0,2).
  * Cost: O(N) plus the shared per-group sort for the median.
  * Unavailable when every deviation is zero within each group (e.g. all groups constant).
@@ -34,7 +34,7 @@ export function levene(input: SampleInput, center: "mean" | "median"): LeveneRes
   const name = center === "mean" ? "Levene's test" : "The Brown–Forsythe test";
   requireGroupSizes(sample, name, 2);
   const deviations = sample.groups.map((g) => {
-    const c = center === "mean" ? centralMoments(g.centred).mean : quantileSorted(sortedValues(g), 0.5);
+    const c = center === "mean" ? groupMoments(g).mean : quantileSorted(sortedValues(g), 0.5);
     const d = new Float64Array(g.centred.length);
     for (let i = 0; i < d.length; i++) d[i] = Math.abs((g.centred[i] as number) - c);
     return { name: g.name, values: d };

@@ -1,10 +1,11 @@
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { sortedValues } from "../numeric/sorted-values.js";
 import { toOriginal } from "../numeric/to-original.js";
 import { quantileSorted } from "../descriptives/quantile.js";
+import { quartilesOriginal } from "../descriptives/quartiles-original.js";
 
 /** Tukey's inner and outer fence multipliers (Tukey 1977, Exploratory Data Analysis). */
 export const MILD_FENCE_IQR = 1.5;
@@ -61,7 +62,7 @@ export interface OutlierReport {
  */
 export function outliers(input: SampleInput): OutlierReport | Unavailable {
   const sample = prepareSample(input);
-  const moments = sample.groups.map((g) => centralMoments(g.centred));
+  const moments = sample.groups.map((g) => groupMoments(g));
   let ssw = 0;
   let N = 0;
   for (const m of moments) {
@@ -85,12 +86,15 @@ export function outliers(input: SampleInput): OutlierReport | Unavailable {
     const lowExtreme = q1 - EXTREME_FENCE_IQR * iqr;
     const highExtreme = q3 + EXTREME_FENCE_IQR * iqr;
     const scale = msw > 0 && n > 1 ? Math.sqrt(msw * (1 - 1 / n)) : 0;
+    const quart = n > 0 ? quartilesOriginal(sample, sorted) : undefined;
+    const mildFences = quart?.fences(MILD_FENCE_IQR) ?? { lower: 0, upper: 0 };
+    const extremeFences = quart?.fences(EXTREME_FENCE_IQR) ?? { lower: 0, upper: 0 };
     const out: GroupOutliers = {
       group: g.name,
-      lowerFence: toOriginal(sample, lowMild),
-      upperFence: toOriginal(sample, highMild),
-      lowerExtremeFence: toOriginal(sample, lowExtreme),
-      upperExtremeFence: toOriginal(sample, highExtreme),
+      lowerFence: mildFences.lower,
+      upperFence: mildFences.upper,
+      lowerExtremeFence: extremeFences.lower,
+      upperExtremeFence: extremeFences.upper,
       mild: [],
       mildCount: 0,
       extreme: [],
@@ -98,21 +102,32 @@ export function outliers(input: SampleInput): OutlierReport | Unavailable {
       largeResidual: [],
       largeResidualCount: 0,
     };
+    const centred = g.centred;
+    const rows = g.rows;
+    const flag = (list: FlaggedValue[], i: number, r: number): void => {
+      if (list.length >= MAX_LISTED_OUTLIERS) return;
+      const item: FlaggedValue = { value: toOriginal(sample, centred[i] as number), row: rows?.[i] ?? i + 1 };
+      if (scale > 0) item.studentizedResidual = r;
+      list.push(item);
+    };
+    // Plain loop without per-value allocation: this runs over every value.
+    const limit = scale * STUDENTIZED_RESIDUAL_LIMIT;
     for (let i = 0; i < n; i++) {
-      const x = g.centred[i] as number;
-      const row = g.rows?.[i] ?? i + 1;
-      const r = scale > 0 ? (x - m.mean) / scale : 0;
-      const flagged = (): FlaggedValue => ({ value: toOriginal(sample, x), row, ...(scale > 0 ? { studentizedResidual: r } : {}) });
-      if (x < lowExtreme || x > highExtreme) {
-        out.extremeCount++;
-        if (out.extreme.length < MAX_LISTED_OUTLIERS) out.extreme.push(flagged());
-      } else if (x < lowMild || x > highMild) {
-        out.mildCount++;
-        if (out.mild.length < MAX_LISTED_OUTLIERS) out.mild.push(flagged());
+      const x = centred[i] as number;
+      if (x < lowMild || x > highMild) {
+        const r = scale > 0 ? (x - m.mean) / scale : 0;
+        if (x < lowExtreme || x > highExtreme) {
+          out.extremeCount++;
+          flag(out.extreme, i, r);
+        } else {
+          out.mildCount++;
+          flag(out.mild, i, r);
+        }
       }
-      if (Math.abs(r) > STUDENTIZED_RESIDUAL_LIMIT) {
+      const e = x - m.mean;
+      if (scale > 0 && (e > limit || e < -limit)) {
         out.largeResidualCount++;
-        if (out.largeResidual.length < MAX_LISTED_OUTLIERS) out.largeResidual.push(flagged());
+        flag(out.largeResidual, i, e / scale);
       }
     }
     totalMild += out.mildCount;

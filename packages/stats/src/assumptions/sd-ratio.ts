@@ -1,6 +1,6 @@
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 
 export interface SdRatio {
@@ -20,7 +20,7 @@ export interface SdRatio {
 export function sdRatio(input: SampleInput): SdRatio | Unavailable {
   const sample = prepareSample(input);
   const sds = sample.groups.map((g) => {
-    const m = centralMoments(g.centred);
+    const m = groupMoments(g);
     return { group: g.name, n: m.n, sd: m.n > 1 ? Math.sqrt(m.ss / (m.n - 1)) : NaN };
   });
   const short = sds.find((s) => s.n < 2);

@@ -2,11 +2,11 @@ import { StatsInputError } from "../errors.js";
 import { tQuantile } from "../distributions/t.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
+import { meanOriginal } from "../numeric/mean-original.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { sortedValues } from "../numeric/sorted-values.js";
-import { toOriginal } from "../numeric/to-original.js";
-import { quantileSorted } from "./quantile.js";
+import { quartilesOriginal } from "./quartiles-original.js";
 import { skewnessKurtosis } from "./skewness-kurtosis.js";
 
 /** Per-group descriptive statistics, in the original units. */
@@ -46,9 +46,9 @@ export function describeGroups(input: SampleInput, level = 0.95): GroupDescripti
   return sample.groups.map((g) => {
     const n = g.centred.length;
     if (n === 0) throw new StatsInputError(`Descriptive statistics need at least one value in every group; group '${g.name}' has 0`);
-    const m = centralMoments(g.centred);
+    const m = groupMoments(g);
     const sorted = sortedValues(g);
-    const mean = sample.offset + m.mean;
+    const mean = meanOriginal(sample, g.centred, m.mean);
     const shape = skewnessKurtosis(m);
     let sd: number | Unavailable;
     let se: number | Unavailable;
@@ -66,8 +66,7 @@ export function describeGroups(input: SampleInput, level = 0.95): GroupDescripti
       ciLower = sample.offset + (m.mean - t * e);
       ciUpper = sample.offset + (m.mean + t * e);
     }
-    const q1c = quantileSorted(sorted, 0.25);
-    const q3c = quantileSorted(sorted, 0.75);
+    const quart = quartilesOriginal(sample, sorted);
     return {
       name: g.name,
       n,
@@ -77,12 +76,12 @@ export function describeGroups(input: SampleInput, level = 0.95): GroupDescripti
       se,
       ciLower,
       ciUpper,
-      median: toOriginal(sample, quantileSorted(sorted, 0.5)),
-      q1: toOriginal(sample, q1c),
-      q3: toOriginal(sample, q3c),
-      iqr: q3c - q1c,
-      min: toOriginal(sample, sorted[0] as number),
-      max: toOriginal(sample, sorted[n - 1] as number),
+      median: quart.median,
+      q1: quart.q1,
+      q3: quart.q3,
+      iqr: quart.iqr,
+      min: quart.min,
+      max: quart.max,
       skewness: shape.skewness,
       kurtosis: shape.kurtosis,
     };

@@ -11,6 +11,11 @@ export interface CentredGroup {
   readonly rows: readonly number[] | undefined;
   /** Count of missing cells (null, empty, "NA", ...) that were dropped. */
   readonly missing: number;
+  /**
+   * When set, every centred value was computed as (integer)/integerDivisor, so the integers
+   * can be recovered exactly (round(value·divisor)) and sorted by counting.
+   */
+  readonly integerDivisor?: number;
 }
 
 /**

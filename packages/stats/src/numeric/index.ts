@@ -12,3 +12,6 @@ export * from "./require-group-sizes.js";
 export * from "./midranks.js";
 export * from "./sample-from-arrays.js";
 export * from "./pooled-residuals.js";
+export * from "./mean-original.js";
+export * from "./group-moments.js";
+export * from "./residual-order-statistics.js";

@@ -1,8 +1,8 @@
 import { StatsInputError } from "../errors.js";
 import type { CentredGroup, CentredSample, CentringMethod, SampleInput } from "./centred-sample.js";
-import { parseDecimal } from "./parse-decimal.js";
+import { parseDecimal, type DecimalParse } from "./parse-decimal.js";
 import { parseDecimalBig } from "./parse-decimal-big.js";
-import { powerOfTen } from "./powers-of-ten.js";
+import { POWERS_OF_TEN, powerOfTen } from "./powers-of-ten.js";
 import { shortDecimalOfNumber } from "./short-decimal-of-number.js";
 
 /** Beyond this spread of decimal exponents exact centring gains nothing and BigInts get long. */
@@ -75,32 +75,35 @@ export function prepareSample(input: SampleInput): CentredSample {
   let minExp = Infinity;
   let maxExp = -Infinity;
   let k = 0;
+  const scratch = { mantissa: 0, exponent: 0 };
+  const textScratch: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long: false };
 
   for (const g of groups) {
     let kept = 0;
     let missing = 0;
     const rows = g.rows ? ([] as number[]) : undefined;
-    g.values.forEach((v, position) => {
+    const values = g.values;
+    for (let position = 0; position < values.length; position++) {
+      const v = values[position];
       let mantissa = 0;
       let exponent = 0;
       let kind = SHORT;
       if (v === null || v === undefined || (typeof v === "number" && Number.isNaN(v))) {
         missing += 1;
-        return;
+        continue;
       }
       if (typeof v === "number") {
         if (!Number.isFinite(v)) {
           infiniteCount += 1;
           if (infinite.length < MAX_NAMED_PROBLEMS) infinite.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
-          return;
+          continue;
         }
-        const short = shortDecimalOfNumber(v);
-        if (short) {
-          mantissa = short.mantissa;
-          exponent = short.exponent;
+        if (shortDecimalOfNumber(v, scratch)) {
+          mantissa = scratch.mantissa;
+          exponent = scratch.exponent;
         } else {
           // Try the shortest text: fewer than 16 digits still means a decimal was intended.
-          const parsed = parseDecimal(String(v));
+          const parsed = parseDecimal(String(v), textScratch);
           if (parsed.kind === "number" && !parsed.long) {
             mantissa = parsed.mantissa;
             exponent = parsed.exponent;
@@ -110,17 +113,17 @@ export function prepareSample(input: SampleInput): CentredSample {
           }
         }
       } else if (typeof v === "string") {
-        const parsed = parseDecimal(v);
+        const parsed = parseDecimal(v, textScratch);
         if (parsed.kind === "missing") {
           missing += 1;
-          return;
+          continue;
         }
         if (parsed.kind === "not-numeric" || parsed.kind === "infinite") {
           const list = parsed.kind === "infinite" ? infinite : notNumeric;
           if (parsed.kind === "infinite") infiniteCount += 1;
           else notNumericCount += 1;
           if (list.length < MAX_NAMED_PROBLEMS) list.push({ group: g.name, position, row: g.rows?.[position], text: v.trim() });
-          return;
+          continue;
         }
         mantissa = parsed.mantissa;
         exponent = parsed.exponent;
@@ -128,7 +131,7 @@ export function prepareSample(input: SampleInput): CentredSample {
       } else {
         notNumericCount += 1;
         if (notNumeric.length < MAX_NAMED_PROBLEMS) notNumeric.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
-        return;
+        continue;
       }
       mantissas[k] = mantissa;
       exponents[k] = exponent;
@@ -142,7 +145,7 @@ export function prepareSample(input: SampleInput): CentredSample {
       if (rows) rows.push(g.rows?.[position] ?? position + 1);
       k += 1;
       kept += 1;
-    });
+    }
     sizes.push(kept);
     missingCounts.push(missing);
     keptRows.push(rows);
@@ -164,9 +167,12 @@ export function prepareSample(input: SampleInput): CentredSample {
   if (anyBinary || maxExp - minExp > MAX_EXPONENT_SPREAD || minExp < -300) method = "binary";
   else if (anyLong) method = "big-integer";
   else {
+    const P = POWERS_OF_TEN;
     for (let i = 0; i < k; i++) {
-      const scaled = Math.abs(mantissas[i] as number) * powerOfTen((exponents[i] as number) - minExp);
-      if (scaled >= 2 ** 53) {
+      const m = mantissas[i] as number;
+      if (m === 0) continue;
+      const shift = (exponents[i] as number) - minExp;
+      if (shift > 22 || Math.abs(m) * (P[shift] as number) >= 2 ** 53) {
         method = "big-integer";
         break;
       }
@@ -182,28 +188,39 @@ export function prepareSample(input: SampleInput): CentredSample {
   if (method === "scaled-integer") {
     const C = (mantissas[pick] ?? 0) * powerOfTen((exponents[pick] ?? 0) - E);
     offsetInteger = C;
-    if (E < 0 && -E <= 22) {
+    // Shifts are ≤ 22 here (checked above), so the table lookups are exact powers of ten.
+    const P = POWERS_OF_TEN;
+    if (E <= 0 && -E <= 22) {
       const p = powerOfTen(-E);
-      for (let i = 0; i < k; i++) centredAll[i] = ((mantissas[i] as number) * powerOfTen((exponents[i] as number) - E) - C) / p;
+      for (let i = 0; i < k; i++) {
+        const m = mantissas[i] as number;
+        centredAll[i] = (m === 0 ? -C : m * (P[(exponents[i] as number) - E] as number) - C) / p;
+      }
       offset = C / p;
     } else {
       const p = powerOfTen(E);
-      for (let i = 0; i < k; i++) centredAll[i] = ((mantissas[i] as number) * powerOfTen((exponents[i] as number) - E) - C) * p;
+      for (let i = 0; i < k; i++) {
+        const m = mantissas[i] as number;
+        centredAll[i] = (m === 0 ? -C : m * (P[(exponents[i] as number) - E] as number) - C) * p;
+      }
       offset = C * p;
     }
   } else if (method === "big-integer") {
+    // Exact mantissas first: a long mantissa's exponent differs from its truncated reading.
     const texts = flattenTexts(groups);
-    const big = (i: number): bigint => {
+    const exact: { mantissa: bigint; exponent: number }[] = [];
+    let e = Infinity;
+    for (let i = 0; i < k; i++) {
       const t = texts[i];
-      if (kinds[i] === LONG && t !== undefined) {
-        const b = parseDecimalBig(t);
-        return b.mantissa * 10n ** BigInt(b.exponent - E);
-      }
-      return BigInt(mantissas[i] as number) * 10n ** BigInt((exponents[i] as number) - E);
-    };
-    const C = big(pick);
-    for (let i = 0; i < k; i++) centredAll[i] = Number(`${big(i) - C}e${E}`);
-    offset = Number(`${C}e${E}`);
+      const b = kinds[i] === LONG && t !== undefined ? parseDecimalBig(t) : { mantissa: BigInt(mantissas[i] as number), exponent: exponents[i] as number };
+      exact.push(b);
+      if (b.mantissa !== 0n && b.exponent < e) e = b.exponent;
+    }
+    if (!Number.isFinite(e)) e = 0;
+    const scaled = exact.map((b) => (b.mantissa === 0n ? 0n : b.mantissa * 10n ** BigInt(b.exponent - e)));
+    const C = scaled[pick] ?? 0n;
+    for (let i = 0; i < k; i++) centredAll[i] = Number(`${(scaled[i] as bigint) - C}e${e}`);
+    offset = Number(`${C}e${e}`);
   } else {
     const value = (i: number): number => {
       if (kinds[i] === BINARY) return mantissas[i] as number;
@@ -213,11 +230,13 @@ export function prepareSample(input: SampleInput): CentredSample {
     for (let i = 0; i < k; i++) centredAll[i] = value(i) - offset;
   }
 
+  const integerDivisor = method === "scaled-integer" && E <= 0 && -E <= 22 ? powerOfTen(-E) : undefined;
   const out: CentredGroup[] = [];
   let start = 0;
   groups.forEach((g, gi) => {
     const n = sizes[gi] ?? 0;
-    out.push({ name: g.name, centred: centredAll.subarray(start, start + n), rows: keptRows[gi], missing: missingCounts[gi] ?? 0 });
+    const group: CentredGroup = { name: g.name, centred: centredAll.subarray(start, start + n), rows: keptRows[gi], missing: missingCounts[gi] ?? 0 };
+    out.push(integerDivisor !== undefined ? { ...group, integerDivisor } : group);
     start += n;
   });
   return { kind: "centred-sample", groups: out, offset, centring: method, scaleExponent: E, offsetInteger };

@@ -11,20 +11,30 @@ const MAX_FAST_MANTISSA = 0.01 * 2 ** 52;
  * Finds, without building a string, the decimal m·10^-s (smallest s ≤ 22, integer m) that a
  * double x stands for: the same decimal as its shortest round-trip text String(x), whenever
  * m is small enough for that decimal to be the only s-digit one that rounds to x.
- * Returns null when no such short decimal exists (then use String(x), or treat x as binary).
+ * Writes the decimal into `out` and returns true; returns false when no such short decimal
+ * exists (then use String(x), or treat x as binary). `out` is reused to avoid one
+ * allocation per value on the hot path.
  *
  * Formula: for s = 0, 1, …: m = round(x·10^s); accept when m / 10^s === x (an exact power of
  * ten and |m| < 2^53 make that division correctly rounded, Clinger 1990).
- * Example: shortDecimalOfNumber(1000000000000.4) → { mantissa: 10000000000004, exponent: -1 }.
+ * Example: shortDecimalOfNumber(1000000000000.4, out) → true, out = { mantissa: 10000000000004, exponent: -1 }.
  * Cost: at most 23 multiply-round-divide steps; typically s + 1 of them.
  */
-export function shortDecimalOfNumber(x: number): { mantissa: number; exponent: number } | null {
-  if (x === 0) return { mantissa: 0, exponent: 0 };
+export function shortDecimalOfNumber(x: number, out: { mantissa: number; exponent: number }): boolean {
+  if (x === 0) {
+    out.mantissa = 0;
+    out.exponent = 0;
+    return true;
+  }
   for (let s = 0; s <= 22; s++) {
     const p = POWERS_OF_TEN[s] as number;
     const m = Math.round(x * p);
-    if (Math.abs(m) > MAX_FAST_MANTISSA) return null;
-    if (m / p === x) return { mantissa: m, exponent: -s };
+    if (Math.abs(m) > MAX_FAST_MANTISSA) return false;
+    if (m / p === x) {
+      out.mantissa = m;
+      out.exponent = -s;
+      return true;
+    }
   }
-  return null;
+  return false;
 }

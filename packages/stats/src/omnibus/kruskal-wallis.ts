@@ -49,20 +49,23 @@ export interface KruskalWallisOptions {
  * References: Kruskal, W. H. & Wallis, W. A. (1952). JASA 47, 583–621; Tomczak, M. &
  * Tomczak, E. (2014). Trends in Sport Sciences 21, 19–25 (ε²).
  * Example: kruskalWallis([{name:"A",values:[1,2,3]},{name:"B",values:[4,5,6]}]) → H = 3.857…, p = 0.0495…
- * Cost: O(N·k) after the per-group sorts; the permutation adds O(B·N).
+ * Cost: O(N log k) after the per-group sorts; the permutation adds O(B·N).
  * Unavailable when all values are tied (C = 0).
  */
 export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions = {}): KruskalWallisResult | Unavailable {
   const sample = prepareSample(input);
   requireGroupSizes(sample, "The Kruskal–Wallis test", 1);
-  const { rankSums, tieSum, ranks, N } = midranks(sample);
+  const sizes = sample.groups.map((g) => g.centred.length);
   const k = sample.groups.length;
+  const Ntotal = sizes.reduce((a, b) => a + b, 0);
+  const small = Ntotal <= KW_PERMUTATION_MAX_TOTAL || Math.min(...sizes) < KW_PERMUTATION_MIN_GROUP;
+  const wanted = options.permutation ?? (small && Ntotal <= KW_PERMUTATION_COST_LIMIT);
+  const { rankSums, tieSum, ranks, N } = midranks(sample, wanted);
   const Nf = N;
   const tieCorrection = 1 - tieSum / (Nf * Nf * Nf - Nf);
   if (!(tieCorrection > 0)) {
     return { available: false, reason: "All values are tied, so the ranks carry no information and H is undefined" };
   }
-  const sizes = sample.groups.map((g) => g.centred.length);
   const H = statistic(rankSums, sizes, N, tieCorrection);
   const df = k - 1;
   const result: KruskalWallisResult = {
@@ -75,9 +78,7 @@ export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions 
     tieCorrection,
     meanRanks: sample.groups.map((g, i) => ({ group: g.name, n: sizes[i] as number, meanRank: (rankSums[i] as number) / (sizes[i] as number) })),
   };
-  const small = N <= KW_PERMUTATION_MAX_TOTAL || Math.min(...sizes) < KW_PERMUTATION_MIN_GROUP;
-  const wanted = options.permutation ?? (small && N <= KW_PERMUTATION_COST_LIMIT);
-  if (wanted) {
+  if (wanted && ranks) {
     result.permutation = permutationKruskalWallis(ranks, sizes, H, tieCorrection, {
       draws: options.draws ?? KW_PERMUTATION_DRAWS,
       seed: options.seed ?? KW_PERMUTATION_SEED,

@@ -1,7 +1,7 @@
 import { fSf } from "../distributions/f.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { requireGroupSizes } from "../numeric/require-group-sizes.js";
 
@@ -47,7 +47,7 @@ export function oneWayAnova(input: SampleInput): OneWayAnovaResult | Unavailable
   const sample = prepareSample(input);
   requireGroupSizes(sample, "One-way ANOVA", 1);
   const k = sample.groups.length;
-  const moments = sample.groups.map((g) => centralMoments(g.centred));
+  const moments = sample.groups.map((g) => groupMoments(g));
   let N = 0;
   let weighted = 0;
   let comp = 0;

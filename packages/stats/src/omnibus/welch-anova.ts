@@ -1,7 +1,7 @@
 import { fSf } from "../distributions/f.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
-import { centralMoments } from "../numeric/central-moments.js";
+import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
 import { requireGroupSizes } from "../numeric/require-group-sizes.js";
 
@@ -30,7 +30,7 @@ export function welchAnova(input: SampleInput): WelchAnovaResult | Unavailable {
   requireGroupSizes(sample, "Welch's ANOVA", 2);
   const k = sample.groups.length;
   const stats = sample.groups.map((g) => {
-    const m = centralMoments(g.centred);
+    const m = groupMoments(g);
     return { name: g.name, n: m.n, mean: m.mean, variance: m.ss / (m.n - 1) };
   });
   const constant = stats.filter((s) => s.variance === 0).map((s) => `'${s.name}'`);

@@ -1,4 +1,12 @@
-import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from "typeorm";
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 
@@ -43,6 +51,7 @@ export class Analysis {
   createdById: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "created_by_id" })
   createdBy: Relation<User>;
 
   @CreateDateColumn({ name: "created_at", type: DATETIME })

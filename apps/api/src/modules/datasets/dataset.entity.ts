@@ -1,7 +1,7 @@
 import {
   Column,
-  CreateDateColumn,
   Entity,
+  JoinColumn,
   Index,
   ManyToOne,
   PrimaryGeneratedColumn,
@@ -60,8 +60,10 @@ export class Dataset {
   uploadedById: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "uploaded_by_id" })
   uploadedBy: Relation<User>;
 
-  @CreateDateColumn({ name: "uploaded_at", type: DATETIME })
+  /** Set in code to the millisecond, so it compares exactly with the plan's lock time. */
+  @Column(DATETIME, { name: "uploaded_at" })
   uploadedAt: Date;
 }

@@ -172,7 +172,7 @@ describe("dataset upload", () => {
     ],
   ];
 
-  it.each(bad)("refuses %s with %i and stores nothing", async (_what, content, name, status, message) => {
+  it.each(bad)("refuses %s with the right status and stores nothing", async (_what, content, name, status, message) => {
     const id = await lockedStudy(analyst);
     const before = await datasetRows();
     const res = await analyst

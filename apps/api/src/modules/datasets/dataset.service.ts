@@ -82,9 +82,7 @@ export async function storeDataset(
       sizeBytes: file.size,
       sha256,
       mediaType:
-        format === "xlsx"
-          ? "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
-          : "text/csv",
+        format === "xlsx" ? "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet" : "text/csv",
       content: file.buffer,
       layout: choice.layout,
       groupColumn: choice.layout === "long" ? (choice.groupColumn ?? null) : null,
@@ -92,6 +90,7 @@ export async function storeDataset(
       report,
       observations: data,
       uploadedById: user.id,
+      uploadedAt: new Date(),
     });
     const saved = await repo.save(row);
     await recordAudit(tx, actor, {

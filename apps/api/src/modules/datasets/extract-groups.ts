@@ -126,17 +126,22 @@ export function extractGroups(
       "Some values use a decimal comma (e.g. 4,5); Waymark reads a decimal point. Convert the column and upload again.",
     );
   }
+  // Problems that stop the analysis come first, so a refusal names the one that matters.
+  const blocking = messages.filter((m) => m.startsWith("The "));
   const small = groups.filter((g) => g.values.length < 2);
-  for (const g of small)
-    messages.push(
+  for (const g of small) {
+    blocking.push(
       `Group "${g.name}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
     );
-  if (groups.length < 2 && messages.length === 0)
-    messages.push(
+  }
+  if (groups.length < 2 && blocking.length === 0) {
+    blocking.push(
       `Only ${groups.length} group${groups.length === 1 ? "" : "s"} with data; a comparison needs at least two.`,
     );
+  }
   const rowsUsed = groups.reduce((s, g) => s + g.values.length, 0);
-  const usable = groups.length >= 2 && small.length === 0 && messages.every((m) => !m.startsWith("The "));
+  const usable = blocking.length === 0;
+  const allMessages = [...blocking, ...messages.filter((m) => !m.startsWith("The "))];
 
   return {
     data: { groups },
@@ -148,7 +153,7 @@ export function extractGroups(
       groupsFound: groups.map((g) => ({ name: g.name, n: g.values.length })),
       unknownLevels: [...unknown],
       missingLevels,
-      messages,
+      messages: allMessages,
       usable,
     },
   };

@@ -2,6 +2,7 @@ import {
   Column,
   CreateDateColumn,
   Entity,
+  JoinColumn,
   Index,
   ManyToOne,
   PrimaryGeneratedColumn,
@@ -35,6 +36,7 @@ export class Invitation {
   invitedById: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "invited_by_id" })
   invitedBy: Relation<User>;
 
   @CreateDateColumn({ name: "created_at", type: DATETIME })

@@ -22,7 +22,9 @@ async function readDocx(buf: Buffer) {
       .filter((f) => /^word\/header\d*\.xml$/.test(f))
       .map((f) => zip.file(f)!.async("string")),
   );
-  const text = (x: string) => [...x.matchAll(/<w:t(?: [^>]*)?>([^<]*)<\/w:t>/g)].map((m) => m[1]).join("");
+  const entities: Record<string, string> = { amp: "&", lt: "<", gt: ">", quot: '"', apos: "'" };
+  const decode = (x: string) => x.replace(/&(amp|lt|gt|quot|apos);/g, (_, e: string) => entities[e]!);
+  const text = (x: string) => [...x.matchAll(/<w:t(?: [^>]*)?>([^<]*)<\/w:t>/g)].map((m) => decode(m[1]!)).join("");
   const paragraphs = xml.split("</w:p>").map(text).filter(Boolean);
   return {
     xml,

@@ -1,4 +1,12 @@
-import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from "typeorm";
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 
@@ -24,6 +32,7 @@ export class ReviewComment {
   authorId: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "author_id" })
   author: Relation<User>;
 
   @CreateDateColumn({ name: "created_at", type: DATETIME })

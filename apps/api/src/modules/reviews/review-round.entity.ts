@@ -1,4 +1,12 @@
-import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from "typeorm";
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 
@@ -27,6 +35,7 @@ export class ReviewRound {
   submittedById: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "submitted_by_id" })
   submittedBy: Relation<User>;
 
   @CreateDateColumn({ name: "submitted_at", type: DATETIME })
@@ -39,6 +48,7 @@ export class ReviewRound {
   decidedById: number | null;
 
   @ManyToOne(() => User, { eager: true, nullable: true })
+  @JoinColumn({ name: "decided_by_id" })
   decidedBy: Relation<User> | null;
 
   @Column(DATETIME, { name: "decided_at", nullable: true })

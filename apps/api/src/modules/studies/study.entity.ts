@@ -2,6 +2,7 @@ import {
   Column,
   CreateDateColumn,
   Entity,
+  JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
   UpdateDateColumn,
@@ -54,6 +55,7 @@ export class Study {
   ownerId: number;
 
   @ManyToOne(() => User, { eager: true })
+  @JoinColumn({ name: "owner_id" })
   owner: Relation<User>;
 
   @Column("simple-json")
@@ -69,6 +71,7 @@ export class Study {
   planLockedById: number | null;
 
   @ManyToOne(() => User, { eager: true, nullable: true })
+  @JoinColumn({ name: "plan_locked_by_id" })
   planLockedBy: Relation<User> | null;
 
   @CreateDateColumn({ name: "created_at", type: DATETIME })

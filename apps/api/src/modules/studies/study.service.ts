@@ -141,7 +141,7 @@ export async function savePlan(
         effectF: input.power.effectF,
         targetPower: input.power.targetPower,
         nPerGroup: size.nPerGroup,
-        achievedPower: size.power,
+        achievedPower: size.achievedPower,
       };
     }
     study.plan = next;

@@ -66,9 +66,9 @@ function curing(): DemoScenario {
 function routing(): DemoScenario {
   const r = seededRandom(7310);
   const rules: [string, number, number, number][] = [
-    ["Round robin", 312, 38, 42],
-    ["Skills match", 288, 84, 27],
-    ["Longest idle", 331, 131, 19],
+    ["Round robin", 312, 38, 52],
+    ["Skills match", 288, 84, 37],
+    ["Longest idle", 331, 131, 31],
   ];
   const rows: [string, number][] = [];
   for (const [rule, mean, sd, n] of rules)

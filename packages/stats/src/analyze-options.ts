@@ -1,0 +1,70 @@
+import { StatsInputError } from "./errors.js";
+import { DEFAULT_ALPHA } from "./choice/thresholds.js";
+
+export type Adjustment = "holm" | "bonferroni" | "bh";
+export type Policy = "classic-first" | "welch-first";
+export type Scale = "continuous" | "ordinal";
+export type Comparisons = "all-pairs" | "vs-control";
+
+export interface AnalyzeOptions {
+  /** Significance level for tests, intervals of differences and the checks (default 0.05). */
+  alpha?: number;
+  /** Multiplicity adjustment for Dunn's and other p-value-based comparisons (default Holm). */
+  adjust?: Adjustment;
+  /** Name of the control group, for comparisons against it. */
+  control?: string;
+  policy?: Policy;
+  scale?: Scale;
+  /** Defaults to "vs-control" when a control is named, else "all-pairs". */
+  comparisons?: Comparisons;
+  /** false or "paired" when the same units are measured in every group (out of scope). */
+  independent?: boolean | "paired";
+}
+
+export interface ResolvedOptions {
+  alpha: number;
+  adjust: Adjustment;
+  control: string | undefined;
+  policy: Policy;
+  scale: Scale;
+  comparisons: Comparisons;
+  independent: boolean | "paired";
+}
+
+function oneOf<T extends string>(name: string, value: unknown, allowed: readonly T[], fallback: T): T {
+  if (value === undefined) return fallback;
+  if (typeof value === "string" && (allowed as readonly string[]).includes(value)) return value as T;
+  throw new StatsInputError(`The ${name} option must be one of ${allowed.join(", ")}; got '${String(value)}'`);
+}
+
+/**
+ * Validates analysis options in one place and fills in defaults; throws StatsInputError with
+ * the allowed values when an option is wrong. Cost: O(k) for the control-name check.
+ */
+export function resolveOptions(options: AnalyzeOptions, groupNames: readonly string[]): ResolvedOptions {
+  const alpha = options.alpha ?? DEFAULT_ALPHA;
+  if (typeof alpha !== "number" || !(alpha > 0 && alpha < 1)) {
+    throw new StatsInputError(`The alpha option must be a number between 0 and 1; got ${String(alpha)}`);
+  }
+  const control = options.control;
+  if (control !== undefined && !groupNames.includes(control)) {
+    throw new StatsInputError(`The control group '${control}' is not one of the groups (${groupNames.map((g) => `'${g}'`).join(", ")})`);
+  }
+  const comparisons = oneOf("comparisons", options.comparisons, ["all-pairs", "vs-control"], control !== undefined ? "vs-control" : "all-pairs");
+  if (comparisons === "vs-control" && control === undefined) {
+    throw new StatsInputError("Comparisons against a control need the control option naming the control group");
+  }
+  const independent = options.independent ?? true;
+  if (independent !== true && independent !== false && independent !== "paired") {
+    throw new StatsInputError(`The independent option must be true, false or 'paired'; got '${String(independent)}'`);
+  }
+  return {
+    alpha,
+    adjust: oneOf("adjust", options.adjust, ["holm", "bonferroni", "bh"], "holm"),
+    control,
+    policy: oneOf("policy", options.policy, ["classic-first", "welch-first"], "classic-first"),
+    scale: oneOf("scale", options.scale, ["continuous", "ordinal"], "continuous"),
+    comparisons,
+    independent,
+  };
+}

@@ -1,0 +1,190 @@
+import { resolveOptions, type AnalyzeOptions, type ResolvedOptions } from "./analyze-options.js";
+import { bartlett } from "./assumptions/bartlett.js";
+import { levene } from "./assumptions/levene.js";
+import { outliers } from "./assumptions/outliers.js";
+import { qqPlot } from "./assumptions/qq-plot.js";
+import { sdRatio as sdRatioOf } from "./assumptions/sd-ratio.js";
+import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./assumptions/shapiro-wilk.js";
+import { recommendTest, type Recommendation } from "./choice/recommend-test.js";
+import { describeGroups, type GroupDescription } from "./descriptives/describe.js";
+import { StatsInputError } from "./errors.js";
+import type { GroupInput } from "./numeric/centred-sample.js";
+import { pooledResiduals } from "./numeric/pooled-residuals.js";
+import { prepareSample } from "./numeric/prepare-sample.js";
+import { requireGroupSizes } from "./numeric/require-group-sizes.js";
+import { sortedValues } from "./numeric/sorted-values.js";
+import { kruskalWallis } from "./omnibus/kruskal-wallis.js";
+import { oneWayAnova } from "./omnibus/one-way-anova.js";
+import { welchAnova } from "./omnibus/welch-anova.js";
+import { ENGINE_VERSION } from "./version.js";
+import { etaSquaredCi } from "./effect-sizes/eta-squared-ci.js";
+import type { Unavailable } from "./types/group-summary.js";
+import { runPosthoc } from "./posthoc-plan.js";
+
+export interface AnalyzeInput {
+  groups: readonly GroupInput[];
+  options?: AnalyzeOptions;
+}
+
+/** The one JSON-serializable result of `analyze`. Parts that cannot be computed hold Unavailable. */
+export interface AnalysisResult {
+  engineVersion: string;
+  options: ResolvedOptions;
+  data: { k: number; totalN: number; totalMissing: number; centring: string; offset: number };
+  groups: GroupDescription[];
+  anova: object;
+  welch: object;
+  kruskalWallis: object;
+  levene: object;
+  brownForsythe: object;
+  bartlett: object;
+  shapiroWilk: object[];
+  shapiroWilkResiduals: object;
+  sdRatio: number | Unavailable;
+  outliers: object;
+  qq: object;
+  posthoc: object;
+  familyWiseError: object;
+  recommendation: Recommendation;
+  warnings: string[];
+}
+
+/** Runs one part; an input problem specific to that part becomes its Unavailable reason. */
+function part<T>(run: () => T): T | Unavailable {
+  try {
+    return run();
+  } catch (e) {
+    if (e instanceof StatsInputError) return { available: false, reason: e.message };
+    throw e;
+  }
+}
+
+/**
+ * The full comparison of k independent groups in one call: descriptives, classic ANOVA with
+ * effect sizes, Welch's ANOVA, Kruskal–Wallis, assumption checks (Shapiro–Wilk per group and
+ * on pooled residuals, Levene, Brown–Forsythe, Bartlett, SD ratio, outliers, Q–Q data), the
+ * post-hoc families, the family-wise error rate and the recommended test with its reasons.
+ * Values may be numbers or decimal text; null, "", "NA" are missing (excluded, counted).
+ * The data are parsed and centred once (exactly, on the decimal text) and every part reuses
+ * that, and the per-group sorts. Deterministic: the permutation p-value uses a fixed seed.
+ * Throws StatsInputError for fewer than two groups, a group with fewer than two values,
+ * non-numeric text (naming the first offending values) or infinite values.
+ * Example: analyze({ groups: [{ name: "A", values: [1, 2, 3] }, { name: "B", values: ["4", "5", "6.5"] }] }).anova.F
+ * Cost: O(N log N) for the per-group sorts, O(N·k) for ranks, O(N) for the rest.
+ */
+export function analyze(input: AnalyzeInput): AnalysisResult {
+  if (!input || !Array.isArray(input.groups)) throw new StatsInputError("The analysis needs a list of groups, each with a name and values");
+  const names = input.groups.map((g) => g.name);
+  const duplicate = names.find((n, i) => names.indexOf(n) !== i);
+  if (duplicate !== undefined) throw new StatsInputError(`Group names must be unique; '${duplicate}' appears more than once`);
+  const options = resolveOptions(input.options ?? {}, names);
+  const sample = prepareSample(input.groups);
+  requireGroupSizes(sample, "The analysis", 2);
+  const warnings: string[] = [];
+
+  const groups = describeGroups(sample);
+  const totalN = groups.reduce((s, g) => s + g.n, 0);
+  const totalMissing = groups.reduce((s, g) => s + g.missing, 0);
+  if (totalMissing > 0) {
+    const which = groups.filter((g) => g.missing > 0).map((g) => `'${g.name}' ${g.missing}`);
+    warnings.push(`${totalMissing} missing value${totalMissing === 1 ? " was" : "s were"} excluded (${which.join(", ")}).`);
+  }
+  const constantGroups = groups.filter((g) => typeof g.sd === "number" && g.sd === 0).map((g) => `'${g.name}'`);
+  const allIdentical = groups.every((g) => g.min === groups[0]?.min && g.max === groups[0]?.max && g.min === g.max);
+  if (allIdentical) {
+    warnings.push("All values are identical across all groups, so no test can detect a difference; the tests report why they cannot run.");
+  } else if (constantGroups.length > 0) {
+    warnings.push(
+      `Zero variance in group${constantGroups.length > 1 ? "s" : ""} ${constantGroups.join(", ")}: Welch's ANOVA, Games–Howell and Bartlett's test cannot run (they divide by or take the log of each group's variance); the other results are reported.`,
+    );
+  }
+
+  const anovaCore = part(() => oneWayAnova(sample));
+  // η² with its 95% interval from the noncentral F (Steiger 2004), beside the point estimate.
+  const anova = anovaCore.available ? { ...anovaCore, etaSquaredCi: part(() => etaSquaredCi(anovaCore.F, anovaCore.df1, anovaCore.df2, 0.95)) } : anovaCore;
+  const welch = part(() => welchAnova(sample));
+  const kw = part(() => kruskalWallis(sample));
+  const lev = part(() => levene(sample, "mean"));
+  const bf = part(() => levene(sample, "median"));
+  const bart = part(() => bartlett(sample));
+  const shapiro = sample.groups.map((g) => {
+    const r = shapiroWilk(sortedValues(g));
+    return r.available ? { group: g.name, n: r.n, W: r.W, p: r.p } : { group: g.name, n: g.centred.length, available: false as const, reason: r.reason };
+  });
+  // The full sorted residuals are needed only where Shapiro–Wilk applies (N ≤ 5000).
+  const swResiduals =
+    totalN <= SHAPIRO_WILK_MAX_N
+      ? shapiroWilk(pooledResiduals(sample))
+      : ({ available: false, reason: `The Shapiro–Wilk approximation is valid up to ${SHAPIRO_WILK_MAX_N} values; the pooled residuals number ${totalN}, so skewness and kurtosis describe the shape instead` } as const);
+  if (!swResiduals.available && totalN > SHAPIRO_WILK_MAX_N) warnings.push(swResiduals.reason + ".");
+  const ratio = sdRatioOf(sample);
+  const sdRatio: number | Unavailable = ratio.available ? ratio.ratio : ratio;
+  const outlierReport = part(() => outliers(sample));
+  const qq = qqPlot(sample);
+
+  const posthoc = runPosthoc(sample, groups, anova, options, warnings);
+
+  const recommendation = recommendTest(
+    {
+      independent: options.independent,
+      scale: options.scale,
+      k: sample.groups.length,
+      ...(options.control !== undefined ? { control: options.control } : {}),
+      comparisons: options.comparisons,
+      alpha: options.alpha,
+      policy: options.policy,
+    },
+    {
+      groupSizes: groups.map((g) => g.n),
+      shapiroWilkResiduals: swResiduals.available ? { p: swResiduals.p, W: swResiduals.W } : swResiduals,
+      brownForsythe: bf.available ? { p: bf.p, F: bf.F } : bf,
+      sdRatio,
+      extremeOutliers: outlierReport.available ? outlierReport.totalExtreme : 0,
+    },
+  );
+  if (allIdentical) recommendation.caveats.unshift("All values are identical, so none of the tests can be computed; the recommendation describes the design only.");
+
+  return finite({
+    engineVersion: ENGINE_VERSION,
+    options,
+    data: { k: sample.groups.length, totalN, totalMissing, centring: sample.centring, offset: sample.offset },
+    groups,
+    anova,
+    welch,
+    kruskalWallis: kw,
+    levene: lev,
+    brownForsythe: bf,
+    bartlett: bart,
+    shapiroWilk: shapiro,
+    shapiroWilkResiduals: swResiduals.available ? { n: swResiduals.n, W: swResiduals.W, p: swResiduals.p } : swResiduals,
+    sdRatio,
+    outliers: outlierReport,
+    qq,
+    posthoc: posthoc.posthoc,
+    familyWiseError: posthoc.familyWiseError,
+    recommendation,
+    warnings,
+  }, warnings);
+}
+
+/**
+ * Last line of defence for the output contract (no NaN, Infinity or undefined): any
+ * non-finite number is replaced by an Unavailable object and noted in the warnings, so a
+ * defect shows up as a readable reason rather than as broken JSON. Cost: O(size of result).
+ */
+function finite<T>(result: T, warnings: string[]): T {
+  const visit = (x: unknown, path: string): unknown => {
+    if (typeof x === "number" && !Number.isFinite(x)) {
+      warnings.push(`Internal: ${path} was not a finite number and has been withheld.`);
+      return { available: false, reason: "the value could not be computed as a finite number" };
+    }
+    if (Array.isArray(x)) return x.map((v, i) => visit(v, `${path}[${i}]`));
+    if (x && typeof x === "object") {
+      const out: Record<string, unknown> = {};
+      for (const [k, v] of Object.entries(x)) if (v !== undefined) out[k] = visit(v, path ? `${path}.${k}` : k);
+      return out;
+    }
+    return x;
+  };
+  return visit(result, "") as T;
+}

@@ -1,0 +1,6 @@
+export * from "./anova-power.js";
+export * from "./anova-sample-size.js";
+export * from "./effect-f-from-means.js";
+export * from "./power-curve.js";
+export * from "./family-wise-error.js";
+export * from "./simulated-power.js";
