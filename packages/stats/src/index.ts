@@ -56,4 +56,3 @@ export * from "./effect-sizes/index.js";
 // Post-hoc comparisons and planning (power, sample size, family-wise error).
 export * from "./posthoc/index.js";
 export * from "./planning/index.js";
-export { DUNN_MAX_TOTAL } from "./posthoc-plan.js";

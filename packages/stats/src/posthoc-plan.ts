@@ -4,20 +4,15 @@ import type { CentredSample } from "./numeric/centred-sample.js";
 import { groupMoments } from "./numeric/group-moments.js";
 import { familyWiseError } from "./planning/family-wise-error.js";
 import { adjustPValues } from "./posthoc/p-adjust.js";
-import { dunn } from "./posthoc/dunn.js";
+import { dunnSorted } from "./posthoc/dunn.js";
+import { midranks } from "./numeric/midranks.js";
+import { sortedValues } from "./numeric/sorted-values.js";
 import { dunnettTest } from "./posthoc/dunnett-test.js";
 import { gamesHowell } from "./posthoc/games-howell.js";
 import { tukeyKramer } from "./posthoc/tukey-kramer.js";
 import { welchVsControlHolm } from "./posthoc/welch-vs-control-holm.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupSummary, Unavailable } from "./types/group-summary.js";
-
-/**
- * Dunn's comparisons are run up to this many values in all. Above it they are reported as
- * unavailable: the current implementation (src/posthoc/dunn.ts) re-ranks the pooled data and
- * every pair with comparison sorts, about 2 s at 10^5 and 20 s at 10^6 values (measured).
- */
-export const DUNN_MAX_TOTAL = 20_000;
 
 function attempt<T>(run: () => T): T | Unavailable {
   try {
@@ -63,15 +58,8 @@ export function runPosthoc(
   const gh = attempt(() => gamesHowell(summaries, alpha));
   const gamesHowellPairs = "pairs" in gh ? [...gh.pairs] : gh;
 
-  const N = groups.reduce((s, g) => s + g.n, 0);
-  let dunnResult: ReturnType<typeof dunn> | Unavailable;
-  if (N > DUNN_MAX_TOTAL) {
-    dunnResult = { available: false, reason: `Dunn's comparisons are not computed above ${DUNN_MAX_TOTAL} values (this data set has ${N}); the Kruskal–Wallis test and the other families are reported` };
-    warnings.push(dunnResult.reason + ".");
-  } else {
-    // Ranks only: the centred values keep every order and tie exactly.
-    dunnResult = attempt(() => dunn(sample.groups.map((g) => ({ name: g.name, values: Array.from(g.centred) })), options.adjust, alpha));
-  }
+  // Ranks only: the centred values keep every order and tie exactly, and are already sorted.
+  const dunnResult = attempt(() => dunnSorted(sample.groups.map((g) => ({ name: g.name, sorted: sortedValues(g) })), options.adjust, alpha, midranks(sample)));
   const dunnPairs = pairsOf(dunnResult);
 
   const posthoc: Record<string, unknown> = { tukey, gamesHowell: gamesHowellPairs, dunn: dunnPairs, adjust: options.adjust, dunnTwoSided: true };
