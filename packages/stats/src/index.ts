@@ -47,7 +47,7 @@ export * from "./distributions/index.js";
 
 // Reporting: shared number formatting and plain-language readings (web app, API report, CLI).
 export { formatDf, formatP, formatPercent, formatStat, formatUnit } from "./reporting/format.js";
-export { checkReadings, omnibusSentence, resultSummary, TEST_NAMES, type Reading } from "./reporting/readings.js";
+export { checkReadings, midSentence, omnibusSentence, resultSummary, TEST_NAMES, type Reading } from "./reporting/readings.js";
 export type { ResultView } from "./reporting/result-view.js";
 
 // Effect sizes (η² interval, Hedges' g, rank-biserial r).

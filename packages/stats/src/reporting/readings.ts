@@ -112,7 +112,13 @@ export const TEST_NAMES: Record<string, string> = {
  * A short summary that does not overclaim: what the omnibus test found at α, the effect size
  * in words, and the reminder that significance is not importance.
  */
-export function resultSummary(r: ResultView, test: string, outcome: string): string[] {
+/** "Compressive strength" reads as "compressive strength" mid-sentence; acronyms such as "pH" or "ALT" stay. */
+export function midSentence(name: string): string {
+  return name.length > 1 && /^[A-Z][a-z]/.test(name) ? name[0]!.toLowerCase() + name.slice(1) : name;
+}
+
+export function resultSummary(r: ResultView, test: string, outcomeName: string): string[] {
+  const outcome = midSentence(outcomeName);
   const alpha = r.options.alpha;
   const p = test === "anova" ? r.anova : test === "welch" ? r.welch : r.kruskalWallis;
   const lines: string[] = [];

@@ -30,9 +30,15 @@ async function runEngine(study: Study, dataset: Dataset) {
 }
 
 /** Checks and recommendation for a dataset under the study's plan; computed, not stored. */
+/** Up to this many values the checks also send the raw values, so plots can draw every point. */
+export const CHECKS_MAX_POINTS = 5000;
+
 export async function runChecks(study: Study, dataset: Dataset) {
   const { result } = await runEngine(study, dataset);
-  return { checks: result, readings: checkReadings(result as unknown as ResultView) };
+  const total = dataset.observations.groups.reduce((s, g) => s + g.values.length, 0);
+  const observations =
+    total <= CHECKS_MAX_POINTS ? { groups: dataset.observations.groups.map((g) => ({ name: g.name, values: g.values.map(Number), rows: g.rows })) } : null;
+  return { checks: result, readings: checkReadings(result as unknown as ResultView), observations };
 }
 
 /**

@@ -1,5 +1,6 @@
 import {
   checkReadings,
+  midSentence,
   formatStat,
   formatUnit,
   omnibusSentence,
@@ -71,7 +72,7 @@ export function buildReport(input: ReportInput): Block[] {
       : "";
   blocks.push(
     paragraph(
-      `The study compared ${study.outcomeName}${unit ? ` (${unit})` : ""} across k = ${k} independent groups defined by ${study.factorName.toLowerCase()}: ${list(study.levels)}.${control} ${ASSIGNMENT[study.design.assignment ?? "unsure"]} The outcome was treated as ${study.design.scale === "ordinal" ? "ordinal" : "continuous"}.`,
+      `The study compared ${midSentence(study.outcomeName)}${unit ? ` (${unit})` : ""} across k = ${k} independent groups defined by ${study.factorName.toLowerCase()}: ${list(study.levels)}.${control} ${ASSIGNMENT[study.design.assignment ?? "unsure"]} The outcome was treated as ${study.design.scale === "ordinal" ? "ordinal" : "continuous"}.`,
       "methods",
     ),
   );
