@@ -13,6 +13,8 @@ export default defineConfig({
   outputDir: "../test-results/e2e",
   timeout: 60_000,
   workers: 1,
+  // A 2-core CI machine under load renders slower than a laptop.
+  expect: { timeout: 10_000 },
   reporter: [["list"]],
   use: {
     baseURL: `http://localhost:${PORT}`,

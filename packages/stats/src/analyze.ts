@@ -122,7 +122,7 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const outlierReport = part(() => outliers(sample));
   const qq = qqPlot(sample);
 
-  const posthoc = runPosthoc(sample, groups, anova, options, warnings);
+  const posthoc = runPosthoc(sample, groups, anova, options);
 
   const recommendation = recommendTest(
     {

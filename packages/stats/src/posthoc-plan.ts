@@ -43,7 +43,6 @@ export function runPosthoc(
   groups: GroupDescription[],
   anova: object,
   options: ResolvedOptions,
-  warnings: string[],
 ): { posthoc: object; familyWiseError: object } {
   const alpha = options.alpha;
   const summaries: GroupSummary[] = sample.groups.map((g) => {

@@ -5,6 +5,15 @@ import type { Role } from "./roles";
 /** What each role may see in the web app; the API enforces the same rules on its side. */
 export const POLICIES = {
   "home:view": ["analyst", "reviewer", "writer", "admin"],
+  "studies:view": ["analyst", "reviewer", "writer", "admin"],
+  "studies:create": ["analyst"],
+  "reviews:view": ["reviewer", "admin"],
+  "audit:view": ["reviewer", "admin"],
+  "people:manage": ["admin"],
+  "settings:manage": ["admin"],
+  "reports:view": ["writer", "reviewer", "admin"],
+  "reports:list": ["writer"],
+  "mailbox:view": ["analyst", "reviewer", "writer", "admin"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof POLICIES;

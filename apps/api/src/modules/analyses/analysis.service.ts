@@ -1,11 +1,4 @@
-import {
-  analyze,
-  checkReadings,
-  ENGINE_VERSION,
-  resultSummary,
-  StatsInputError,
-  type ResultView,
-} from "@waymark/stats";
+import { checkReadings, ENGINE_VERSION, resultSummary, type ResultView } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";

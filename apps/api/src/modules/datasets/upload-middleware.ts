@@ -34,8 +34,8 @@ export function singleFileUpload(limitMb: number): RequestHandler {
 /** A safe display name for an uploaded file: no folders, no control characters. */
 export function safeFileName(original: string): string {
   const base = original.split(/[\\/]/).pop() ?? "upload";
-  // eslint-disable-next-line no-control-regex
   const clean = base
+    // eslint-disable-next-line no-control-regex -- stripping control characters is the point
     .replace(/[\u0000-\u001f\u007f]/g, "")
     .trim()
     .slice(0, 200);

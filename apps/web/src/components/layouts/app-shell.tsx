@@ -3,6 +3,7 @@ import { Button } from "@/components/ui/button";
 import { WaymarkLogo } from "@/components/ui/waymark-logo";
 import { paths } from "@/config/paths";
 import { useLogout } from "@/features/auth/api/logout";
+import { usePublicConfig } from "@/features/auth/api/get-public-config";
 import type { User } from "@/features/auth/api/get-me";
 import { can } from "@/lib/authorization";
 import { ROLE_LABELS } from "@/lib/roles";
@@ -11,7 +12,8 @@ import { NAV_ITEMS } from "./nav-items";
 export function AppShell({ user }: { user: User }) {
   const logout = useLogout();
   const navigate = useNavigate();
-  const items = NAV_ITEMS.filter((i) => can(user.role, i.permission));
+  const config = usePublicConfig();
+  const items = NAV_ITEMS.filter((i) => can(user.role, i.permission) && (!i.demoOnly || config.data?.demo === true));
   return (
     <div className="min-h-screen">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-paper focus:p-2">
@@ -23,12 +25,12 @@ export function AppShell({ user }: { user: User }) {
             <WaymarkLogo />
             <span className="text-lg font-semibold tracking-wide">Waymark</span>
           </NavLink>
-          <nav aria-label="Main" className="flex gap-1">
+          <nav aria-label="Main" className="flex flex-wrap gap-1">
             {items.map((i) => (
               <NavLink
                 key={i.to}
                 to={i.to}
-                end
+                end={i.end ?? true}
                 className={({ isActive }) =>
                   `rounded px-3 py-1.5 text-sm text-stone no-underline hover:bg-spruce-700 hover:no-underline ${isActive ? "bg-spruce-700 font-semibold" : ""}`
                 }

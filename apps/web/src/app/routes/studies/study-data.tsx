@@ -1,0 +1,29 @@
+import { ErrorPanel } from "@/components/errors/error-panel";
+import { useDatasets } from "@/features/studies/api/get-datasets";
+import { DataUpload } from "@/features/studies/components/data-upload";
+import { DatasetVersions } from "@/features/studies/components/dataset-versions";
+import { StepHeading } from "@/features/studies/components/step-heading";
+import { ValidationReport } from "@/features/studies/components/validation-report";
+import { useStudyContext } from "./study-context";
+
+export function StudyDataRoute() {
+  const { study, canEdit } = useStudyContext();
+  const datasets = useDatasets(study.id);
+  return (
+    <div className="flex flex-col gap-6">
+      <StepHeading title="Data" intro="Upload the measurements as CSV or XLSX. Every upload is kept as a new version with its fingerprint; the latest one is analysed." />
+      {canEdit && <DataUpload study={study} />}
+      {study.latestDataset && (
+        <div>
+          <h3 className="mb-2 font-semibold">Latest version (v{study.latestDataset.version})</h3>
+          <ValidationReport report={study.latestDataset.report} levels={study.levels} stored />
+        </div>
+      )}
+      <section aria-labelledby="versions-title">
+        <h3 id="versions-title" className="mb-2 font-semibold">Versions</h3>
+        {datasets.error && <ErrorPanel title="The versions could not be loaded" message={datasets.error.message} />}
+        {datasets.data && <DatasetVersions datasets={datasets.data} />}
+      </section>
+    </div>
+  );
+}

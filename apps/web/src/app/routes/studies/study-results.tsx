@@ -1,0 +1,36 @@
+import { ErrorPanel } from "@/components/errors/error-panel";
+import { DraftReportLink } from "@/features/reports/components/draft-report-link";
+import { HistoryTimeline } from "@/features/reviews/components/history-timeline";
+import { useAnalysis } from "@/features/studies/api/get-analysis";
+import { ResultsPanel } from "@/features/studies/components/results-panel";
+import { StepHeading } from "@/features/studies/components/step-heading";
+import { SubmitPanel } from "@/features/studies/components/submit-panel";
+import { useStudyContext } from "./study-context";
+
+export function StudyResultsRoute() {
+  const { study, canEdit } = useStudyContext();
+  const analysis = useAnalysis(study.id, study.latestAnalysisId);
+  const owner = canEdit || study.status !== "draft";
+  return (
+    <div className="flex flex-col gap-8">
+      <div>
+        <StepHeading title="Results" intro="What the test found, in words first and then in numbers, with the effect sizes beside the p-values." />
+        {analysis.isPending && <p className="text-ink-soft">Loading the results…</p>}
+        {analysis.error && <ErrorPanel title="The results could not be loaded" message={analysis.error.message} />}
+        {analysis.data && <ResultsPanel study={study} analysis={analysis.data} />}
+      </div>
+      {analysis.data && owner && (
+        <div className="flex flex-col gap-3">
+          {(canEdit || study.status === "in_review" || study.status === "approved") && <SubmitPanel study={study} analysisId={analysis.data.id} />}
+          <DraftReportLink studyId={study.id} />
+        </div>
+      )}
+      <section aria-labelledby="history-title">
+        <h3 id="history-title" className="mb-2 font-semibold">
+          History
+        </h3>
+        <HistoryTimeline studyId={study.id} />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,32 @@
+/** The actions the audit trail records (the server's list), each in plain words. */
+export const ACTION_LABELS: Record<string, string> = {
+  "auth.sign-in": "Signed in",
+  "auth.sign-in-failed": "Sign-in refused",
+  "auth.sign-out": "Signed out",
+  "study.created": "Study created",
+  "study.updated": "Study details changed",
+  "study.design-saved": "Design answers saved",
+  "study.plan-saved": "Plan saved",
+  "study.plan-locked": "Plan locked",
+  "dataset.uploaded": "Data uploaded",
+  "analysis.run": "Analysis run",
+  "analysis.override": "Test overridden",
+  "study.submitted": "Submitted for review",
+  "study.approved": "Approved with signature",
+  "study.changes-requested": "Changes requested",
+  "invitation.sent": "Invitation sent",
+  "invitation.accepted": "Invitation accepted",
+  "user.role-changed": "Role changed",
+  "user.deactivated": "Account deactivated",
+  "user.reactivated": "Account reactivated",
+  "organization.settings-changed": "Settings changed",
+  "report.downloaded": "Report downloaded",
+  "mail.failed": "E-mail not delivered",
+};
+
+/** Actions a reviewer should notice at a glance. */
+export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set(["analysis.override", "auth.sign-in-failed", "mail.failed"]);
+
+export function actionLabel(action: string): string {
+  return ACTION_LABELS[action] ?? action;
+}

@@ -1,0 +1,45 @@
+import { AttentionMarker } from "@/components/ui/attention-marker";
+import { formatDateTime } from "@/lib/format";
+import { posthocLabel, testLabel } from "../labels";
+import type { ReviewAnalysis } from "../types";
+
+/** The recommended test against the one used; an override and its justification stand out. */
+export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
+  const overridden = !!analysis.override || analysis.recommendedTest !== analysis.chosenTest;
+  return (
+    <div className="flex flex-col gap-3" data-testid="choice-facts">
+      {overridden && (
+        <div className="rounded-md border-2 border-amber bg-amber-100 p-4" data-testid="override-callout">
+          <p className="flex flex-wrap items-center gap-2">
+            <AttentionMarker>Override</AttentionMarker>
+            <span className="font-semibold">
+              The analyst used {testLabel(analysis.chosenTest)} instead of the recommended {testLabel(analysis.recommendedTest)}.
+            </span>
+          </p>
+          {analysis.override?.justification ? (
+            <blockquote className="mt-2 border-l-2 border-amber-800/40 pl-3 text-sm whitespace-pre-wrap">{analysis.override.justification}</blockquote>
+          ) : (
+            <p className="mt-2 text-sm">No justification was recorded.</p>
+          )}
+        </div>
+      )}
+      <dl className="grid gap-x-4 gap-y-1.5 text-sm sm:grid-cols-[12rem_1fr]">
+        <dt className="text-ink-soft">Recommended</dt>
+        <dd>{testLabel(analysis.recommendedTest)}</dd>
+        <dt className="text-ink-soft">Used</dt>
+        <dd className="font-medium">
+          {testLabel(analysis.chosenTest)}
+          {!overridden && <span className="font-normal text-ink-soft"> (as recommended)</span>}
+        </dd>
+        <dt className="text-ink-soft">Post-hoc</dt>
+        <dd>{posthocLabel(analysis.posthocMethod)}</dd>
+        <dt className="text-ink-soft">Run</dt>
+        <dd>
+          <span className="num">{formatDateTime(analysis.createdAt)}</span>
+          {analysis.createdBy ? ` by ${analysis.createdBy.displayName}` : ""} · engine {analysis.engineVersion}
+          {analysis.datasetVersion !== null ? ` · data version ${analysis.datasetVersion}` : ""}
+        </dd>
+      </dl>
+    </div>
+  );
+}

@@ -1,0 +1,54 @@
+import { screen, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { renderWithProviders } from "@/test/render";
+import type { StudyHistory } from "../types";
+import { HistoryTimelineView } from "./history-timeline";
+
+const HASH = "9f2c4e1a7b3d5f60718293a4b5c6d7e8f90112233445566778899aabbccddeef";
+const person = (id: number, displayName: string) => ({ id, displayName });
+
+const HISTORY: StudyHistory = {
+  rounds: [
+    {
+      round: 1,
+      submittedAt: "2025-12-01T09:00:00Z",
+      submittedBy: person(1, "Ada Okafor"),
+      decision: "changes_requested",
+      decidedAt: "2025-12-02T09:00:00Z",
+      decidedBy: person(2, "Rui Takahashi"),
+      comments: [
+        { step: null, body: "Explain the override.", author: person(2, "Rui Takahashi"), createdAt: "2025-12-02T09:00:00Z" },
+        { step: "checks", body: "<b>Two</b> outliers are not discussed.", author: person(2, "Rui Takahashi"), createdAt: "2025-12-02T09:00:00Z" },
+      ],
+      signature: null,
+    },
+    {
+      round: 2,
+      submittedAt: "2025-12-03T09:00:00Z",
+      submittedBy: person(1, "Ada Okafor"),
+      decision: "approved",
+      decidedAt: "2025-12-04T09:00:00Z",
+      decidedBy: person(2, "Rui Takahashi"),
+      comments: [],
+      signature: { signerName: "Rui Takahashi", signedAt: "2025-12-04T09:00:00Z", meaning: "Approved as the analysis of record", contentHash: HASH },
+    },
+  ],
+  approvalValid: false,
+  approvalNote: "What was approved has changed since it was signed, so the approval no longer holds.",
+  events: [{ id: 1, at: "2025-12-01T09:00:00Z", actorEmail: "analyst@waymark.test", action: "study.submitted", summary: "Submitted for review (round 1, analysis 3)" }],
+};
+
+describe("HistoryTimelineView", () => {
+  it("shows rounds, decisions, step comments as text, and the signature with a shortened hash", () => {
+    renderWithProviders(<HistoryTimelineView history={HISTORY} />);
+    expect(within(screen.getByRole("list", { name: "Review rounds" })).getAllByRole("heading").map((h) => h.textContent)).toEqual(["Round 1", "Round 2"]);
+    expect(screen.getByText(/Changes requested by Rui Takahashi/)).toBeTruthy();
+    expect(screen.getByText("On the Checks step", { exact: false })).toBeTruthy();
+    expect(screen.getByText("<b>Two</b> outliers are not discussed.")).toBeTruthy();
+    const sig = screen.getByTestId("signature-record");
+    expect(within(sig).getByTestId("short-hash").textContent).toBe(`${HASH.slice(0, 12)}…`);
+    expect(within(sig).getByTestId("short-hash").getAttribute("title")).toBe(HASH);
+    expect(screen.getByText(/The approval no longer holds/)).toBeTruthy();
+    expect(screen.getByText(/Submitted for review \(round 1, analysis 3\)/)).toBeTruthy();
+  });
+});

@@ -1,0 +1,14 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { api } from "@/lib/api-client";
+import type { Analysis } from "../types";
+import { studyKeys } from "./keys";
+
+export function getAnalyses(id: number): Promise<Analysis[]> {
+  return api.get<{ analyses: Analysis[] }>(`/studies/${id}/analyses`).then((r) => r.analyses);
+}
+
+export const analysesQueryOptions = (id: number) => queryOptions({ queryKey: studyKeys.analyses(id), queryFn: () => getAnalyses(id) });
+
+export function useAnalyses(id: number) {
+  return useQuery(analysesQueryOptions(id));
+}

@@ -1,0 +1,14 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { api } from "@/lib/api-client";
+import type { Study } from "../types";
+import { studyKeys } from "./keys";
+
+export function getStudies(): Promise<Study[]> {
+  return api.get<{ studies: Study[] }>("/studies").then((r) => r.studies);
+}
+
+export const studiesQueryOptions = queryOptions({ queryKey: studyKeys.all, queryFn: getStudies });
+
+export function useStudies() {
+  return useQuery(studiesQueryOptions);
+}

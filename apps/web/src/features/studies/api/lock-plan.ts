@@ -1,0 +1,13 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api-client";
+import type { Study } from "../types";
+import { storeStudy } from "./get-study";
+
+export function lockPlan(id: number): Promise<Study> {
+  return api.post<{ study: Study }>(`/studies/${id}/plan/lock`).then((r) => r.study);
+}
+
+export function useLockPlan(id: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: () => lockPlan(id), onSuccess: (study) => storeStudy(qc, study) });
+}

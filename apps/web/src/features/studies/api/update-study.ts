@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api-client";
+import type { Study } from "../types";
+import type { CreateStudyBody } from "./create-study";
+import { storeStudy } from "./get-study";
+
+export type UpdateStudyBody = Partial<CreateStudyBody>;
+
+export function updateStudy(id: number, body: UpdateStudyBody): Promise<Study> {
+  return api.patch<{ study: Study }>(`/studies/${id}`, { ...body }).then((r) => r.study);
+}
+
+export function useUpdateStudy(id: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: (body: UpdateStudyBody) => updateStudy(id, body), onSuccess: (study) => storeStudy(qc, study) });
+}
