@@ -1,4 +1,4 @@
-import { checkReadings, ENGINE_VERSION, resultSummary, type ResultView } from "@waymark/stats";
+import { checkReadings, ENGINE_VERSION, resultSummary, TEST_NAMES, type ResultView } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";
@@ -92,7 +92,7 @@ export async function runAnalysis(
     await recordAudit(tx, actor, {
       action: "analysis.run",
       studyId: study.id,
-      summary: `Ran ${chosen} on dataset version ${dataset.version}`,
+      summary: `Ran ${TEST_NAMES[chosen] ?? chosen} on dataset version ${dataset.version}`,
       after: {
         analysisId: saved.id,
         datasetId: dataset.id,
@@ -105,7 +105,7 @@ export async function runAnalysis(
       await recordAudit(tx, actor, {
         action: "analysis.override",
         studyId: study.id,
-        summary: `Chose ${chosen} instead of the recommended ${recommended}`,
+        summary: `Chose ${TEST_NAMES[chosen] ?? chosen} instead of the recommended ${TEST_NAMES[recommended] ?? recommended}`,
         after: { analysisId: saved.id, justification: saved.overrideJustification },
       });
     }

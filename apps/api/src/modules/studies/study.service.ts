@@ -13,6 +13,14 @@ import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
 import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
 
+const QUESTION_LABELS: Record<string, string> = {
+  independence: "independent groups",
+  scale: "outcome scale",
+  hasControl: "control group",
+  comparisons: "planned comparisons",
+  assignment: "how units were assigned",
+};
+
 export async function studyDto(ds: DataSource, study: Study) {
   const datasets = ds.getRepository(Dataset);
   const [datasetCount, latestDataset, latestAnalysis] = await Promise.all([
@@ -110,7 +118,7 @@ export async function saveDesign(
     await recordAudit(tx, actor, {
       action: "study.design-saved",
       studyId: id,
-      summary: `Answered ${Object.keys(answers).join(", ")}`,
+      summary: `Answered: ${Object.keys(answers).map((k) => QUESTION_LABELS[k] ?? k).join(", ")}`,
       before,
       after: study.design,
     });
