@@ -75,16 +75,20 @@ export function intervalsFigure(
   pairs: { label: string; diff: number; lower: number; upper: number }[],
   xLabel: string,
 ): Buffer {
-  const width = 640;
+  // Room for the longest pair label at 13 px (about 7 px a character), and for the x label below the ticks.
+  const marginLeft = Math.min(360, 24 + 7 * Math.max(...pairs.map((p) => p.label.length)));
+  const width = marginLeft + 480;
   return render(
     (document) =>
       Plot.plot({
         document,
         width,
-        height: Math.max(160, 40 * pairs.length + 70),
-        marginLeft: 200,
+        height: Math.max(170, 40 * pairs.length + 90),
+        marginLeft,
+        marginRight: 30,
+        marginBottom: 50,
         style: STYLE,
-        x: { label: xLabel, grid: true, nice: true },
+        x: { label: xLabel, labelAnchor: "center", labelOffset: 40, grid: true, nice: true, domain: [Math.min(0, ...pairs.map((p) => p.lower)), Math.max(0, ...pairs.map((p) => p.upper))] },
         y: { label: null, domain: pairs.map((p) => p.label) },
         marks: [
           Plot.ruleX([0], { stroke: "#A8432F", strokeDasharray: "4,3" }),

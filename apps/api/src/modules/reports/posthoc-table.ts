@@ -3,6 +3,9 @@ import { formatP, formatStat, formatUnit } from "@waymark/stats";
 type Pair = Record<string, unknown>;
 
 const num = (x: unknown): number | null => (typeof x === "number" && Number.isFinite(x) ? x : null);
+/** Effect sizes arrive as a number or as { g } / { r } objects with their details. */
+const effect = (x: unknown, key: "g" | "r"): unknown => (x && typeof x === "object" && key in x ? (x as Record<string, unknown>)[key] : x);
+
 const fmt = (x: unknown, f: (v: number) => string = (v) => formatStat(v)) => {
   const v = num(x);
   return v === null ? "—" : f(v);
@@ -56,7 +59,7 @@ export function posthocTable(
         fmt(p.z),
         fmt(p.p, (v) => formatP(v).replace("= ", "")),
         fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
-        fmt(p.rankBiserial, (v) => formatUnit(v)),
+        fmt(effect(p.rankBiserial, "r"), (v) => formatUnit(v)),
       ]),
     };
   }
@@ -69,7 +72,7 @@ export function posthocTable(
         ? `[${formatStat(num(p.lower)!)}, ${formatStat(num(p.upper)!)}]`
         : "—",
       fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
-      fmt(p.hedgesG),
+      fmt(effect(p.hedgesG, "g")),
     ]),
   };
 }

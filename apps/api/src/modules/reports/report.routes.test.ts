@@ -1,6 +1,6 @@
 import JSZip from "jszip";
 import request from "supertest";
-import { formatStat } from "@waymark/stats";
+import { formatStat, formatUnit } from "@waymark/stats";
 import { beforeAll, describe, expect, it } from "vitest";
 import { seedDemoStudies } from "../../db/seeds/demo-studies.js";
 import { signedIn } from "../../test-support/agents.js";
@@ -106,6 +106,11 @@ describe("approved reports of the three demo studies", () => {
             ? r.welch.F
             : r.kruskalWallis.H;
       expect(doc.text).toContain(formatStat(stat).replace("-", "\u2212"));
+      // The post-hoc table carries the stored effect sizes (Hedges' g, or the rank-biserial r for Dunn).
+      const family = analysis.chosenTest === "anova" ? r.posthoc.tukey : analysis.chosenTest === "welch" ? r.posthoc.gamesHowell : (r.posthoc.control?.dunn ?? r.posthoc.dunn);
+      const first = family[0];
+      if (analysis.chosenTest === "kruskal-wallis") expect(doc.text).toContain(formatUnit(first.rankBiserial.r));
+      else expect(doc.text).toContain(formatStat(first.hedgesG.g));
       // Each group's mean in Table 1 is the stored mean.
       for (const g of r.groups) expect(doc.text).toContain(formatStat(g.mean));
       // References match the methods used, and only those.
