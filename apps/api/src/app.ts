@@ -6,6 +6,7 @@ import session from "express-session";
 import helmet from "helmet";
 import type { DataSource } from "typeorm";
 import { createPassport } from "./auth/passport.js";
+import { csrfSynchronisedProtection } from "./auth/csrf.js";
 import { absoluteSessionLimit } from "./auth/session-limit.js";
 import type { Env } from "./config/env.js";
 import { errorHandler, notFoundHandler } from "./http/error-handler.js";
@@ -82,6 +83,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   });
 
   const api = Router();
+  api.use(csrfSynchronisedProtection);
   const routes = [
     ...mountRoutes(api, "/health", healthRoutes()),
     ...mountRoutes(api, "/config", configRoutes(env)),

@@ -1,4 +1,5 @@
 import request from "supertest";
+import { anon } from "../test-support/agents.js";
 import { beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../auth/roles.js";
 import { decide } from "../auth/policy.js";
@@ -13,14 +14,14 @@ beforeAll(async () => {
   t = await makeTestApp();
   // A fifth account, deactivated after signing in: its session must stop working at once.
   for (const role of ROLES) {
-    const a = request.agent(t.app);
+    const a = await anon(t.app);
     await a
       .post("/api/auth/login")
       .send({ email: `${role}@waymark.test`, password: t.env.demoPassword })
       .expect(200);
     agents.set(role, a);
   }
-  const gone = request.agent(t.app);
+  const gone = await anon(t.app);
   await t.ds.query(
     `INSERT INTO users (email, display_name, role, password_hash, active) SELECT 'gone@waymark.test', 'Former Analyst', 'analyst', password_hash, 1 FROM users WHERE email = 'analyst@waymark.test'`,
   );
@@ -30,7 +31,7 @@ beforeAll(async () => {
     .expect(200);
   await t.ds.query(`UPDATE users SET active = 0 WHERE email = 'gone@waymark.test'`);
   agents.set("deactivated", gone);
-  agents.set("signed-out", request.agent(t.app));
+  agents.set("signed-out", await anon(t.app));
 });
 
 /** The status family a policy implies for a caller; the route's own checks may then give 400/404/409/422. */

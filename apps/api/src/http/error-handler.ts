@@ -21,6 +21,9 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     body = {
       error: { code: err.code, message: err.message, ...(err.details ? { details: err.details } : {}) },
     };
+  } else if (isCsrfError(err)) {
+    status = 403;
+    body = { error: { code: "csrf_invalid", message: "This request did not carry Waymark's form token, so it was refused. Reload the page and try again." } };
   } else if (isBodyParserError(err)) {
     status = err.status;
     body = {
@@ -37,6 +40,10 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   }
   res.status(status).json(body);
 };
+
+function isCsrfError(err: unknown): boolean {
+  return typeof err === "object" && err !== null && (err as { code?: unknown }).code === "EBADCSRFTOKEN";
+}
 
 function isBodyParserError(err: unknown): err is { status: number; type: string } {
   return typeof err === "object" && err !== null && "type" in err && "status" in err;

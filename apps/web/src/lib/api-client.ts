@@ -18,28 +18,76 @@ export class ApiError extends Error {
 type Json = Record<string, unknown> | unknown[];
 
 /**
+ * The session's CSRF token. The server sends it as an `x-csrf-token` response header (on
+ * /auth/me, /config and sign-in); every state-changing request echoes it back.
+ */
+const CSRF_HEADER = "x-csrf-token";
+let csrfToken: string | null = null;
+
+function rememberToken(value: string | null): void {
+  if (value) csrfToken = value;
+}
+
+async function refreshToken(): Promise<void> {
+  const res = await fetch("/api/auth/csrf", {
+    credentials: "same-origin",
+    headers: { accept: "application/json" },
+  });
+  const data = safeJson(await res.text()) as { token?: string } | undefined;
+  csrfToken = data?.token ?? null;
+}
+
+const isCsrfRefusal = (status: number, data: unknown) =>
+  status === 403 && (data as ApiErrorBody | undefined)?.error?.code === "csrf_invalid";
+
+/**
  * The only place the web app talks HTTP. Same-origin with the session cookie; errors become
  * ApiError carrying the server's message.
  */
-export async function apiRequest<T>(method: string, path: string, body?: Json | FormData): Promise<T> {
+export async function apiRequest<T>(
+  method: string,
+  path: string,
+  body?: Json | FormData,
+  retried = false,
+): Promise<T> {
   const isForm = typeof FormData !== "undefined" && body instanceof FormData;
+  const headers: Record<string, string> =
+    body && !isForm
+      ? { "content-type": "application/json", accept: "application/json" }
+      : { accept: "application/json" };
+  if (method !== "GET" && csrfToken) headers[CSRF_HEADER] = csrfToken;
   let res: Response;
   try {
     res = await fetch(`/api${path}`, {
       method,
       credentials: "same-origin",
-      headers: body && !isForm ? { "content-type": "application/json", accept: "application/json" } : { accept: "application/json" },
+      headers,
       body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
     });
   } catch {
-    throw new ApiError(0, "network", "Waymark's server could not be reached. Check your connection and try again.");
+    throw new ApiError(
+      0,
+      "network",
+      "Waymark's server could not be reached. Check your connection and try again.",
+    );
   }
+  rememberToken(res.headers?.get?.(CSRF_HEADER) ?? null);
   if (res.status === 204) return undefined as T;
   const text = await res.text();
   const data: unknown = text ? safeJson(text) : undefined;
+  // A new session (after sign-out or a timeout) has a new token: fetch it and try once more.
+  if (!retried && isCsrfRefusal(res.status, data)) {
+    await refreshToken();
+    return apiRequest<T>(method, path, body, true);
+  }
   if (!res.ok) {
     const err = (data as ApiErrorBody | undefined)?.error;
-    throw new ApiError(res.status, err?.code ?? "http_error", err?.message ?? `The server answered ${res.status}.`, err?.details);
+    throw new ApiError(
+      res.status,
+      err?.code ?? "http_error",
+      err?.message ?? `The server answered ${res.status}.`,
+      err?.details,
+    );
   }
   return data as T;
 }
@@ -56,26 +104,53 @@ function safeJson(text: string): unknown {
  * Sends a multipart form with upload progress (0–1) reported as the bytes go out. The one use of
  * XMLHttpRequest in the app: fetch cannot report upload progress. Same errors as apiRequest.
  */
-export function uploadWithProgress<T>(path: string, form: FormData, onProgress?: (fraction: number) => void, signal?: AbortSignal): Promise<T> {
+export function uploadWithProgress<T>(
+  path: string,
+  form: FormData,
+  onProgress?: (fraction: number) => void,
+  signal?: AbortSignal,
+  retried = false,
+): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", `/api${path}`);
     xhr.withCredentials = true;
     xhr.setRequestHeader("accept", "application/json");
+    if (csrfToken) xhr.setRequestHeader(CSRF_HEADER, csrfToken);
     xhr.upload.onprogress = (e) => {
       if (e.lengthComputable && e.total > 0) onProgress?.(Math.min(1, e.loaded / e.total));
     };
     xhr.onload = () => {
       onProgress?.(1);
       const data: unknown = xhr.responseText ? safeJson(xhr.responseText) : undefined;
+      if (!retried && isCsrfRefusal(xhr.status, data)) {
+        refreshToken()
+          .then(() => uploadWithProgress<T>(path, form, onProgress, signal, true))
+          .then(resolve, reject);
+        return;
+      }
       if (xhr.status >= 200 && xhr.status < 300) {
         resolve(data as T);
         return;
       }
       const err = (data as ApiErrorBody | undefined)?.error;
-      reject(new ApiError(xhr.status, err?.code ?? "http_error", err?.message ?? uploadStatusMessage(xhr.status), err?.details));
+      reject(
+        new ApiError(
+          xhr.status,
+          err?.code ?? "http_error",
+          err?.message ?? uploadStatusMessage(xhr.status),
+          err?.details,
+        ),
+      );
     };
-    xhr.onerror = () => reject(new ApiError(0, "network", "Waymark's server could not be reached. Check your connection and try again."));
+    xhr.onerror = () =>
+      reject(
+        new ApiError(
+          0,
+          "network",
+          "Waymark's server could not be reached. Check your connection and try again.",
+        ),
+      );
     xhr.onabort = () => reject(new ApiError(0, "aborted", "The upload was cancelled."));
     signal?.addEventListener("abort", () => xhr.abort());
     xhr.send(form);

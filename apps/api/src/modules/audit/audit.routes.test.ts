@@ -1,6 +1,6 @@
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { signedIn } from "../../test-support/agents.js";
+import { anon, signedIn } from "../../test-support/agents.js";
 import { makeTestApp } from "../../test-support/test-app.js";
 import { neutralizeCell } from "./audit-csv.js";
 
@@ -14,7 +14,7 @@ beforeAll(async () => {
 
 describe("audit trail", () => {
   it("records sign-ins and failed sign-ins, filterable by action and actor", async () => {
-    await request(t.app)
+    await (await anon(t.app))
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: "nope" })
       .expect(401);

@@ -1,4 +1,5 @@
 import request from "supertest";
+import { anon } from "../../test-support/agents.js";
 import { beforeAll, describe, expect, it } from "vitest";
 import { makeTestApp } from "../../test-support/test-app.js";
 import { DEMO_USERS } from "../../db/seeds/demo-users.js";
@@ -16,7 +17,9 @@ describe("POST /api/auth/login", () => {
   it.each(DEMO_USERS)(
     "signs in the demo $role and sets an httpOnly SameSite=Lax cookie",
     async ({ email, role }) => {
-      const res = await request(app.app)
+      const res = await (
+        await anon(app.app)
+      )
         .post("/api/auth/login")
         .send({ email, password: app.env.demoPassword });
       expect(res.status).toBe(200);
@@ -30,10 +33,14 @@ describe("POST /api/auth/login", () => {
   );
 
   it("gives 401 for a wrong password, with the same message as for an unknown e-mail", async () => {
-    const wrong = await request(app.app)
+    const wrong = await (
+      await anon(app.app)
+    )
       .post("/api/auth/login")
       .send({ email: "analyst@waymark.test", password: "nope" });
-    const unknown = await request(app.app)
+    const unknown = await (
+      await anon(app.app)
+    )
       .post("/api/auth/login")
       .send({ email: "nobody@waymark.test", password: "nope" });
     expect(wrong.status).toBe(401);
@@ -44,7 +51,11 @@ describe("POST /api/auth/login", () => {
   });
 
   it("rejects a malformed body with 400 naming the field", async () => {
-    const res = await request(app.app).post("/api/auth/login").send({ email: "not-an-email", password: "" });
+    const res = await (
+      await anon(app.app)
+    )
+      .post("/api/auth/login")
+      .send({ email: "not-an-email", password: "" });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe("validation_failed");
     expect(res.body.error.message).toMatch(/^email:/);
@@ -59,7 +70,7 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
   });
 
   it("returns the user while signed in and 401 after logout", async () => {
-    const agent = request.agent(app.app);
+    const agent = await anon(app.app);
     await agent
       .post("/api/auth/login")
       .send({ email: "reviewer@waymark.test", password: app.env.demoPassword })
@@ -71,7 +82,7 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
   });
 
   it("ends the session when the account is deactivated", async () => {
-    const agent = request.agent(app.app);
+    const agent = await anon(app.app);
     await agent
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: app.env.demoPassword })
@@ -93,3 +104,41 @@ describe("GET /api/health", () => {
     expect(res.body).toEqual(errorShape);
   });
 });
+
+describe("CSRF protection (synchronizer token, csrf-sync)", () => {
+  it("refuses a cross-site form post that cannot carry the token, even with a valid session cookie", async () => {
+    const agent = await signedInWithoutToken();
+    const res = await agent
+      .post("/api/studies")
+      .type("form")
+      .set("origin", "https://attacker.example")
+      .send("title=x&objective=y&outcomeName=z&outcomeUnit=&factorName=f&levels=a&levels=b&context=general");
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe("csrf_invalid");
+    const count = await app.ds.query(`SELECT count(*) AS n FROM studies`);
+    expect(Number(count[0].n)).toBe(0);
+  });
+
+  it("keeps the token valid across sign-in (the session id still changes)", async () => {
+    const agent = await anon(app.app);
+    const before = await agent.get("/api/auth/csrf");
+    const login = await agent
+      .post("/api/auth/login")
+      .send({ email: "analyst@waymark.test", password: app.env.demoPassword })
+      .expect(200);
+    expect(String(login.headers["set-cookie"])).toMatch(/waymark\.sid=/);
+    const after = await agent.get("/api/auth/csrf");
+    expect(after.body.token).toBe(before.body.token);
+  });
+});
+
+/** A browser that is signed in (has the cookie) but never read the token: what a forged cross-site post looks like. */
+async function signedInWithoutToken() {
+  const agent = await anon(app.app);
+  await agent
+    .post("/api/auth/login")
+    .send({ email: "analyst@waymark.test", password: app.env.demoPassword })
+    .expect(200);
+  agent.set("x-csrf-token", "");
+  return agent;
+}

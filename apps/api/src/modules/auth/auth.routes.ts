@@ -1,6 +1,7 @@
 import type { RequestHandler } from "express";
 import type passport from "passport";
 import type { DataSource } from "typeorm";
+import { CSRF_HEADER, generateToken } from "../../auth/csrf.js";
 import { policy } from "../../auth/policy.js";
 import { signInThrottle } from "../../auth/sign-in-throttle.js";
 import type { Env } from "../../config/env.js";
@@ -33,7 +34,8 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
         return;
       }
       // passport 0.7 regenerates the session id on login, which defeats session fixation.
-      req.logIn(user, (e) => {
+      // keepSessionInfo keeps the CSRF token; the session id is still regenerated.
+      req.logIn(user, { session: true, keepSessionInfo: true }, (e) => {
         if (e) return next(e);
         (req.session as unknown as { startedAt: number }).startedAt = Date.now();
         ds.getRepository(User)
@@ -45,7 +47,7 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
               { action: "auth.sign-in", summary: `Signed in as ${user.role}` },
             ),
           )
-          .then(() => res.json({ user }))
+          .then(() => res.setHeader(CSRF_HEADER, generateToken(req)).json({ user }))
           .catch(next);
       });
     })(req, res, next);
@@ -67,10 +69,18 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
   };
 
   const me: RequestHandler = (req, res) => {
+    res.setHeader(CSRF_HEADER, generateToken(req));
     res.json({ user: req.user });
   };
 
   return [
+    {
+      method: "get",
+      path: "/csrf",
+      policy: policy.public,
+      summary: "The session's CSRF token, to send as x-csrf-token on every change",
+      handlers: [(req, res) => void res.json({ token: generateToken(req) })],
+    },
     {
       method: "post",
       path: "/login",

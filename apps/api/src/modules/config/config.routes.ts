@@ -1,3 +1,4 @@
+import { CSRF_HEADER, generateToken } from "../../auth/csrf.js";
 import { policy } from "../../auth/policy.js";
 import type { Env } from "../../config/env.js";
 import type { RouteSpec } from "../../http/route-table.js";
@@ -12,8 +13,9 @@ export function configRoutes(env: Env): RouteSpec[] {
       policy: policy.public,
       summary: "Public settings for the sign-in page",
       handlers: [
-        (_req, res) =>
-          void res.json(
+        // The sign-in page loads this first: it hands the browser its CSRF token too.
+        (req, res) =>
+          void res.setHeader(CSRF_HEADER, generateToken(req)).json(
             env.WAYMARK_DEMO
               ? {
                   demo: true,

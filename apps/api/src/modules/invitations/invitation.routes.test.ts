@@ -1,6 +1,6 @@
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { signedIn } from "../../test-support/agents.js";
+import { anon, signedIn } from "../../test-support/agents.js";
 import { makeTestApp } from "../../test-support/test-app.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
@@ -45,19 +45,19 @@ describe("invitations", () => {
     expect(rows[0].token_hash).not.toBe(token);
     const info = await request(t.app).get(`/api/invitations/${token}`).expect(200);
     expect(info.body.invitation).toMatchObject({ email: "new.reviewer@waymark.test", role: "reviewer" });
-    const weak = await request(t.app)
+    const weak = await (await anon(t.app))
       .post(`/api/invitations/${token}/accept`)
       .send({ displayName: "Noor Haddad", password: "password1234" })
       .expect(400);
     expect(weak.body.error.message).toMatch(/too common|easy to guess/);
-    const agent = request.agent(t.app);
+    const agent = await anon(t.app);
     const ok = await agent
       .post(`/api/invitations/${token}/accept`)
       .send({ displayName: "Noor Haddad", password: STRONG })
       .expect(201);
     expect(ok.body.user).toMatchObject({ email: "new.reviewer@waymark.test", role: "reviewer" });
     await agent.get("/api/auth/me").expect(200);
-    const reuse = await request(t.app)
+    const reuse = await (await anon(t.app))
       .post(`/api/invitations/${token}/accept`)
       .send({ displayName: "Again", password: STRONG })
       .expect(410);
@@ -96,7 +96,7 @@ describe("people and settings", () => {
     const writerAgent = await signedIn(t.app, "writer", t.env.demoPassword);
     await admin.patch(`/api/users/${writer.id}`).send({ active: false }).expect(200);
     await writerAgent.get("/api/auth/me").expect(401);
-    await request(t.app)
+    await (await anon(t.app))
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: t.env.demoPassword })
       .expect(401);

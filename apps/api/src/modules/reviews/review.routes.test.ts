@@ -1,6 +1,6 @@
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { signedIn } from "../../test-support/agents.js";
+import { anon, signedIn } from "../../test-support/agents.js";
 import { analysedStudy } from "../../test-support/analysed-study.js";
 import { lockedStudy } from "../../test-support/locked-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
@@ -136,7 +136,7 @@ describe("separation of duties", () => {
   it("is 401 signed out and 403 for writers", async () => {
     const { studyId } = await analysedStudy(analyst);
     await analyst.post(`/api/studies/${studyId}/submit`).send({}).expect(200);
-    await request(t.app)
+    await (await anon(t.app))
       .post(`/api/studies/${studyId}/approve`)
       .send({ password: "x", meaning: MEANING })
       .expect(401);
