@@ -1,4 +1,3 @@
-import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
 import { anon, signedIn } from "../../test-support/agents.js";
 import { analysedStudy } from "../../test-support/analysed-study.js";
