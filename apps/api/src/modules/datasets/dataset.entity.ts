@@ -1,12 +1,4 @@
-import {
-  Column,
-  Entity,
-  JoinColumn,
-  Index,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  type Relation,
-} from "typeorm";
+import { Column, Entity, JoinColumn, Index, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 import type { ExtractedGroups, ValidationReport } from "./extract-groups.js";

@@ -172,18 +172,56 @@ describe("dataset upload", () => {
     ],
   ];
 
-  it.each(bad)("refuses %s with the right status and stores nothing", async (_what, content, name, status, message) => {
+  it.each(bad)(
+    "refuses %s with the right status and stores nothing",
+    async (_what, content, name, status, message) => {
+      const id = await lockedStudy(analyst);
+      const before = await datasetRows();
+      const res = await analyst
+        .post(`/api/studies/${id}/datasets`)
+        .field("groupColumn", "Line")
+        .field("outcomeColumn", "Yield (g)")
+        .attach("file", typeof content === "string" ? Buffer.from(content) : content, name)
+        .expect(status);
+      expect(res.body.error.message).toMatch(message);
+      expect(await datasetRows()).toBe(before);
+      await request(t.app).get("/api/health").expect(200);
+    },
+  );
+
+  it("reads a semicolon-delimited file with a byte-order mark, and lists NaN text as non-numeric", async () => {
     const id = await lockedStudy(analyst);
-    const before = await datasetRows();
+    const csv =
+      "\uFEFFLine;Yield (g)\nNorth;10.5\nNorth;11\nNorth;NaN\nSouth;12\nSouth;12.5\nEast;9\nEast;9.5\n";
     const res = await analyst
       .post(`/api/studies/${id}/datasets`)
       .field("groupColumn", "Line")
       .field("outcomeColumn", "Yield (g)")
-      .attach("file", typeof content === "string" ? Buffer.from(content) : content, name)
-      .expect(status);
-    expect(res.body.error.message).toMatch(message);
-    expect(await datasetRows()).toBe(before);
-    await request(t.app).get("/api/health").expect(200);
+      .attach("file", Buffer.from(csv), "semi.csv")
+      .expect(201);
+    expect(res.body.dataset.report.groupsFound).toEqual([
+      { name: "North", n: 2 },
+      { name: "South", n: 2 },
+      { name: "East", n: 2 },
+    ]);
+    expect(res.body.dataset.report.excluded).toEqual([
+      { row: 4, reason: "non-numeric", value: "NaN", column: "Yield (g)" },
+    ]);
+  });
+
+  it("stores all-identical values and says which tests cannot run, without NaN", async () => {
+    const id = await lockedStudy(analyst);
+    const csv = "Line,Yield (g)\nNorth,5\nNorth,5\nSouth,5\nSouth,5\nEast,5\nEast,5\n";
+    const up = await analyst
+      .post(`/api/studies/${id}/datasets`)
+      .field("groupColumn", "Line")
+      .field("outcomeColumn", "Yield (g)")
+      .attach("file", Buffer.from(csv), "same.csv")
+      .expect(201);
+    const checks = await analyst.get(`/api/studies/${id}/datasets/${up.body.dataset.id}/checks`).expect(200);
+    expect(checks.body.checks.anova.available).toBe(false);
+    expect(checks.body.checks.warnings.join(" ")).toMatch(/identical/);
+    expect(JSON.stringify(checks.body)).not.toMatch(/NaN|Infinity|null,"reason":undefined/);
   });
 
   it("refuses a file above the size limit with 413", async () => {

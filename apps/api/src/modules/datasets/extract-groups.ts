@@ -121,7 +121,8 @@ export function extractGroups(
       `No data for the planned level${missingLevels.length > 1 ? "s" : ""} ${missingLevels.map((m) => `"${m}"`).join(", ")}.`,
     );
   const nonNumeric = excluded.filter((e) => e.reason === "non-numeric");
-  if (nonNumeric.some((e) => /^[+-]?\d+,\d+$/.test(e.value.trim()))) {
+  const decimalComma = nonNumeric.some((e) => /^[+-]?\d+,\d+$/.test(e.value.trim()));
+  if (decimalComma) {
     messages.push(
       "Some values use a decimal comma (e.g. 4,5); Waymark reads a decimal point. Convert the column and upload again.",
     );
@@ -134,6 +135,9 @@ export function extractGroups(
       `Group "${g.name}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
     );
   }
+  // When decimal commas emptied the groups, that is the cause to name first.
+  if (groups.length < 2 && decimalComma)
+    blocking.push(messages.find((m) => m.startsWith("Some values use a decimal comma"))!);
   if (groups.length < 2 && blocking.length === 0) {
     blocking.push(
       `Only ${groups.length} group${groups.length === 1 ? "" : "s"} with data; a comparison needs at least two.`,
@@ -141,7 +145,7 @@ export function extractGroups(
   }
   const rowsUsed = groups.reduce((s, g) => s + g.values.length, 0);
   const usable = blocking.length === 0;
-  const allMessages = [...blocking, ...messages.filter((m) => !m.startsWith("The "))];
+  const allMessages = [...new Set([...blocking, ...messages.filter((m) => !m.startsWith("The "))])];
 
   return {
     data: { groups },
