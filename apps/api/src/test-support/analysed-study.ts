@@ -3,7 +3,8 @@ import { lockedStudy } from "./locked-study.js";
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
-const CSV = [
+/** Invented yields of three lines, five values each. */
+export const YIELD_CSV = [
   "Line,Yield (g)",
   ...[10.1, 11.3, 9.8, 10.6, 10.9].map((v) => `North,${v}`),
   ...[12.0, 12.9, 13.4, 12.2, 11.9].map((v) => `South,${v}`),
@@ -17,7 +18,7 @@ export async function analysedStudy(analyst: Agent) {
     .post(`/api/studies/${studyId}/datasets`)
     .field("groupColumn", "Line")
     .field("outcomeColumn", "Yield (g)")
-    .attach("file", Buffer.from(CSV), "yield.csv")
+    .attach("file", Buffer.from(YIELD_CSV), "yield.csv")
     .expect(201);
   const run = await analyst
     .post(`/api/studies/${studyId}/analyses`)

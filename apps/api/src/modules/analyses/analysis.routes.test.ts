@@ -1,6 +1,7 @@
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
 import { signedIn } from "../../test-support/agents.js";
+import { YIELD_CSV } from "../../test-support/analysed-study.js";
 import { lockedStudy } from "../../test-support/locked-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
 
@@ -11,12 +12,7 @@ let studyId: number;
 let datasetId: number;
 
 // Invented values; the engine's numbers are checked against scipy/statsmodels in tests/reference.
-const CSV = [
-  "Line,Yield (g)",
-  ...[10.1, 11.3, 9.8, 10.6, 10.9].map((v) => `North,${v}`),
-  ...[12.0, 12.9, 13.4, 12.2, 11.9].map((v) => `South,${v}`),
-  ...[10.9, 11.8, 10.2, 11.1, 10.4].map((v) => `East,${v}`),
-].join("\n");
+const CSV = YIELD_CSV;
 
 beforeAll(async () => {
   t = await makeTestApp();

@@ -4,7 +4,7 @@ import { formatDateTime } from "@/lib/format";
 import type { ReviewStudy, StudyHistory } from "../types";
 import { ApproveForm } from "./approve-form";
 import { RequestChangesForm } from "./request-changes-form";
-import { ShortHash } from "./short-hash";
+import { ShortHash } from "@/components/ui/short-hash";
 
 type Choice = "approve" | "changes";
 

@@ -4,7 +4,7 @@ import { formatDateTime } from "@/lib/format";
 import { useStudyHistory } from "../api/get-study-history";
 import { STEP_LABELS } from "../labels";
 import type { ReviewRound, StudyHistory } from "../types";
-import { ShortHash } from "./short-hash";
+import { ShortHash } from "@/components/ui/short-hash";
 
 function DecisionLine({ round }: { round: ReviewRound }) {
   if (round.decision === "approved")

@@ -2,7 +2,7 @@ import { AttentionMarker } from "@/components/ui/attention-marker";
 import { formatAlpha, formatBounded, formatDateTime, formatStat } from "@/lib/format";
 import { ADJUST_LABELS, POLICY_LABELS, posthocLabel, testLabel } from "../labels";
 import type { ReviewAnalysis, ReviewStudy } from "../types";
-import { ShortHash } from "./short-hash";
+import { ShortHash } from "@/components/ui/short-hash";
 
 function Row({ term, children }: { term: string; children: React.ReactNode }) {
   return (

@@ -1,6 +1,6 @@
 import { formatBytes, formatDateTime } from "@/lib/format";
 import type { Dataset } from "../types";
-import { ShaDigest } from "./sha-digest";
+import { ShortHash } from "@/components/ui/short-hash";
 
 /** Every uploaded version of the data, newest first, with its fingerprint. */
 export function DatasetVersions({ datasets }: { datasets: Dataset[] }) {
@@ -28,7 +28,7 @@ export function DatasetVersions({ datasets }: { datasets: Dataset[] }) {
               <td className="p-2">{d.fileName}</td>
               <td className="num p-2 text-right">{formatBytes(d.sizeBytes)}</td>
               <td className="p-2">
-                <ShaDigest sha={d.sha256} />
+                <ShortHash hash={d.sha256} label="SHA-256" />
               </td>
               <td className="p-2">{d.uploadedBy?.displayName ?? "—"}</td>
               <td className="num p-2">{formatDateTime(d.uploadedAt)}</td>
