@@ -135,14 +135,14 @@ export function extractGroups(
       `Group "${g.name}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
     );
   }
-  // When decimal commas emptied the groups, that is the cause to name first.
-  if (groups.length < 2 && decimalComma)
-    blocking.push(messages.find((m) => m.startsWith("Some values use a decimal comma"))!);
   if (groups.length < 2 && blocking.length === 0) {
     blocking.push(
       `Only ${groups.length} group${groups.length === 1 ? "" : "s"} with data; a comparison needs at least two.`,
     );
   }
+  // When decimal commas are why the data cannot be used, that is the cause to name first.
+  const commaMessage = messages.find((m) => m.startsWith("Some values use a decimal comma"));
+  if (blocking.length > 0 && commaMessage) blocking.unshift(commaMessage);
   const rowsUsed = groups.reduce((s, g) => s + g.values.length, 0);
   const usable = blocking.length === 0;
   const allMessages = [...new Set([...blocking, ...messages.filter((m) => !m.startsWith("The "))])];

@@ -1,6 +1,7 @@
 import ExcelJS from "exceljs";
 import Papa from "papaparse";
 import { HttpError } from "../../http/errors.js";
+import { zipBoundsProblem } from "./zip-bounds.js";
 
 /** A parsed sheet: header names and the data rows as text, with each row's number in the file. */
 export interface Table {
@@ -64,9 +65,11 @@ function checkHeader(columns: string[]): string[] {
 export function parseCsv(bytes: Buffer): Table {
   const text = new TextDecoder("utf-8", { fatal: false }).decode(bytes).replace(/^\uFEFF/, "");
   if (text.trim() === "") throw invalid("The file is empty.");
+  // Stop one row past the bound, so a huge file costs no more than the bound to refuse.
   const parsed = Papa.parse<string[]>(text, {
     skipEmptyLines: "greedy",
     delimitersToGuess: [",", ";", "\t"],
+    preview: TABLE_LIMITS.maxRows + 2,
   });
   const data = parsed.data;
   const header = data[0];
@@ -74,7 +77,7 @@ export function parseCsv(bytes: Buffer): Table {
   const columns = checkHeader(header);
   if (data.length - 1 > TABLE_LIMITS.maxRows)
     throw invalid(
-      `The file has ${data.length - 1} data rows; Waymark reads at most ${TABLE_LIMITS.maxRows}.`,
+      `The file has more than ${TABLE_LIMITS.maxRows.toLocaleString("en")} data rows; Waymark reads at most that many.`,
     );
   // Line numbers as a spreadsheet shows them: the header is row 1.
   const rows = data.slice(1).map((cells, i) => ({ row: i + 2, cells }));
@@ -97,6 +100,8 @@ function cellText(v: ExcelJS.CellValue): string {
 }
 
 export async function parseXlsx(bytes: Buffer): Promise<Table> {
+  const tooBig = zipBoundsProblem(bytes);
+  if (tooBig) throw invalid(tooBig);
   const wb = new ExcelJS.Workbook();
   try {
     await wb.xlsx.load(bytes as unknown as ArrayBuffer);
