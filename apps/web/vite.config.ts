@@ -12,7 +12,9 @@ export default defineConfig({
     fs: { allow: ["../.."] },
     proxy: { "/api": { target: `http://localhost:${process.env.PORT ?? 3000}`, changeOrigin: false } },
   },
-  build: { outDir: "dist", sourcemap: true },
+  // The manifest (dist/.vite/manifest.json, not served: express.static ignores dot folders)
+  // lets bench/bundle-size.mjs tell the first load from the lazy route chunks.
+  build: { outDir: "dist", sourcemap: true, manifest: true },
   test: {
     environment: "jsdom",
     include: ["src/**/*.test.{ts,tsx}"],

@@ -13,6 +13,10 @@ export function PlotFigure({ options, label, caption }: { options: Plot.PlotOpti
     let chart: (SVGSVGElement | HTMLElement) | null = null;
     try {
       chart = Plot.plot({ style: { fontFamily: "var(--font-sans)", fontSize: "12px", background: "transparent" }, ...options });
+      // The wrapper is the accessible image (role="img" with a label); Plot's own aria-labels on
+      // inner groups are not allowed on elements without a role, and say nothing a reader needs.
+      for (const el of chart.querySelectorAll("[aria-label]")) el.removeAttribute("aria-label");
+      chart.setAttribute("aria-hidden", "true");
       node.replaceChildren(chart);
     } catch {
       node.replaceChildren(document.createTextNode("This chart could not be drawn."));
