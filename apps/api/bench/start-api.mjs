@@ -3,7 +3,7 @@
 // stored analyses) and NODE_ENV=production. Builds the API first when dist is missing.
 // Used by apps/api/bench/load.mjs and apps/web/bench/bundle-size.mjs.
 import { execFileSync, spawn } from "node:child_process";
-import { existsSync, mkdtempSync, openSync, readFileSync, rmSync } from "node:fs";
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, openSync, readFileSync, rmSync } from "node:fs";
 import net from "node:net";
 import { tmpdir } from "node:os";
 import path from "node:path";
@@ -31,10 +31,10 @@ export function freePort() {
 
 /**
  * Starts the API and waits until /api/health answers (at most `timeoutMs`).
- * Returns { baseUrl, port, stop() }; stop() sends SIGTERM, waits for the exit and removes
- * the temporary folder.
+ * Returns { baseUrl, port, stop() }; stop({ keepLogAs }) sends SIGTERM, waits for the exit,
+ * copies the server's log to `keepLogAs` when given, and removes the temporary folder.
  */
-export async function startApi({ timeoutMs = 60_000, extraEnv = {} } = {}) {
+export async function startApi({ timeoutMs = 60_000, extraEnv = {}, nodeArgs = [] } = {}) {
   if (!existsSync(serverJs)) {
     console.log("apps/api/dist/server.js is missing: building @waymark/api …");
     execFileSync("npm", ["run", "build", "-w", "@waymark/api"], { cwd: repoRoot, stdio: "inherit" });
@@ -43,7 +43,7 @@ export async function startApi({ timeoutMs = 60_000, extraEnv = {} } = {}) {
   const dir = mkdtempSync(path.join(tmpdir(), "waymark-bench-"));
   const logFile = path.join(dir, "server.log");
   const log = openSync(logFile, "a");
-  const child = spawn(process.execPath, [serverJs], {
+  const child = spawn(process.execPath, [...nodeArgs, serverJs], {
     cwd: repoRoot,
     env: {
       ...process.env,
@@ -59,13 +59,17 @@ export async function startApi({ timeoutMs = 60_000, extraEnv = {} } = {}) {
   const baseUrl = `http://127.0.0.1:${port}`;
 
   let stopped = false;
-  const stop = async () => {
+  const stop = async ({ keepLogAs } = {}) => {
     if (stopped) return;
     stopped = true;
     if (child.exitCode === null && child.signalCode === null) child.kill("SIGTERM");
     const timer = setTimeout(() => child.kill("SIGKILL"), 10_000);
     await exited;
     clearTimeout(timer);
+    if (keepLogAs) {
+      mkdirSync(path.dirname(keepLogAs), { recursive: true });
+      copyFileSync(logFile, keepLogAs);
+    }
     rmSync(dir, { recursive: true, force: true });
   };
 

@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import Database from "better-sqlite3";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD } from "../config/env.js";
 import { startApi, type ApiProcess } from "../test-support/api-process.js";
@@ -10,10 +11,11 @@ import { readStoredInvariants } from "./stored-invariants.js";
 
 /**
  * Kills the real server process with SIGKILL in the middle of a large upload and of an
- * analysis, restarts it on the same file and checks nothing half-written survived. The kill
- * lands at half the time the same request took when left to finish; whether it then falls
- * before or after the commit varies with the machine, so the checks hold either way: a crash
- * may lose the request, never leave part of it.
+ * analysis, restarts it on the same file and checks nothing half-written survived. To land the
+ * kill while the request is writing, not merely parsing or computing, the test empties the WAL
+ * first and kills as soon as it grows (a 10 MB dataset spills pages into the WAL before its
+ * commit). Whether the kill then falls before or after the commit varies with the machine, so
+ * the checks hold either way: a crash may lose the request, never leave part of it.
  */
 const TIMEOUT = 180_000;
 const ROWS = 1_000_000;
@@ -32,15 +34,32 @@ async function restart(): Promise<void> {
   analyst = await HttpSession.signIn(api.url, "analyst@waymark.test", DEMO_PASSWORD);
 }
 
-/** Sends a request, SIGKILLs the server `afterMs` later and reports how far the request got. */
-async function killDuring(send: () => Promise<Response>, afterMs: number): Promise<string> {
+const walBytes = () => (fs.existsSync(`${dbPath}-wal`) ? fs.statSync(`${dbPath}-wal`).size : 0);
+
+/** Moves everything into the main file and empties the WAL, so the next write shows as growth. */
+function emptyWal(): void {
+  const db = new Database(dbPath);
+  db.pragma("wal_checkpoint(TRUNCATE)");
+  db.close();
+}
+
+/**
+ * Sends a request and SIGKILLs the server once the WAL holds at least `walAtLeast` bytes, or
+ * after `giveUpMs` if it never does; reports when the kill fell and how far the request got.
+ */
+async function killWhileWriting(send: () => Promise<Response>, walAtLeast: number, giveUpMs: number): Promise<string> {
+  emptyWal();
+  let answered = false;
   const pending = send().then(
-    (r) => `answered ${r.status} before the kill`,
+    (r) => ((answered = true), `answered ${r.status} before the kill`),
     (e: unknown) => `cut off (${e instanceof Error ? e.message : String(e)})`,
   );
-  await new Promise((r) => setTimeout(r, afterMs));
+  const t0 = performance.now();
+  while (walBytes() < walAtLeast && !answered && performance.now() - t0 < giveUpMs)
+    await new Promise((r) => setTimeout(r, 2));
+  const at = `${walBytes()} WAL bytes at ${(performance.now() - t0).toFixed(0)} ms`;
   await api.kill();
-  return pending;
+  return `killed with ${at}: ${await pending}`;
 }
 
 function expectConsistent(inv: ReturnType<typeof readStoredInvariants>): void {
@@ -99,8 +118,8 @@ describe("a server killed mid-request leaves a sound database", () => {
     expect(first.status, JSON.stringify(body)).toBe(201);
     datasetId = body.dataset.id;
 
-    const outcome = await killDuring(upload, ms / 2);
-    console.log(`upload of ${(csv.length / 1e6).toFixed(1)} MB took ${ms.toFixed(0)} ms; killed at ${(ms / 2).toFixed(0)} ms: ${outcome}`);
+    const outcome = await killWhileWriting(upload, 1 << 20, 3 * ms);
+    console.log(`upload of ${(csv.length / 1e6).toFixed(1)} MB took ${ms.toFixed(0)} ms; ${outcome}`);
     expectConsistent(readStoredInvariants(dbPath));
 
     await restart();
@@ -117,8 +136,10 @@ describe("a server killed mid-request leaves a sound database", () => {
     const [first, ms] = await timed(run);
     expect(first.status, await first.text()).toBe(201);
 
-    const outcome = await killDuring(run, ms / 2);
-    console.log(`analysis of ${ROWS} values took ${ms.toFixed(0)} ms; killed at ${(ms / 2).toFixed(0)} ms: ${outcome}`);
+    // Waiting for the WAL's 32-byte header plus one whole frame (24 + 4096 bytes) puts this kill
+    // inside the result's write transaction or just after its commit.
+    const outcome = await killWhileWriting(run, 32 + 24 + 4096, 3 * ms);
+    console.log(`analysis of ${ROWS} values took ${ms.toFixed(0)} ms; ${outcome}`);
     expectConsistent(readStoredInvariants(dbPath));
 
     await restart();
