@@ -99,6 +99,15 @@ describe("GET /api/health", () => {
     expect(res.body).toEqual({ status: "ok", version: expect.stringMatching(/^\d+\.\d+\.\d+/) });
   });
 
+  it("sends security headers with a Content-Security-Policy that allows only our own origin (helmet)", async () => {
+    const res = await (await anon(app.app)).get("/api/health").expect(200);
+    const csp = String(res.headers["content-security-policy"]);
+    expect(csp).toMatch(/default-src 'self'/);
+    expect(csp).toMatch(/script-src 'self'(;|$)/);
+    expect(res.headers["x-content-type-options"]).toBe("nosniff");
+    expect(res.headers["x-powered-by"]).toBeUndefined();
+  });
+
   it("unknown API paths get 404 in the error shape", async () => {
     const res = await request(app.app).get("/api/nowhere").expect(404);
     expect(res.body).toEqual(errorShape);
