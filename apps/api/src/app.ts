@@ -87,7 +87,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   const routes = [
     ...mountRoutes(api, "/health", healthRoutes()),
     ...mountRoutes(api, "/config", configRoutes(env)),
-    ...mountRoutes(api, "/auth", authRoutes(pp, ds, env)),
+    ...mountRoutes(api, "/auth", authRoutes(pp, ds, env, sessionStore)),
     ...mountRoutes(api, "/studies", studyRoutes(ds)),
     ...mountRoutes(api, "/studies", datasetRoutes(ds, env)),
     ...mountRoutes(api, "/studies", analysisRoutes(ds)),

@@ -19,6 +19,7 @@ export const AUDIT_ACTIONS = [
   "user.role-changed",
   "user.deactivated",
   "user.reactivated",
+  "user.password-changed",
   "organization.settings-changed",
   "report.downloaded",
   "mail.failed",

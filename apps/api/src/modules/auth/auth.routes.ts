@@ -10,10 +10,13 @@ import { HttpError } from "../../http/errors.js";
 import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { recordAudit } from "../audit/audit.service.js";
-import { User } from "../users/user.entity.js";
-import { loginSchema } from "./auth.schema.js";
+import type { TypeormSessionStore } from "../sessions/typeorm-session-store.js";
+import { User, toPublicUser } from "../users/user.entity.js";
+import { hashPassword, verifyPassword } from "../../auth/password.js";
+import { passwordProblem } from "../../auth/password-policy.js";
+import { loginSchema, passwordChangeSchema } from "./auth.schema.js";
 
-export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env): RouteSpec[] {
+export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env, sessions: TypeormSessionStore): RouteSpec[] {
   const throttle = signInThrottle({
     perAccount: env.SIGNIN_LIMIT_PER_ACCOUNT,
     perIp: env.SIGNIN_LIMIT_PER_IP,
@@ -68,6 +71,22 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
     });
   };
 
+  /** Changes the password and ends every session of the account, then signs this one in afresh. */
+  const changePassword: RequestHandler = async (req, res, next) => {
+    const body = parseBody(passwordChangeSchema, req.body);
+    const users = ds.getRepository(User);
+    const row = await users.createQueryBuilder("u").addSelect("u.passwordHash").where("u.id = :id", { id: req.user!.id }).getOneOrFail();
+    if (!(await verifyPassword(body.currentPassword, row.passwordHash))) {
+      throw new HttpError(403, "wrong_password", "currentPassword: That is not your current password.");
+    }
+    const problem = passwordProblem(body.newPassword, [row.email, row.displayName]);
+    if (problem) throw new HttpError(400, "weak_password", `newPassword: ${problem}`);
+    await users.update({ id: row.id }, { passwordHash: await hashPassword(body.newPassword, env.BCRYPT_COST) });
+    await recordAudit(ds, { user: req.user!, ip: req.ip ?? null }, { action: "user.password-changed", summary: "Changed their password; all sessions ended" });
+    await sessions.destroyForUser(row.id);
+    req.logIn(toPublicUser(row), { session: true, keepSessionInfo: true }, (e) => (e ? next(e) : res.status(204).end()));
+  };
+
   const me: RequestHandler = (req, res) => {
     res.setHeader(CSRF_HEADER, generateToken(req));
     res.json({ user: req.user });
@@ -90,5 +109,6 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
     },
     { method: "post", path: "/logout", policy: policy.signedIn, handlers: [logout], summary: "Sign out" },
     { method: "get", path: "/me", policy: policy.signedIn, handlers: [me], summary: "The signed-in user" },
+    { method: "put", path: "/password", policy: policy.signedIn, handlers: [changePassword], summary: "Change your password (ends all your sessions)" },
   ];
 }
