@@ -59,7 +59,8 @@ try {
   const studies = [];
   for (const { id } of list.studies) {
     const { study } = await (await fetch(`${api.baseUrl}/api/studies/${id}`, { headers: probe })).json();
-    if (!study.latestDataset || !study.latestAnalysisId) throw new Error(`Demo study ${id} has no dataset or analysis`);
+    if (!study.latestDataset || !study.latestAnalysisId)
+      throw new Error(`Demo study ${id} has no dataset or analysis`);
     studies.push({ id, datasetId: study.latestDataset.id, analysisId: study.latestAnalysisId });
   }
   if (studies.length === 0) throw new Error("No demo studies were seeded");
@@ -76,7 +77,8 @@ try {
     const headers = { cookie: session.cookie, accept: "application/json" };
     const tag = (kind) => (status, body) => {
       state.pending.push(kind);
-      if ((status < 200 || status > 299) && errorBodies.size < 5) errorBodies.add(`${kind} ${status} ${String(body).slice(0, 300)}`);
+      if ((status < 200 || status > 299) && errorBodies.size < 5)
+        errorBodies.add(`${kind} ${status} ${String(body).slice(0, 300)}`);
     };
     const reqs = [];
     for (const s of studies) {
@@ -126,7 +128,10 @@ try {
   const reads = summarize(samples.filter((s) => s.kind.startsWith("read:")));
   const runs = summarize(samples.filter((s) => s.kind === "run"));
   const perPath = Object.fromEntries(
-    ["read:list", "read:study", "read:analysis"].map((k) => [k, summarize(samples.filter((s) => s.kind === k))]),
+    ["read:list", "read:study", "read:analysis"].map((k) => [
+      k,
+      summarize(samples.filter((s) => s.kind === k)),
+    ]),
   );
   const other = samples.filter((s) => !s.kind.startsWith("read:") && s.kind !== "run").length;
   const transportErrors = result.errors + result.timeouts;
@@ -135,7 +140,8 @@ try {
     measuredAt: new Date().toISOString(),
     machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model ?? null, node: process.version },
     setup: {
-      server: "node apps/api/dist/server.js, NODE_ENV=production, WAYMARK_DEMO=1, fresh SQLite in a temp folder",
+      server:
+        "node apps/api/dist/server.js, NODE_ENV=production, WAYMARK_DEMO=1, fresh SQLite in a temp folder",
       connections: CONNECTIONS,
       sessions: sessions.length,
       durationS: DURATION_S,
@@ -174,7 +180,9 @@ try {
 
   const line = (name, s) =>
     `  ${name.padEnd(14)} ${String(s.requests).padStart(7)} req ${String(s.perSecond).padStart(7)}/s  p50 ${s.latencyMs.p50} ms  p95 ${s.latencyMs.p95} ms  p99 ${s.latencyMs.p99} ms  non-2xx ${s.non2xx}`;
-  console.log(`\nAPI load: ${CONNECTIONS} connections, ${DURATION_S} s, ${os.cpus().length} cores (load generator on the same machine)`);
+  console.log(
+    `\nAPI load: ${CONNECTIONS} connections, ${DURATION_S} s, ${os.cpus().length} cores (load generator on the same machine)`,
+  );
   console.log(line("reads", reads));
   for (const [k, v] of Object.entries(perPath)) console.log(line(`  ${k.slice(5)}`, v));
   console.log(line("analysis runs", runs));

@@ -45,10 +45,13 @@ function sizeOf(file) {
   return sizeCache.get(file);
 }
 const sum = (files) =>
-  files.reduce((acc, f) => {
-    const s = sizeOf(f);
-    return { raw: acc.raw + s.raw, gzip: acc.gzip + s.gzip };
-  }, { raw: 0, gzip: 0 });
+  files.reduce(
+    (acc, f) => {
+      const s = sizeOf(f);
+      return { raw: acc.raw + s.raw, gzip: acc.gzip + s.gzip };
+    },
+    { raw: 0, gzip: 0 },
+  );
 const inKb = ({ raw, gzip }) => ({ rawKB: kb(raw), gzipKB: kb(gzip) });
 
 const assets = readdirSync(path.join(dist, "assets"))
@@ -80,7 +83,9 @@ const staticClosure = (key, seen = new Set()) => {
   return seen;
 };
 const filesOf = (keys) =>
-  [...keys].flatMap((k) => [manifest[k].file, ...(manifest[k].css ?? [])]).filter((f) => /\.(js|css)$/.test(f));
+  [...keys]
+    .flatMap((k) => [manifest[k].file, ...(manifest[k].css ?? [])])
+    .filter((f) => /\.(js|css)$/.test(f));
 
 let manifestCheck = "no manifest (build.manifest is off): lazy routes not reported";
 const lazyRoutes = [];
@@ -135,9 +140,13 @@ try {
       const context = await browser.newContext();
       const page = await context.newPage();
       await page.goto(`${api.baseUrl}/sign-in`, { waitUntil: "load" });
-      await page.waitForFunction(() => performance.getEntriesByName("first-contentful-paint").length > 0, null, {
-        timeout: 30_000,
-      });
+      await page.waitForFunction(
+        () => performance.getEntriesByName("first-contentful-paint").length > 0,
+        null,
+        {
+          timeout: 30_000,
+        },
+      );
       loads.push(
         await page.evaluate(() => {
           const nav = performance.getEntriesByType("navigation")[0];
@@ -189,7 +198,8 @@ const outDir = path.join(repoRoot, "bench", "results");
 mkdirSync(outDir, { recursive: true });
 writeFileSync(path.join(outDir, "web.json"), `${JSON.stringify(figures, null, 2)}\n`);
 
-const row = (name, s) => `  ${name.padEnd(44)} ${String(s.rawKB).padStart(8)} KB ${String(s.gzipKB).padStart(8)} KB gzip`;
+const row = (name, s) =>
+  `  ${name.padEnd(44)} ${String(s.rawKB).padStart(8)} KB ${String(s.gzipKB).padStart(8)} KB gzip`;
 console.log("\nWeb bundle (KB = 1024 bytes)");
 for (const a of figures.assets) console.log(row(a.file, a));
 console.log(row("all JS/CSS", figures.allAssets));
@@ -198,7 +208,9 @@ console.log(row("first load", figures.firstLoad));
 console.log(`  ${manifestCheck}`);
 console.log("Lazy routes (chunk / added beyond the first load):");
 for (const r of lazyRoutes)
-  console.log(`  ${r.route.padEnd(44)} ${r.chunkOnly.gzipKB} KB gzip / +${r.addedToFirstLoad.gzipKB} KB gzip`);
+  console.log(
+    `  ${r.route.padEnd(44)} ${r.chunkOnly.gzipKB} KB gzip / +${r.addedToFirstLoad.gzipKB} KB gzip`,
+  );
 console.log(
   `Budget (not asserted): first load < ${BUDGET_FIRST_LOAD_GZIP_KB} KB gzip — ${figures.budget.met ? "met" : "NOT met"} (${figures.firstLoad.gzipKB} KB)`,
 );

@@ -12,6 +12,7 @@ import type { Study } from "../studies/study.entity.js";
 import { Analysis } from "./analysis.entity.js";
 import { analysisOptions } from "./analysis-options.js";
 import { MIN_JUSTIFICATION } from "./analysis.schema.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 /** Runs the engine on a stored dataset under the study's plan, off the request thread. */
 async function runEngine(study: Study, dataset: Dataset) {
@@ -30,7 +31,15 @@ export async function runChecks(study: Study, dataset: Dataset) {
   const { result } = await runEngine(study, dataset);
   const total = dataset.observations.groups.reduce((s, g) => s + g.values.length, 0);
   const observations =
-    total <= CHECKS_MAX_POINTS ? { groups: dataset.observations.groups.map((g) => ({ name: g.name, values: g.values.map(Number), rows: g.rows })) } : null;
+    total <= CHECKS_MAX_POINTS
+      ? {
+          groups: dataset.observations.groups.map((g) => ({
+            name: g.name,
+            values: g.values.map(Number),
+            rows: g.rows,
+          })),
+        }
+      : null;
   return { checks: result, readings: checkReadings(result as unknown as ResultView), observations };
 }
 
@@ -66,7 +75,7 @@ export async function runAnalysis(
       `Choosing ${chosen} instead of the recommended ${recommended} needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
     );
   }
-  const id = await ds.transaction(async (tx) => {
+  const id = await inTransaction(ds, async (tx) => {
     const repo = tx.getRepository(Analysis);
     const saved = await repo.save(
       repo.create({

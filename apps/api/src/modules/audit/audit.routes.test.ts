@@ -13,7 +13,9 @@ beforeAll(async () => {
 
 describe("audit trail", () => {
   it("records sign-ins and failed sign-ins, filterable by action and actor", async () => {
-    await (await anon(t.app))
+    await (
+      await anon(t.app)
+    )
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: "nope" })
       .expect(401);

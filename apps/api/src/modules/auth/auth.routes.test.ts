@@ -156,17 +156,41 @@ describe("PUT /api/auth/password", () => {
   it("checks the current password and the new one's strength, then ends every other session", async () => {
     const here = await signedIn(app.app, "writer", app.env.demoPassword);
     const elsewhere = await signedIn(app.app, "writer", app.env.demoPassword);
-    const wrong = await here.put("/api/auth/password").send({ currentPassword: "nope", newPassword: "violet-harbour-kettle-19" }).expect(403);
+    const wrong = await here
+      .put("/api/auth/password")
+      .send({ currentPassword: "nope", newPassword: "violet-harbour-kettle-19" })
+      .expect(403);
     expect(wrong.body.error.message).toMatch(/^currentPassword:/);
-    const weak = await here.put("/api/auth/password").send({ currentPassword: app.env.demoPassword, newPassword: "password1234" }).expect(400);
+    const weak = await here
+      .put("/api/auth/password")
+      .send({ currentPassword: app.env.demoPassword, newPassword: "password1234" })
+      .expect(400);
     expect(weak.body.error.message).toMatch(/^newPassword:/);
-    await here.put("/api/auth/password").send({ currentPassword: app.env.demoPassword, newPassword: "violet-harbour-kettle-19" }).expect(204);
+    await here
+      .put("/api/auth/password")
+      .send({ currentPassword: app.env.demoPassword, newPassword: "violet-harbour-kettle-19" })
+      .expect(204);
     await elsewhere.get("/api/auth/me").expect(401);
     await here.get("/api/auth/me").expect(200);
-    await (await anon(app.app)).post("/api/auth/login").send({ email: "writer@waymark.test", password: app.env.demoPassword }).expect(401);
-    await (await anon(app.app)).post("/api/auth/login").send({ email: "writer@waymark.test", password: "violet-harbour-kettle-19" }).expect(200);
+    await (
+      await anon(app.app)
+    )
+      .post("/api/auth/login")
+      .send({ email: "writer@waymark.test", password: app.env.demoPassword })
+      .expect(401);
+    await (
+      await anon(app.app)
+    )
+      .post("/api/auth/login")
+      .send({ email: "writer@waymark.test", password: "violet-harbour-kettle-19" })
+      .expect(200);
     // Put the demo password back for the other tests in this file.
-    await here.put("/api/auth/password").send({ currentPassword: "violet-harbour-kettle-19", newPassword: "quartz-meadow-lantern-58" }).expect(204);
-    await app.ds.query(`UPDATE users SET password_hash = (SELECT password_hash FROM users WHERE email = 'analyst@waymark.test') WHERE email = 'writer@waymark.test'`);
+    await here
+      .put("/api/auth/password")
+      .send({ currentPassword: "violet-harbour-kettle-19", newPassword: "quartz-meadow-lantern-58" })
+      .expect(204);
+    await app.ds.query(
+      `UPDATE users SET password_hash = (SELECT password_hash FROM users WHERE email = 'analyst@waymark.test') WHERE email = 'writer@waymark.test'`,
+    );
   });
 });

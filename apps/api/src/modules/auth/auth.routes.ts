@@ -16,7 +16,12 @@ import { hashPassword, verifyPassword } from "../../auth/password.js";
 import { passwordProblem } from "../../auth/password-policy.js";
 import { loginSchema, passwordChangeSchema } from "./auth.schema.js";
 
-export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env, sessions: TypeormSessionStore): RouteSpec[] {
+export function authRoutes(
+  pp: passport.PassportStatic,
+  ds: DataSource,
+  env: Env,
+  sessions: TypeormSessionStore,
+): RouteSpec[] {
   const throttle = signInThrottle({
     perAccount: env.SIGNIN_LIMIT_PER_ACCOUNT,
     perIp: env.SIGNIN_LIMIT_PER_IP,
@@ -75,16 +80,29 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
   const changePassword: RequestHandler = async (req, res, next) => {
     const body = parseBody(passwordChangeSchema, req.body);
     const users = ds.getRepository(User);
-    const row = await users.createQueryBuilder("u").addSelect("u.passwordHash").where("u.id = :id", { id: req.user!.id }).getOneOrFail();
+    const row = await users
+      .createQueryBuilder("u")
+      .addSelect("u.passwordHash")
+      .where("u.id = :id", { id: req.user!.id })
+      .getOneOrFail();
     if (!(await verifyPassword(body.currentPassword, row.passwordHash))) {
       throw new HttpError(403, "wrong_password", "currentPassword: That is not your current password.");
     }
     const problem = passwordProblem(body.newPassword, [row.email, row.displayName]);
     if (problem) throw new HttpError(400, "weak_password", `newPassword: ${problem}`);
-    await users.update({ id: row.id }, { passwordHash: await hashPassword(body.newPassword, env.BCRYPT_COST) });
-    await recordAudit(ds, { user: req.user!, ip: req.ip ?? null }, { action: "user.password-changed", summary: "Changed their password; all sessions ended" });
+    await users.update(
+      { id: row.id },
+      { passwordHash: await hashPassword(body.newPassword, env.BCRYPT_COST) },
+    );
+    await recordAudit(
+      ds,
+      { user: req.user!, ip: req.ip ?? null },
+      { action: "user.password-changed", summary: "Changed their password; all sessions ended" },
+    );
     await sessions.destroyForUser(row.id);
-    req.logIn(toPublicUser(row), { session: true, keepSessionInfo: true }, (e) => (e ? next(e) : res.status(204).end()));
+    req.logIn(toPublicUser(row), { session: true, keepSessionInfo: true }, (e) =>
+      e ? next(e) : res.status(204).end(),
+    );
   };
 
   const me: RequestHandler = (req, res) => {
@@ -109,6 +127,12 @@ export function authRoutes(pp: passport.PassportStatic, ds: DataSource, env: Env
     },
     { method: "post", path: "/logout", policy: policy.signedIn, handlers: [logout], summary: "Sign out" },
     { method: "get", path: "/me", policy: policy.signedIn, handlers: [me], summary: "The signed-in user" },
-    { method: "put", path: "/password", policy: policy.signedIn, handlers: [changePassword], summary: "Change your password (ends all your sessions)" },
+    {
+      method: "put",
+      path: "/password",
+      policy: policy.signedIn,
+      handlers: [changePassword],
+      summary: "Change your password (ends all your sessions)",
+    },
   ];
 }

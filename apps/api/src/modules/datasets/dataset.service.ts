@@ -9,6 +9,7 @@ import { Dataset } from "./dataset.entity.js";
 import { runTask } from "../../workers/task-pool.js";
 import { guessColumns, type ColumnChoice } from "./extract-groups.js";
 import { safeFileName } from "./upload-middleware.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 export interface UploadedFile {
   originalname: string;
@@ -68,7 +69,7 @@ export async function storeDataset(
     );
   }
   const sha256 = createHash("sha256").update(file.buffer).digest("hex");
-  const dataset = await ds.transaction(async (tx) => {
+  const dataset = await inTransaction(ds, async (tx) => {
     const repo = tx.getRepository(Dataset);
     const last = await repo.findOne({
       where: { studyId },

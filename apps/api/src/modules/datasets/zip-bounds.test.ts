@@ -15,7 +15,9 @@ describe("zipBoundsProblem (ZIP central directory, PKWARE APPNOTE §4.3.12)", ()
     zip.file("xl/worksheets/sheet1.xml", "0".repeat(2 * 1024 * 1024));
     const bytes = await zip.generateAsync({ type: "nodebuffer", compression: "DEFLATE" });
     expect(bytes.length).toBeLessThan(50_000); // 2 MB of zeros compress to a few KB: a small bomb
-    expect(zipBoundsProblem(bytes, { maxEntries: 100, maxExpandedBytes: 1024 * 1024 })).toMatch(/expand to more than 1 MB/);
+    expect(zipBoundsProblem(bytes, { maxEntries: 100, maxExpandedBytes: 1024 * 1024 })).toMatch(
+      /expand to more than 1 MB/,
+    );
     expect(zipBoundsProblem(bytes, { maxEntries: 100, maxExpandedBytes: 4 * 1024 * 1024 })).toBeNull();
   });
 

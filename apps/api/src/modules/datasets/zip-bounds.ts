@@ -27,7 +27,8 @@ export function zipBoundsProblem(bytes: Buffer, bounds: ZipBounds = XLSX_BOUNDS)
   if (eocd < 0) return "The workbook could not be read; it may be damaged or not an .xlsx file.";
   const entries = bytes.readUInt16LE(eocd + 10);
   const cdOffset = bytes.readUInt32LE(eocd + 16);
-  if (entries > bounds.maxEntries) return `The workbook holds ${entries} parts; Waymark reads at most ${bounds.maxEntries}.`;
+  if (entries > bounds.maxEntries)
+    return `The workbook holds ${entries} parts; Waymark reads at most ${bounds.maxEntries}.`;
   let p = cdOffset;
   let expanded = 0;
   for (let n = 0; n < entries; n++) {
@@ -36,7 +37,8 @@ export function zipBoundsProblem(bytes: Buffer, bounds: ZipBounds = XLSX_BOUNDS)
     }
     const size = bytes.readUInt32LE(p + 24);
     // 0xFFFFFFFF means the real size is in a ZIP64 extra field: far beyond any sheet we read.
-    if (size === 0xffffffff) return "The workbook declares a part larger than 4 GB; Waymark does not read it.";
+    if (size === 0xffffffff)
+      return "The workbook declares a part larger than 4 GB; Waymark does not read it.";
     expanded += size;
     if (expanded > bounds.maxExpandedBytes) {
       return `The workbook would expand to more than ${Math.round(bounds.maxExpandedBytes / 1024 / 1024)} MB; Waymark does not read it.`;

@@ -45,7 +45,9 @@ describe("invitations", () => {
     expect(rows[0].token_hash).not.toBe(token);
     const info = await request(t.app).get(`/api/invitations/${token}`).expect(200);
     expect(info.body.invitation).toMatchObject({ email: "new.reviewer@waymark.test", role: "reviewer" });
-    const weak = await (await anon(t.app))
+    const weak = await (
+      await anon(t.app)
+    )
       .post(`/api/invitations/${token}/accept`)
       .send({ displayName: "Noor Haddad", password: "password1234" })
       .expect(400);
@@ -57,7 +59,9 @@ describe("invitations", () => {
       .expect(201);
     expect(ok.body.user).toMatchObject({ email: "new.reviewer@waymark.test", role: "reviewer" });
     await agent.get("/api/auth/me").expect(200);
-    const reuse = await (await anon(t.app))
+    const reuse = await (
+      await anon(t.app)
+    )
       .post(`/api/invitations/${token}/accept`)
       .send({ displayName: "Again", password: STRONG })
       .expect(410);
@@ -96,7 +100,9 @@ describe("people and settings", () => {
     const writerAgent = await signedIn(t.app, "writer", t.env.demoPassword);
     await admin.patch(`/api/users/${writer.id}`).send({ active: false }).expect(200);
     await writerAgent.get("/api/auth/me").expect(401);
-    await (await anon(t.app))
+    await (
+      await anon(t.app)
+    )
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: t.env.demoPassword })
       .expect(401);

@@ -81,7 +81,9 @@ export function invitationRoutes(ds: DataSource, env: Env): RouteSpec[] {
             env.BCRYPT_COST,
             req.ip ?? null,
           );
-          req.logIn(user, { session: true, keepSessionInfo: true }, (err) => (err ? next(err) : res.status(201).json({ user })));
+          req.logIn(user, { session: true, keepSessionInfo: true }, (err) =>
+            err ? next(err) : res.status(201).json({ user }),
+          );
         },
       ],
     },

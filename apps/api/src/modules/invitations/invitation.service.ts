@@ -10,6 +10,7 @@ import { invitationMessage } from "../mail/messages.js";
 import { enqueueMail } from "../mail/outbox.js";
 import { toPublicUser, User, type PublicUser } from "../users/user.entity.js";
 import { Invitation } from "./invitation.entity.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 export const INVITATION_HOURS = 72;
 
@@ -42,7 +43,7 @@ export async function invite(
     throw new ConflictError(`${email} already has an account.`);
   }
   const token = randomBytes(32).toString("base64url");
-  const id = await ds.transaction(async (tx) => {
+  const id = await inTransaction(ds, async (tx) => {
     const repo = tx.getRepository(Invitation);
     await repo.update({ email, usedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() });
     const saved = await repo.save(
@@ -110,7 +111,7 @@ export async function acceptInvitation(
   const problem = passwordProblem(input.password, [inv.email, input.displayName]);
   if (problem) throw new HttpError(400, "weak_password", `password: ${problem}`);
   const passwordHash = await hashPassword(input.password, cost);
-  return ds.transaction(async (tx) => {
+  return inTransaction(ds, async (tx) => {
     // Re-check inside the transaction so two tabs cannot both use one token.
     const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
     if (stateOf(fresh) !== "open")

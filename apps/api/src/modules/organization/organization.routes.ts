@@ -7,6 +7,7 @@ import { parseBody } from "../../http/validate.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { alphaSchema } from "../studies/study.schema.js";
 import { OrganizationSettings } from "./organization-settings.entity.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 const settingsSchema = z
   .object({
@@ -47,7 +48,7 @@ export function organizationRoutes(ds: DataSource): RouteSpec[] {
       handlers: [
         async (req, res) => {
           const body = parseBody(settingsSchema, req.body);
-          const saved = await ds.transaction(async (tx) => {
+          const saved = await inTransaction(ds, async (tx) => {
             const s = await loadSettings(tx);
             const before = present(s);
             Object.assign(s, body);

@@ -88,7 +88,14 @@ export function intervalsFigure(
         marginRight: 30,
         marginBottom: 50,
         style: STYLE,
-        x: { label: xLabel, labelAnchor: "center", labelOffset: 40, grid: true, nice: true, domain: [Math.min(0, ...pairs.map((p) => p.lower)), Math.max(0, ...pairs.map((p) => p.upper))] },
+        x: {
+          label: xLabel,
+          labelAnchor: "center",
+          labelOffset: 40,
+          grid: true,
+          nice: true,
+          domain: [Math.min(0, ...pairs.map((p) => p.lower)), Math.max(0, ...pairs.map((p) => p.upper))],
+        },
         y: { label: null, domain: pairs.map((p) => p.label) },
         marks: [
           Plot.ruleX([0], { stroke: "#A8432F", strokeDasharray: "4,3" }),

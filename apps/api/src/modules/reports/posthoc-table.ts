@@ -4,7 +4,8 @@ type Pair = Record<string, unknown>;
 
 const num = (x: unknown): number | null => (typeof x === "number" && Number.isFinite(x) ? x : null);
 /** Effect sizes arrive as a number or as { g } / { r } objects with their details. */
-const effect = (x: unknown, key: "g" | "r"): unknown => (x && typeof x === "object" && key in x ? (x as Record<string, unknown>)[key] : x);
+const effect = (x: unknown, key: "g" | "r"): unknown =>
+  x && typeof x === "object" && key in x ? (x as Record<string, unknown>)[key] : x;
 
 const fmt = (x: unknown, f: (v: number) => string = (v) => formatStat(v)) => {
   const v = num(x);

@@ -24,8 +24,15 @@ describe("renderDocx", () => {
 
   it("sets the page size from the organization setting (OOXML twentieths of a point)", async () => {
     const size = async (paperSize: "A4" | "Letter") => {
-      const buf = await renderDocx([paragraph("x")], { draft: true, paperSize, title: "t", images: new Map() });
-      return /<w:pgSz w:w="(\d+)" w:h="(\d+)"/.exec(await (await JSZip.loadAsync(buf)).file("word/document.xml")!.async("string"))!.slice(1);
+      const buf = await renderDocx([paragraph("x")], {
+        draft: true,
+        paperSize,
+        title: "t",
+        images: new Map(),
+      });
+      return /<w:pgSz w:w="(\d+)" w:h="(\d+)"/
+        .exec(await (await JSZip.loadAsync(buf)).file("word/document.xml")!.async("string"))!
+        .slice(1);
     };
     // A4 is 210 × 297 mm = 11906 × 16838 twips; US Letter 8.5 × 11 in = 12240 × 15840 (ISO 216; ANSI/ASME Y14.1).
     expect(await size("A4")).toEqual(["11906", "16838"]);

@@ -24,7 +24,8 @@ async function readDocx(buf: Buffer) {
   );
   const entities: Record<string, string> = { amp: "&", lt: "<", gt: ">", quot: '"', apos: "'" };
   const decode = (x: string) => x.replace(/&(amp|lt|gt|quot|apos);/g, (_, e: string) => entities[e]!);
-  const text = (x: string) => [...x.matchAll(/<w:t(?: [^>]*)?>([^<]*)<\/w:t>/g)].map((m) => decode(m[1]!)).join("");
+  const text = (x: string) =>
+    [...x.matchAll(/<w:t(?: [^>]*)?>([^<]*)<\/w:t>/g)].map((m) => decode(m[1]!)).join("");
   const paragraphs = xml.split("</w:p>").map(text).filter(Boolean);
   return {
     xml,
@@ -107,9 +108,15 @@ describe("approved reports of the three demo studies", () => {
             : r.kruskalWallis.H;
       expect(doc.text).toContain(formatStat(stat).replace("-", "\u2212"));
       // The post-hoc table carries the stored effect sizes (Hedges' g, or the rank-biserial r for Dunn).
-      const family = analysis.chosenTest === "anova" ? r.posthoc.tukey : analysis.chosenTest === "welch" ? r.posthoc.gamesHowell : (r.posthoc.control?.dunn ?? r.posthoc.dunn);
+      const family =
+        analysis.chosenTest === "anova"
+          ? r.posthoc.tukey
+          : analysis.chosenTest === "welch"
+            ? r.posthoc.gamesHowell
+            : (r.posthoc.control?.dunn ?? r.posthoc.dunn);
       const first = family[0];
-      if (analysis.chosenTest === "kruskal-wallis") expect(doc.text).toContain(formatUnit(first.rankBiserial.r));
+      if (analysis.chosenTest === "kruskal-wallis")
+        expect(doc.text).toContain(formatUnit(first.rankBiserial.r));
       else expect(doc.text).toContain(formatStat(first.hedgesG.g));
       // Each group's mean in Table 1 is the stored mean.
       for (const g of r.groups) expect(doc.text).toContain(formatStat(g.mean));

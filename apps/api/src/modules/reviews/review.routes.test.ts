@@ -135,7 +135,9 @@ describe("separation of duties", () => {
   it("is 401 signed out and 403 for writers", async () => {
     const { studyId } = await analysedStudy(analyst);
     await analyst.post(`/api/studies/${studyId}/submit`).send({}).expect(200);
-    await (await anon(t.app))
+    await (
+      await anon(t.app)
+    )
       .post(`/api/studies/${studyId}/approve`)
       .send({ password: "x", meaning: MEANING })
       .expect(401);

@@ -19,6 +19,7 @@ import { approvalContent, contentHash } from "./approval-content.js";
 import { ReviewComment, type ReviewStep } from "./review-comment.entity.js";
 import { ReviewRound } from "./review-round.entity.js";
 import { Signature } from "./signature.entity.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 const activeWithRole = (tx: EntityManager, roles: string[]) =>
   tx
@@ -44,7 +45,7 @@ export async function submitForReview(
   analysisId: number | undefined,
   baseUrl: string,
 ) {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const study = await loadReadableStudy(tx, studyId, actor.user);
     if (study.ownerId !== actor.user.id)
       throw new ForbiddenError("Only the study's own analyst can submit it for review.");
@@ -137,7 +138,7 @@ export async function approve(
     .getOneOrFail();
   // Checked before the transaction: bcrypt is slow and must not hold the write lock.
   const passwordOk = await verifyPassword(input.password, hashRow.passwordHash);
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const { study, round, analysis } = await loadForDecision(tx, actor, studyId);
     if (!passwordOk)
       throw new HttpError(
@@ -182,7 +183,7 @@ export async function requestChanges(
   input: { comment: string; step?: ReviewStep | null; stepComments?: { step: ReviewStep; body: string }[] },
   baseUrl: string,
 ) {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const { study, round } = await loadForDecision(tx, actor, studyId);
     const comments = tx.getRepository(ReviewComment);
     await comments.insert({

@@ -12,6 +12,7 @@ import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
 import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
 import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 const QUESTION_LABELS: Record<string, string> = {
   independence: "independent groups",
@@ -47,7 +48,7 @@ export async function createStudy(
     ...defaults,
     ...(input.alpha !== undefined ? { alpha: input.alpha } : {}),
   };
-  const id = await ds.transaction(async (tx) => {
+  const id = await inTransaction(ds, async (tx) => {
     const repo = tx.getRepository(Study);
     const saved = await repo.save(
       repo.create({
@@ -79,7 +80,7 @@ export async function updateStudy(
   id: number,
   input: z.infer<typeof updateStudySchema>,
 ): Promise<Study> {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const study = await loadEditableStudy(tx, id, actor.user);
     const touchesPlan =
       input.levels !== undefined || input.alpha !== undefined || input.controlLevel !== undefined;
@@ -109,7 +110,7 @@ export async function saveDesign(
   id: number,
   answers: DesignAnswers,
 ): Promise<Study> {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const study = await loadEditableStudy(tx, id, actor.user);
     requireUnlockedPlan(study);
     const before = study.design;
@@ -118,7 +119,9 @@ export async function saveDesign(
     await recordAudit(tx, actor, {
       action: "study.design-saved",
       studyId: id,
-      summary: `Answered: ${Object.keys(answers).map((k) => QUESTION_LABELS[k] ?? k).join(", ")}`,
+      summary: `Answered: ${Object.keys(answers)
+        .map((k) => QUESTION_LABELS[k] ?? k)
+        .join(", ")}`,
       before,
       after: study.design,
     });
@@ -132,7 +135,7 @@ export async function savePlan(
   id: number,
   input: z.infer<typeof planSchema>,
 ): Promise<Study> {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const study = await loadEditableStudy(tx, id, actor.user);
     requireUnlockedPlan(study);
     const before = study.plan;
@@ -168,7 +171,7 @@ export async function savePlan(
 
 /** Freezes the plan with a timestamp so reviewers can see it came before the data. */
 export async function lockPlan(ds: DataSource, actor: Actor, id: number): Promise<Study> {
-  await ds.transaction(async (tx) => {
+  await inTransaction(ds, async (tx) => {
     const study = await loadEditableStudy(tx, id, actor.user);
     if (study.planLockedAt)
       throw new ConflictError(`The plan is already locked (since ${study.planLockedAt.toISOString()}).`);

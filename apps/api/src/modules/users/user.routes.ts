@@ -9,6 +9,7 @@ import { parseBody } from "../../http/validate.js";
 import { recordAudit } from "../audit/audit.service.js";
 import type { TypeormSessionStore } from "../sessions/typeorm-session-store.js";
 import { toPublicUser, User } from "./user.entity.js";
+import { inTransaction } from "../../db/in-transaction.js";
 
 const patchSchema = z
   .object({ role: z.enum(ROLES).optional(), active: z.boolean().optional() })
@@ -45,7 +46,7 @@ export function userRoutes(ds: DataSource, sessions: TypeormSessionStore): Route
           const body = parseBody(patchSchema, req.body);
           const actor = actorOf(req);
           const id = Number(req.params.id);
-          const saved = await ds.transaction(async (tx) => {
+          const saved = await inTransaction(ds, async (tx) => {
             const repo = tx.getRepository(User);
             const user = await repo.findOneBy({ id });
             if (!user) throw new NotFoundError(`There is no user ${id}.`);
