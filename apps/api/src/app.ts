@@ -1,6 +1,7 @@
 import "reflect-metadata";
 import fs from "node:fs";
 import path from "node:path";
+import compression from "compression";
 import express, { Router } from "express";
 import session from "express-session";
 import helmet from "helmet";
@@ -57,6 +58,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
       },
     }),
   );
+  app.use(compression());
   app.use(express.json({ limit: "1mb" }));
 
   const sessionStore = new TypeormSessionStore(ds);

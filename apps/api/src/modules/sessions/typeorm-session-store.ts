@@ -3,6 +3,8 @@ import { LessThan, type DataSource, type Repository } from "typeorm";
 import { Session } from "./session.entity.js";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
+/** A rolling session is rewritten at most this often: writing it on every request costs a write per read. */
+const TOUCH_INTERVAL_MS = 60_000;
 
 /**
  * express-session store on TypeORM. Written here because the maintained stores either target
@@ -11,6 +13,7 @@ const DAY_MS = 24 * 60 * 60 * 1000;
  */
 export class TypeormSessionStore extends session.Store {
   private readonly repo: Repository<Session>;
+  private readonly lastTouch = new Map<string, number>();
 
   constructor(dataSource: DataSource) {
     super();
@@ -39,6 +42,7 @@ export class TypeormSessionStore extends session.Store {
   }
 
   override destroy(sid: string, cb?: (err?: unknown) => void): void {
+    this.lastTouch.delete(sid);
     this.repo
       .delete({ sid })
       .then(() => cb?.())
@@ -46,6 +50,10 @@ export class TypeormSessionStore extends session.Store {
   }
 
   override touch(sid: string, s: session.SessionData, cb?: (err?: unknown) => void): void {
+    const now = Date.now();
+    if (now - (this.lastTouch.get(sid) ?? 0) < TOUCH_INTERVAL_MS) return cb?.();
+    this.lastTouch.set(sid, now);
+    if (this.lastTouch.size > 10_000) this.lastTouch.clear();
     this.set(sid, s, cb);
   }
 
