@@ -50,10 +50,14 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   app.use(
     helmet({
       contentSecurityPolicy: {
+        // Only our own origin: fonts and scripts are self-hosted; inline styles are what the chart
+        // library sets. Upgrading requests to https makes sense only when served over https.
         directives: {
           defaultSrc: ["'self'"],
+          fontSrc: ["'self'"],
           imgSrc: ["'self'", "data:", "blob:"],
           styleSrc: ["'self'", "'unsafe-inline'"],
+          upgradeInsecureRequests: env.TRUST_PROXY ? [] : null,
         },
       },
     }),

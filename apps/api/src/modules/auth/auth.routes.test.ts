@@ -104,6 +104,8 @@ describe("GET /api/health", () => {
     const csp = String(res.headers["content-security-policy"]);
     expect(csp).toMatch(/default-src 'self'/);
     expect(csp).toMatch(/script-src 'self'(;|$)/);
+    expect(csp).toMatch(/font-src 'self'(;|$)/);
+    expect(csp).not.toMatch(/https:|upgrade-insecure-requests/);
     expect(res.headers["x-content-type-options"]).toBe("nosniff");
     expect(res.headers["x-powered-by"]).toBeUndefined();
   });
