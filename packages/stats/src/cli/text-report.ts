@@ -1,4 +1,5 @@
 import type { AnalysisResult } from "../analyze.js";
+import { formatP } from "../reporting/format.js";
 
 type Rec = Record<string, unknown>;
 
@@ -19,9 +20,9 @@ function num(x: unknown, digits = 4): string {
   return String(Number(x.toPrecision(digits)));
 }
 
+/** p as everywhere else in Waymark (the shared formatter): "= .025", "< .001". */
 function pval(x: unknown): string {
-  if (typeof x !== "number") return "—";
-  return x < 0.0001 ? "< 0.0001" : `= ${x.toFixed(4)}`;
+  return typeof x === "number" ? formatP(x) : "—";
 }
 
 /** Left-aligned first column, right-aligned others, two spaces between. */
