@@ -25,7 +25,10 @@ export default tseslint.config(
     files: ["apps/api/src/**/*.ts"],
     ignores: ["apps/api/src/config/env.ts", "apps/api/src/**/*.test.ts"],
     rules: {
-      "no-restricted-properties": ["error", { object: "process", property: "env", message: "Read settings from src/config/env.ts." }],
+      "no-restricted-properties": [
+        "error",
+        { object: "process", property: "env", message: "Read settings from src/config/env.ts." },
+      ],
     },
   },
 );

@@ -22,7 +22,11 @@ const datasetRows = async () => Number((await t.ds.query(`SELECT count(*) AS n F
 /** Uploads bytes to a fresh locked study (levels North, South, East) and returns the response. */
 async function upload(bytes: Buffer, name: string) {
   const id = await lockedStudy(analyst);
-  return analyst.post(`/api/studies/${id}/datasets`).field("groupColumn", "Line").field("outcomeColumn", "Yield (g)").attach("file", bytes, name);
+  return analyst
+    .post(`/api/studies/${id}/datasets`)
+    .field("groupColumn", "Line")
+    .field("outcomeColumn", "Yield (g)")
+    .attach("file", bytes, name);
 }
 
 // [file, expected status, what the message must name]; 201 means stored with a report that says what was left out.
@@ -44,37 +48,51 @@ const CASES: [string, number, RegExp][] = [
 ];
 
 describe("the bad-input corpus (tests/fixtures/bad-input)", () => {
-  it.each(CASES)("%s → %i, with a message naming the problem when refused and nothing stored", async (file, status, message) => {
-    const before = await datasetRows();
-    const res = await upload(fs.readFileSync(path.join(corpus, file)), file);
-    expect(res.status).toBe(status);
-    if (status === 201) {
-      expect(await datasetRows()).toBe(before + 1);
-      if (file === "unknown-levels.csv") expect(res.body.dataset.report.unknownLevels).toEqual(["West", "Pilot"]);
-    } else {
-      expect(res.body.error.message).toMatch(message);
-      expect(await datasetRows()).toBe(before);
-    }
-    // The file's own "NaN" text may be quoted back in the report; nothing else may be.
-    expect(JSON.stringify(res.body).replace(/"value":"[^"]*"/g, "")).not.toMatch(/NaN|Infinity|undefined|\[object/);
-  });
+  it.each(CASES)(
+    "%s → %i, with a message naming the problem when refused and nothing stored",
+    async (file, status, message) => {
+      const before = await datasetRows();
+      const res = await upload(fs.readFileSync(path.join(corpus, file)), file);
+      expect(res.status).toBe(status);
+      if (status === 201) {
+        expect(await datasetRows()).toBe(before + 1);
+        if (file === "unknown-levels.csv")
+          expect(res.body.dataset.report.unknownLevels).toEqual(["West", "Pilot"]);
+      } else {
+        expect(res.body.error.message).toMatch(message);
+        expect(await datasetRows()).toBe(before);
+      }
+      // The file's own "NaN" text may be quoted back in the report; nothing else may be.
+      expect(JSON.stringify(res.body).replace(/"value":"[^"]*"/g, "")).not.toMatch(
+        /NaN|Infinity|undefined|\[object/,
+      );
+    },
+  );
 
   it("refuses 10,000 columns and more than 2,000,000 rows, and keeps serving meanwhile", async () => {
-    const wide = Buffer.from(`${Array.from({ length: 10_000 }, (_, i) => `c${i}`).join(",")}\n${"1,".repeat(9_999)}1\n`);
+    const wide = Buffer.from(
+      `${Array.from({ length: 10_000 }, (_, i) => `c${i}`).join(",")}\n${"1,".repeat(9_999)}1\n`,
+    );
     const w = await upload(wide, "wide.csv");
     expect(w.status).toBe(422);
     expect(w.body.error.message).toMatch(/at most 1000/);
 
     const lines = ["Line,Yield (g)"];
-    for (let i = 0; i < 2_000_001; i++) lines.push(i % 3 === 0 ? "North,1.5" : i % 3 === 1 ? "South,2.5" : "East,3.5");
+    for (let i = 0; i < 2_000_001; i++)
+      lines.push(i % 3 === 0 ? "North,1.5" : i % 3 === 1 ? "South,2.5" : "East,3.5");
     const tall = Buffer.from(lines.join("\n"));
     const rssBefore = process.memoryUsage().rss;
-    const [res, health] = await Promise.all([upload(tall, "tall.csv"), (await anon(t.app)).get("/api/health")]);
+    const [res, health] = await Promise.all([
+      upload(tall, "tall.csv"),
+      (await anon(t.app)).get("/api/health"),
+    ]);
     expect(res.status).toBe(422);
     expect(res.body.error.message).toMatch(/more than 2,000,000 data rows/);
     expect(health.status).toBe(200);
     // A figure for the record, not a timing or memory assertion.
-    console.log(`2,000,001-row upload (${(tall.length / 1e6).toFixed(1)} MB): RSS grew by ${((process.memoryUsage().rss - rssBefore) / 1e6).toFixed(0)} MB`);
+    console.log(
+      `2,000,001-row upload (${(tall.length / 1e6).toFixed(1)} MB): RSS grew by ${((process.memoryUsage().rss - rssBefore) / 1e6).toFixed(0)} MB`,
+    );
   }, 120_000);
 
   it("refuses a zip bomb dressed as a workbook before inflating it", async () => {

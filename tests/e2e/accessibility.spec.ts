@@ -18,11 +18,19 @@ interface AxeViolation {
 async function seriousViolations(page: Page): Promise<string[]> {
   await page.addScriptTag({ path: AXE });
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> } }).axe;
-    const r = await axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"] } });
+    const axe = (
+      window as unknown as {
+        axe: { run: (ctx: Document, opts: object) => Promise<{ violations: AxeViolation[] }> };
+      }
+    ).axe;
+    const r = await axe.run(document, {
+      runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"] },
+    });
     return r.violations;
   });
-  return violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id} (${v.impact}): ${v.help} at ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+  return violations
+    .filter((v) => v.impact === "serious" || v.impact === "critical")
+    .map((v) => `${v.id} (${v.impact}): ${v.help} at ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
 }
 
 async function signIn(page: Page, email: string) {
@@ -64,7 +72,15 @@ test("signing in and answering a design question work from the keyboard alone", 
   const { token } = (await (await page.request.get("/api/auth/csrf")).json()) as { token: string };
   const created = await page.request.post("/api/studies", {
     headers: { "x-csrf-token": token },
-    data: { title: "Keyboard check", objective: "Answer by keyboard.", outcomeName: "Mass", outcomeUnit: "g", factorName: "Batch", levels: ["A", "B", "C"], context: "general" },
+    data: {
+      title: "Keyboard check",
+      objective: "Answer by keyboard.",
+      outcomeName: "Mass",
+      outcomeUnit: "g",
+      factorName: "Batch",
+      levels: ["A", "B", "C"],
+      context: "general",
+    },
   });
   expect(created.status()).toBe(201);
   const { study } = (await created.json()) as { study: { id: number } };
@@ -75,6 +91,13 @@ test("signing in and answering a design question work from the keyboard alone", 
   await expect(answer).toBeChecked();
   // The answer is saved as it is given: the server has it.
   await expect
-    .poll(async () => ((await (await page.request.get(`/api/studies/${study.id}`)).json()) as { study: { design: { independence?: string } } }).study.design.independence)
+    .poll(
+      async () =>
+        (
+          (await (await page.request.get(`/api/studies/${study.id}`)).json()) as {
+            study: { design: { independence?: string } };
+          }
+        ).study.design.independence,
+    )
     .toBe("independent");
 });

@@ -20,7 +20,15 @@ export default defineConfig({
     baseURL: `http://localhost:${PORT}`,
     launchOptions: {
       executablePath: CHROMIUM,
-      args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+      args: [
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-quic",
+        "--no-first-run",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
     },
     headless: true,
     trace: "retain-on-failure",
@@ -31,6 +39,12 @@ export default defineConfig({
     url: `http://localhost:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,
-    env: { PORT: String(PORT), DATABASE_PATH: dbPath, WAYMARK_DEMO: "1", NODE_ENV: "production", BCRYPT_COST: "8" },
+    env: {
+      PORT: String(PORT),
+      DATABASE_PATH: dbPath,
+      WAYMARK_DEMO: "1",
+      NODE_ENV: "production",
+      BCRYPT_COST: "8",
+    },
   },
 });

@@ -2,7 +2,11 @@ import { expect, test, type Page, type TestInfo } from "@playwright/test";
 
 const DEMO_PASSWORD = "trailhead-demo";
 const STUDY_TITLE = "Seedling height under three light schedules";
-const NEW_REVIEWER = { email: "noor.haddad@waymark.test", name: "Noor Haddad", password: "lantern orchard gravel tide 42" };
+const NEW_REVIEWER = {
+  email: "noor.haddad@waymark.test",
+  name: "Noor Haddad",
+  password: "lantern orchard gravel tide 42",
+};
 
 async function shot(page: Page, info: TestInfo, step: string) {
   await page.evaluate(() => window.scrollTo(0, 0));
@@ -22,16 +26,22 @@ async function signOut(page: Page) {
   await expect(page).toHaveURL(/\/sign-in$/);
 }
 
-const nav = (page: Page, name: string) => page.getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true });
+const nav = (page: Page, name: string) =>
+  page.getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true });
 
-test("a study goes from submission through a newly invited reviewer's signed approval back to its analyst", async ({ page, browser }, info) => {
+test("a study goes from submission through a newly invited reviewer's signed approval back to its analyst", async ({
+  page,
+  browser,
+}, info) => {
   test.setTimeout(180_000);
 
   // 1. The analyst submits a demo study for review.
   await signIn(page, "analyst@waymark.test");
   const list = await page.request.get("/api/studies");
   expect(list.ok()).toBe(true);
-  const study = ((await list.json()) as { studies: { id: number; title: string; status: string }[] }).studies.find((s) => s.title === STUDY_TITLE);
+  const study = (
+    (await list.json()) as { studies: { id: number; title: string; status: string }[] }
+  ).studies.find((s) => s.title === STUDY_TITLE);
   expect(study, `the demo study "${STUDY_TITLE}" is seeded`).toBeTruthy();
   expect(study!.status).toBe("draft");
   await page.goto(`/studies/${study!.id}/results`);
@@ -52,14 +62,20 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await form.getByLabel("E-mail").fill(NEW_REVIEWER.email);
   await form.getByLabel("Role").selectOption("reviewer");
   await form.getByRole("button", { name: "Send invitation" }).click();
-  await expect(page.getByRole("status").filter({ hasText: `Invitation sent to ${NEW_REVIEWER.email}` })).toBeVisible();
+  await expect(
+    page.getByRole("status").filter({ hasText: `Invitation sent to ${NEW_REVIEWER.email}` }),
+  ).toBeVisible();
   await expect(page.getByTestId("invitations-table").getByText(NEW_REVIEWER.email)).toBeVisible();
   await shot(page, info, "02-invited");
 
   // 3. The admin finds the invitation in the demo mailbox.
   await nav(page, "Mailbox").click();
   await expect(page.getByRole("heading", { level: 1, name: "Mailbox" })).toBeVisible();
-  const message = page.getByRole("list", { name: "Messages" }).getByRole("button").filter({ hasText: NEW_REVIEWER.email }).filter({ hasText: "invited you as reviewer" });
+  const message = page
+    .getByRole("list", { name: "Messages" })
+    .getByRole("button")
+    .filter({ hasText: NEW_REVIEWER.email })
+    .filter({ hasText: "invited you as reviewer" });
   await expect(message.first()).toBeVisible({ timeout: 20_000 });
   await message.first().click();
   const inviteLink = page.getByTestId("mail-text").getByRole("link", { name: /\/invite\// });
@@ -93,10 +109,14 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await expect(invitee.getByTestId("history-timeline")).toBeVisible();
   await shot(invitee, info, "07-review-page");
   const decision = invitee.getByTestId("decision-panel");
-  await expect(decision.getByLabel("Meaning of your signature")).toHaveValue("Approved as the analysis of record");
+  await expect(decision.getByLabel("Meaning of your signature")).toHaveValue(
+    "Approved as the analysis of record",
+  );
   await decision.getByLabel("Your password").fill("not the password");
   await decision.getByRole("button", { name: "Sign and approve" }).click();
-  await expect(decision.getByText("The password is not correct, so the approval was not signed.")).toBeVisible();
+  await expect(
+    decision.getByText("The password is not correct, so the approval was not signed."),
+  ).toBeVisible();
   await shot(invitee, info, "08-wrong-password");
   await decision.getByLabel("Your password").fill(NEW_REVIEWER.password);
   await decision.getByRole("button", { name: "Sign and approve" }).click();
@@ -115,7 +135,9 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await signOut(page);
   await signIn(page, "analyst@waymark.test");
   await nav(page, "Studies").click();
-  await expect(page.getByRole("listitem").filter({ hasText: STUDY_TITLE }).getByText("Approved")).toBeVisible();
+  await expect(
+    page.getByRole("listitem").filter({ hasText: STUDY_TITLE }).getByText("Approved"),
+  ).toBeVisible();
   await shot(page, info, "11-analyst-sees-approval");
   await signOut(page);
 
@@ -124,7 +146,10 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await nav(page, "Reports").click();
   await page.getByTestId("approved-studies").getByRole("link", { name: STUDY_TITLE }).click();
   await expect(page.getByTestId("report-preview").getByRole("heading", { name: "Methods" })).toBeVisible();
-  await expect(page.getByRole("link", { name: /Download DOCX/ })).toHaveAttribute("href", `/api/studies/${study!.id}/report.docx`);
+  await expect(page.getByRole("link", { name: /Download DOCX/ })).toHaveAttribute(
+    "href",
+    `/api/studies/${study!.id}/report.docx`,
+  );
   await expect(page.getByTestId("report-preview")).not.toContainText(/NaN|undefined/);
   await shot(page, info, "12-report");
   await signOut(page);
@@ -132,11 +157,17 @@ test("a study goes from submission through a newly invited reviewer's signed app
   // 8. The admin finds the signature in the audit trail and looks at the settings.
   await signIn(page, "admin@waymark.test");
   await nav(page, "Audit trail").click();
-  await page.getByRole("form", { name: "Filter the audit trail" }).getByLabel("Action").selectOption("study.approved");
+  await page
+    .getByRole("form", { name: "Filter the audit trail" })
+    .getByLabel("Action")
+    .selectOption("study.approved");
   await page.getByRole("button", { name: "Show events" }).click();
   await expect(page).toHaveURL(/\/audit\?action=study\.approved$/);
   await expect(page.getByTestId("audit-table").getByText(NEW_REVIEWER.email).first()).toBeVisible();
-  await expect(page.getByRole("link", { name: "Export these events as CSV" })).toHaveAttribute("href", "/api/audit/export.csv?action=study.approved");
+  await expect(page.getByRole("link", { name: "Export these events as CSV" })).toHaveAttribute(
+    "href",
+    "/api/audit/export.csv?action=study.approved",
+  );
   await shot(page, info, "13-audit");
   await nav(page, "Settings").click();
   await expect(page.getByRole("form", { name: "Organization settings" })).toBeVisible();

@@ -25,7 +25,9 @@ for (const r of ROLES) {
   });
 }
 
-test("a wrong password keeps the visitor on the sign-in page with a clear message", async ({ page }, info) => {
+test("a wrong password keeps the visitor on the sign-in page with a clear message", async ({
+  page,
+}, info) => {
   await page.goto("/sign-in");
   await page.getByLabel("E-mail").fill("analyst@waymark.test");
   await page.getByLabel("Password").fill("not-the-password");

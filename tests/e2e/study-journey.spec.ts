@@ -23,13 +23,16 @@ test("the demo analyst walks a study from question to results", async ({ page },
   await expect(page.getByRole("heading", { level: 1, name: "Studies" })).toBeVisible();
   await page.getByRole("link", { name: "Start a study" }).click();
   await page.getByLabel("Title").fill("Curing methods for test cylinders");
-  await page.getByLabel("Objective").fill("Does the curing method change the 28-day compressive strength of concrete test cylinders?");
+  await page
+    .getByLabel("Objective")
+    .fill("Does the curing method change the 28-day compressive strength of concrete test cylinders?");
   await page.getByLabel("Outcome", { exact: true }).fill("Compressive strength");
   await page.getByLabel("Unit").fill("MPa");
   await page.getByLabel("Grouping factor").fill("Curing method");
   await page.getByRole("button", { name: "Add a level" }).click();
   const levels = ["Water bath", "Wet burlap", "Curing compound", "Air dried"];
-  for (const [i, name] of levels.entries()) await page.getByLabel(`Level ${i + 1}`, { exact: true }).fill(name);
+  for (const [i, name] of levels.entries())
+    await page.getByLabel(`Level ${i + 1}`, { exact: true }).fill(name);
   await page.getByLabel(/Safety-critical/).check();
   await shot(page, info, "study");
   await page.getByRole("button", { name: "Create the study" }).click();
@@ -37,11 +40,19 @@ test("the demo analyst walks a study from question to results", async ({ page },
   // Design questions
   await expect(page).toHaveURL(/\/studies\/\d+\/design$/);
   await expect(page.getByText("Question 1 of 5")).toBeVisible();
-  const answers = [/Yes, independent groups/, /A measured quantity/, /^No All groups/, /Every pair of groups/, /Assigned at random/];
+  const answers = [
+    /Yes, independent groups/,
+    /A measured quantity/,
+    /^No All groups/,
+    /Every pair of groups/,
+    /Assigned at random/,
+  ];
   for (const [i, answer] of answers.entries()) {
     await page.getByRole("radio", { name: answer }).check();
     await expect(page.getByText(`Question ${i + 1} of 5 · answer saved`)).toBeVisible();
-    await page.getByRole("button", { name: i === answers.length - 1 ? "See all answers" : "Next question" }).click();
+    await page
+      .getByRole("button", { name: i === answers.length - 1 ? "See all answers" : "Next question" })
+      .click();
   }
   await expect(page.getByLabel("Design answers")).toBeVisible();
   await expect(page.getByTestId("trail-design")).toHaveAttribute("data-state", "done");
@@ -75,7 +86,9 @@ test("the demo analyst walks a study from question to results", async ({ page },
   // Checks
   await page.getByTestId("trail-checks").getByRole("link").click();
   await expect(page.getByRole("heading", { name: "Normality of the residuals" })).toBeVisible();
-  await expect(page.getByRole("img", { name: "Normal Q–Q plot of the residuals" }).locator("svg")).toBeVisible();
+  await expect(
+    page.getByRole("img", { name: "Normal Q–Q plot of the residuals" }).locator("svg"),
+  ).toBeVisible();
   await expect(page.getByRole("img", { name: /Box and points plot/ }).locator("svg")).toBeVisible();
   await shot(page, info, "checks");
 
@@ -89,7 +102,9 @@ test("the demo analyst walks a study from question to results", async ({ page },
   await expect(page).toHaveURL(/\/results$/);
   await expect(page.getByTestId("results-panel")).toBeVisible();
   await expect(page.getByTestId("plain-summary")).not.toBeEmpty();
-  await expect(page.getByTestId("caution-note")).toContainText("does not replace, the judgement of a qualified statistician");
+  await expect(page.getByTestId("caution-note")).toContainText(
+    "does not replace, the judgement of a qualified statistician",
+  );
   await expect(page.getByTestId("trail-results")).toHaveAttribute("data-state", "done");
   const text = (await page.getByTestId("results-panel").textContent()) ?? "";
   expect(text).not.toMatch(/NaN|undefined|Infinity/);

@@ -22,11 +22,17 @@ interface Ref {
 
 // Numbers only: scipy sees the same doubles (hard offset sets are covered by the omnibus suite).
 const datasets = referenceDatasets().filter((d) => !d.hard);
-const sizes = [3, 3, 3, 4, 4, 5, 5, 6, 7, 8, 9, 10, 11, 11, 12, 13, 15, 18, 20, 25, 30, 35, 40, 50, 500, 5000];
+const sizes = [
+  3, 3, 3, 4, 4, 5, 5, 6, 7, 8, 9, 10, 11, 11, 12, 13, 15, 18, 20, 25, 30, 35, 40, 50, 500, 5000,
+];
 const samples = sizes.flatMap((n, i) =>
   (["normal", "skewed", "ties"] as const).map((shape, j) => ({
     id: `sw-n${n}-${shape}-${i}`,
-    values: (makeGroups(20_000 + 10 * i + j, { n: [n], mean: [5], sd: [shape === "ties" ? 1.3 : 2], shape })[0] as { values: number[] }).values,
+    values: (
+      makeGroups(20_000 + 10 * i + j, { n: [n], mean: [5], sd: [shape === "ties" ? 1.3 : 2], shape })[0] as {
+        values: number[];
+      }
+    ).values,
   })),
 );
 // scipy 1.10.1 (Debian) via tests/reference/python/assumptions_runner.py.

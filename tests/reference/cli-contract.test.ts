@@ -11,8 +11,14 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..")
 // every key present, every number finite. It runs the built CLI through npx from the repo root.
 describe("waymark-stats CLI contract (tests/contract/cli-shape.py)", () => {
   it("passes with 0 problems", () => {
-    expect(existsSync(path.join(root, "packages/stats/dist/cli/main.js")), "build @waymark/stats first").toBe(true);
-    const out = execFileSync(PYTHON, [path.join(root, "tests/contract/cli-shape.py")], { cwd: root, encoding: "utf8", timeout: 240_000 });
+    expect(existsSync(path.join(root, "packages/stats/dist/cli/main.js")), "build @waymark/stats first").toBe(
+      true,
+    );
+    const out = execFileSync(PYTHON, [path.join(root, "tests/contract/cli-shape.py")], {
+      cwd: root,
+      encoding: "utf8",
+      timeout: 240_000,
+    });
     expect(out).toContain("cli shape: 0 problems");
   });
 });

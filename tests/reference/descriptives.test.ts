@@ -9,12 +9,16 @@ interface Ref {
 }
 
 const datasets = referenceDatasets().filter((d) => !d.hard);
-const samples = datasets.flatMap((d) => d.groups.map((g) => ({ id: `${d.id}/${g.name}`, values: g.values as number[] })));
+const samples = datasets.flatMap((d) =>
+  d.groups.map((g) => ({ id: `${d.id}/${g.name}`, values: g.values as number[] })),
+);
 // scipy 1.10.1 / numpy 1.24.2 (Debian) via tests/reference/python/descriptives_runner.py; the t quantile of the
 // interval from mpmath there, because scipy 1.10.1 t.ppf errs by up to 4e-9 (measured).
 const ref = runPython<Ref>("descriptives_runner.py", { samples });
 const worst: Record<string, number> = {};
-afterAll(() => console.log(`descriptives reference (${JSON.stringify(ref.versions)}) worst relative errors:`, worst));
+afterAll(() =>
+  console.log(`descriptives reference (${JSON.stringify(ref.versions)}) worst relative errors:`, worst),
+);
 
 // Relative to max(|reference|, scale): a location near zero (e.g. a mean of 0.001 in data with
 // SD 1) is judged against the data's scale, skewness/kurtosis against 1.
@@ -32,7 +36,18 @@ describe("descriptives against scipy.stats.describe / skew(bias=False) / kurtosi
       const [g] = describeGroups([{ name: "g", values: s.values }]);
       if (!g) throw new Error("no result");
       expect(g.n).toBe(r.n);
-      for (const key of ["mean", "sd", "se", "ciLower", "ciUpper", "min", "max", "q1", "median", "q3"] as const) {
+      for (const key of [
+        "mean",
+        "sd",
+        "se",
+        "ciLower",
+        "ciUpper",
+        "min",
+        "max",
+        "q1",
+        "median",
+        "q3",
+      ] as const) {
         if (s.values.length < 2 && ["sd", "se", "ciLower", "ciUpper"].includes(key)) continue;
         close(key, g[key], r[key], 1e-9, r.sd ?? 1);
       }

@@ -32,7 +32,8 @@ const sr: [number, number, number][] = [];
 for (const df of DFS) for (const k of KS) for (const q of QS) sr.push([q, k, df]);
 
 const srPpf: [number, number, number][] = [];
-for (const df of [2, 5, 30, 1000]) for (const k of [2, 5, 10, 20]) for (const p of [0.5, 0.95, 0.99]) srPpf.push([p, k, df]);
+for (const df of [2, 5, 30, 1000])
+  for (const k of [2, 5, 10, 20]) for (const p of [0.5, 0.95, 0.99]) srPpf.push([p, k, df]);
 
 // Far upper tails of the infinite-df range, values between 1e-28 and 1e-5.
 const srMp: [number, number][] = [
@@ -122,7 +123,10 @@ describe(`noncentral F vs scipy ${ref.versions.scipy} and mpmath ${ref.versions.
   it("cdf and sf match scipy.stats.ncf.cdf/.sf within 1e-8 absolute (λ ≤ 2000, d2 ≤ 1e5)", () => {
     const errors = ncf.flatMap(([x, d1, d2, lambda], i) => {
       const [cdf, sf] = ref.ncf[i] as [number, number];
-      return [Math.abs(noncentralFCdf(x, d1, d2, lambda) - cdf), Math.abs(noncentralFSf(x, d1, d2, lambda) - sf)];
+      return [
+        Math.abs(noncentralFCdf(x, d1, d2, lambda) - cdf),
+        Math.abs(noncentralFSf(x, d1, d2, lambda) - sf),
+      ];
     });
     expect(worst("noncentral F vs scipy (abs)", errors)).toBeLessThan(1e-8);
   });

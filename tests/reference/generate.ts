@@ -85,8 +85,14 @@ export const SCENARIOS: Record<string, { seed: number; spec: GroupSpec }> = {
   balanced: { seed: 101, spec: { n: [12, 12, 12, 12], mean: [10, 11, 10.5, 13], sd: [2, 2, 2, 2] } },
   unequalN: { seed: 202, spec: { n: [5, 17, 9, 30], mean: [4, 5, 4.2, 6], sd: [1.5, 1.5, 1.5, 1.5] } },
   unequalVar: { seed: 303, spec: { n: [8, 20, 14], mean: [50, 53, 49], sd: [1, 6, 12] } },
-  skewed: { seed: 404, spec: { n: [15, 22, 18, 11], mean: [3, 3.5, 4.5, 3], sd: [1, 1.4, 2, 0.8], shape: "skewed" } },
-  ties: { seed: 505, spec: { n: [14, 16, 13, 15], mean: [3, 3.4, 4, 3.2], sd: [0.9, 0.9, 0.9, 0.9], shape: "ties" } },
+  skewed: {
+    seed: 404,
+    spec: { n: [15, 22, 18, 11], mean: [3, 3.5, 4.5, 3], sd: [1, 1.4, 2, 0.8], shape: "skewed" },
+  },
+  ties: {
+    seed: 505,
+    spec: { n: [14, 16, 13, 15], mean: [3, 3.4, 4, 3.2], sd: [0.9, 0.9, 0.9, 0.9], shape: "ties" },
+  },
   tiny: { seed: 606, spec: { n: [2, 3, 2], mean: [0, 1, 2], sd: [1, 1, 1] } },
   many: {
     seed: 707,

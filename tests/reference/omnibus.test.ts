@@ -19,7 +19,9 @@ interface Ref {
 
 const datasets = referenceDatasets();
 // scipy 1.10.1 / statsmodels 0.13.5 (Debian, /usr/bin/python3) via tests/reference/python/omnibus_runner.py.
-const ref = runPython<Ref>("omnibus_runner.py", { datasets: datasets.map((d) => ({ id: d.id, groups: d.groups.map((g) => g.values) })) });
+const ref = runPython<Ref>("omnibus_runner.py", {
+  datasets: datasets.map((d) => ({ id: d.id, groups: d.groups.map((g) => g.values) })),
+});
 const worst: Record<string, number> = {};
 const note = (key: string, e: number) => (worst[key] = Math.max(worst[key] ?? 0, e));
 
@@ -42,13 +44,19 @@ describe("omnibus tests against scipy 1.10.1 / statsmodels 0.13.5 and exact rati
       expect(a.available).toBe(true);
       if (!a.available) return;
       // Exact rational SS and F (Python fractions.Fraction on the decimal text): always ≤ 1e-12 here.
-      note("anova SS vs exact (rel)", Math.max(relErr(a.ssBetween, r.exact.ssBetween), relErr(a.ssWithin, r.exact.ssWithin)));
+      note(
+        "anova SS vs exact (rel)",
+        Math.max(relErr(a.ssBetween, r.exact.ssBetween), relErr(a.ssWithin, r.exact.ssWithin)),
+      );
       expect(relErr(a.ssBetween, r.exact.ssBetween)).toBeLessThan(1e-12);
       expect(relErr(a.ssWithin, r.exact.ssWithin)).toBeLessThan(1e-12);
       expect(relErr(a.F, r.exact.F as number)).toBeLessThan(1e-12);
       if (d.hard) {
         // scipy's f_oneway works from doubles and loses digits here; record how many.
-        note("scipy f_oneway F vs exact on hard sets (rel, reference's own error)", relErr(r.f_oneway.F, r.exact.F as number));
+        note(
+          "scipy f_oneway F vs exact on hard sets (rel, reference's own error)",
+          relErr(r.f_oneway.F, r.exact.F as number),
+        );
       } else {
         note("anova F vs f_oneway (rel)", relErr(a.F, r.f_oneway.F));
         note("anova p vs f_oneway (abs)", Math.abs(a.p - r.f_oneway.p));
@@ -67,7 +75,10 @@ describe("omnibus tests against scipy 1.10.1 / statsmodels 0.13.5 and exact rati
         // rational Welch (Fraction) instead and record statsmodels' own error.
         const ex = r.exactWelch as NonNullable<typeof r.exactWelch>;
         note("welch F vs exact Fraction on hard sets (rel)", relErr(w.F, ex.F));
-        note("statsmodels welch F vs exact on hard sets (rel, reference's own error)", relErr(r.welch.F, ex.F));
+        note(
+          "statsmodels welch F vs exact on hard sets (rel, reference's own error)",
+          relErr(r.welch.F, ex.F),
+        );
         expect(relErr(w.F, ex.F)).toBeLessThan(1e-12);
         expect(relErr(w.df2, ex.df2)).toBeLessThan(1e-12);
         expect(pClose(w.p, ex.p)).toBe(true);

@@ -12,11 +12,16 @@ import { etaSquaredCi } from "../../packages/stats/src/effect-sizes/eta-squared-
  */
 
 const powerCases: { k: number; n: number | number[]; f: number; alpha: number }[] = [];
-for (const k of [2, 3, 4, 6, 10]) for (const n of [5, 20, 60]) for (const f of [0.1, 0.25, 0.4]) powerCases.push({ k, n, f, alpha: 0.05 });
+for (const k of [2, 3, 4, 6, 10])
+  for (const n of [5, 20, 60]) for (const f of [0.1, 0.25, 0.4]) powerCases.push({ k, n, f, alpha: 0.05 });
 powerCases.push({ k: 3, n: 15, f: 0.3, alpha: 0.01 }, { k: 5, n: 200, f: 0.5, alpha: 0.001 });
 // Unequal allocation: with λ = N·f² and df2 = N − k, only the total enters.
-powerCases.push({ k: 3, n: [10, 20, 30], f: 0.3, alpha: 0.05 }, { k: 4, n: [5, 5, 8, 40], f: 0.25, alpha: 0.05 });
-const totalOf = (c: { k: number; n: number | number[] }) => (typeof c.n === "number" ? c.n * c.k : c.n.reduce((s, x) => s + x, 0));
+powerCases.push(
+  { k: 3, n: [10, 20, 30], f: 0.3, alpha: 0.05 },
+  { k: 4, n: [5, 5, 8, 40], f: 0.25, alpha: 0.05 },
+);
+const totalOf = (c: { k: number; n: number | number[] }) =>
+  typeof c.n === "number" ? c.n * c.k : c.n.reduce((s, x) => s + x, 0);
 
 const solveCases = [
   { k: 4, f: 0.25, alpha: 0.05, power: 0.8 },
@@ -62,7 +67,9 @@ describe(`ANOVA power vs statsmodels ${ref.versions.statsmodels} FTestAnovaPower
       const ours = anovaSampleSize(c);
       expect(ours.nPerGroup).toBe(Math.ceil(ref.solve[i]! / c.k));
       expect(ours.achievedPower).toBeGreaterThanOrEqual(c.power);
-      expect(anovaPower({ k: c.k, nPerGroup: ours.nPerGroup - 1, f: c.f, alpha: c.alpha }).power).toBeLessThan(c.power);
+      expect(
+        anovaPower({ k: c.k, nPerGroup: ours.nPerGroup - 1, f: c.f, alpha: c.alpha }).power,
+      ).toBeLessThan(c.power);
     });
   });
 

@@ -20,10 +20,9 @@ import { hedgesG } from "../../packages/stats/src/effect-sizes/hedges-g.js";
  * about 1e-11 absolute, so p-values there are compared with 1e-8 absolute.
  */
 
-const data = Object.fromEntries(Object.entries(SCENARIOS).map(([name, s]) => [name, makeGroups(s.seed, s.spec)])) as Record<
-  string,
-  GroupValues[]
->;
+const data = Object.fromEntries(
+  Object.entries(SCENARIOS).map(([name, s]) => [name, makeGroups(s.seed, s.spec)]),
+) as Record<string, GroupValues[]>;
 const values = (name: string) => (data[name] as GroupValues[]).map((g) => g.values);
 
 const tukeyCases = Object.keys(data).map((name) => ({ name, alpha: name === "tiny" ? 0.1 : 0.05 }));
@@ -42,7 +41,9 @@ const welchCases = ["unequalVar", "balanced", "unequalN"].map((name) => ({ name,
 const pRng = makeRng(808);
 const pFamilies: number[][] = [[0.02], [0.04, 0.01], [0.01, 0.04, 0.03, 0.03, 0.5], [0, 1, 0.2, 0.2, 1e-12]];
 for (const m of [7, 20]) {
-  pFamilies.push(Array.from({ length: m }, () => Math.abs(standardNormal(pRng)) ** 4 / 50).map((p) => Math.min(1, p)));
+  pFamilies.push(
+    Array.from({ length: m }, () => Math.abs(standardNormal(pRng)) ** 4 / 50).map((p) => Math.min(1, p)),
+  );
 }
 const methods: Exclude<PAdjustMethod, "none">[] = ["holm", "bonferroni", "bh"];
 const pCases = pFamilies.flatMap((p) => methods.map((method) => ({ p, method })));
@@ -56,7 +57,15 @@ const hedgesCases = [
 interface Reference {
   versions: { scipy: string; statsmodels: string; numpy: string };
   tukey: { statistic: number[][]; pvalue: number[][]; low: number[][]; high: number[][] }[];
-  gamesHowell: { diff: number; se: number; df: number; q: number; p: number; lower: number; upper: number }[][];
+  gamesHowell: {
+    diff: number;
+    se: number;
+    df: number;
+    q: number;
+    p: number;
+    lower: number;
+    upper: number;
+  }[][];
   dunn: { meanRanks: number[]; pairs: { z: number; p: number; pAdj: number; u: number; r: number }[] }[];
   welchControl: { t: number; p: number; df: number; pAdj: number }[][];
   padjust: number[][];
@@ -97,8 +106,12 @@ describe(`post-hoc methods vs scipy ${ref.versions.scipy} / statsmodels ${ref.ve
           expect(track("tukey diff (rel)", rel(pair.diff, r.statistic[i]![j]!))).toBeLessThan(1e-9);
           expect(track("tukey p (abs)", Math.abs(pair.pAdj - r.pvalue[i]![j]!))).toBeLessThan(1e-8);
           const scale = Math.abs(pair.diff) + pair.se;
-          expect(track("tukey CI (rel to |diff|+se)", Math.abs(pair.lower - r.low[i]![j]!) / scale)).toBeLessThan(1e-9);
-          expect(track("tukey CI (rel to |diff|+se)", Math.abs(pair.upper - r.high[i]![j]!) / scale)).toBeLessThan(1e-9);
+          expect(
+            track("tukey CI (rel to |diff|+se)", Math.abs(pair.lower - r.low[i]![j]!) / scale),
+          ).toBeLessThan(1e-9);
+          expect(
+            track("tukey CI (rel to |diff|+se)", Math.abs(pair.upper - r.high[i]![j]!) / scale),
+          ).toBeLessThan(1e-9);
         }
       }
     },
@@ -157,7 +170,9 @@ describe(`post-hoc methods vs scipy ${ref.versions.scipy} / statsmodels ${ref.ve
   it("adjustPValues matches statsmodels multipletests (holm, bonferroni, fdr_bh) exactly up to rounding", () => {
     pCases.forEach((c, i) => {
       const ours = adjustPValues(c.p, c.method);
-      ours.forEach((v, j) => expect(track("p-adjust (abs)", Math.abs(v - ref.padjust[i]![j]!))).toBeLessThan(1e-15));
+      ours.forEach((v, j) =>
+        expect(track("p-adjust (abs)", Math.abs(v - ref.padjust[i]![j]!))).toBeLessThan(1e-15),
+      );
     });
   });
 
@@ -185,7 +200,8 @@ describe("Dunnett's test: published table values and Monte-Carlo", () => {
       [10, 5, 2.99],
       [20, 3, 2.54],
     ];
-    for (const [df, m, c] of table) expect(Math.abs(dunnettQuantile(0.95, equal(m), df) - c)).toBeLessThan(0.006);
+    for (const [df, m, c] of table)
+      expect(Math.abs(dunnettQuantile(0.95, equal(m), df) - c)).toBeLessThan(0.006);
   });
 
   it("one comparison reduces to Student's t exactly (common practice identity)", () => {

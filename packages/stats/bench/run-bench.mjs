@@ -68,7 +68,16 @@ const flat = new Float64Array(K * PER_GROUP);
 decimals.forEach((g, j) => flat.set(g.values, j * PER_GROUP));
 writeFileSync(bin, Buffer.from(flat.buffer));
 const scipy = JSON.parse(
-  execFileSync(PYTHON, [path.join(here, "scipy_same_work.py"), bin, JSON.stringify(decimals.map((g) => g.values.length)), String(RUNS)], { encoding: "utf8", maxBuffer: 1 << 26 }),
+  execFileSync(
+    PYTHON,
+    [
+      path.join(here, "scipy_same_work.py"),
+      bin,
+      JSON.stringify(decimals.map((g) => g.values.length)),
+      String(RUNS),
+    ],
+    { encoding: "utf8", maxBuffer: 1 << 26 },
+  ),
 );
 
 // The command line on a 1,000,000-row CSV of the same values.
@@ -80,7 +89,11 @@ const cliBin = path.join(here, "../bin/waymark-stats.js");
 const cliTimes = [];
 for (let r = 0; r < 3; r++) {
   const t0 = performance.now();
-  const res = spawnSync(process.execPath, [cliBin, "analyze", csv, "--group", "group", "--outcome", "outcome", "--json"], { encoding: "utf8", maxBuffer: 1 << 28 });
+  const res = spawnSync(
+    process.execPath,
+    [cliBin, "analyze", csv, "--group", "group", "--outcome", "outcome", "--json"],
+    { encoding: "utf8", maxBuffer: 1 << 28 },
+  );
   cliTimes.push(performance.now() - t0);
   if (res.status !== 0) throw new Error(`CLI failed: ${res.stderr}`);
 }
@@ -88,11 +101,20 @@ rmSync(work, { recursive: true, force: true });
 
 const results = {
   date: new Date().toISOString(),
-  machine: { node: process.version, cpus: (await import("node:os")).cpus().length, note: "shared 2-core machine; figures vary with load" },
+  machine: {
+    node: process.version,
+    cpus: (await import("node:os")).cpus().length,
+    note: "shared 2-core machine; figures vary with load",
+  },
   data: { groups: K, perGroup: PER_GROUP, total: K * PER_GROUP, seed: SEED, recorded: "3 decimals" },
   waymark: { medianMs: Math.round(waymark.medianMs), runsMs: waymark.runsMs },
   waymarkFullPrecisionDoubles: { medianMs: Math.round(waymarkFull.medianMs), runsMs: waymarkFull.runsMs },
-  scipy: { medianMs: Math.round(scipy.medianMs), runsMs: scipy.runsMs.map((t) => Math.round(t)), versions: scipy.versions, work: "f_oneway, anova_oneway(unequal), kruskal, levene(mean), levene(median), bartlett, tukey_hsd, per-group describe/percentile/skew/kurtosis" },
+  scipy: {
+    medianMs: Math.round(scipy.medianMs),
+    runsMs: scipy.runsMs.map((t) => Math.round(t)),
+    versions: scipy.versions,
+    work: "f_oneway, anova_oneway(unequal), kruskal, levene(mean), levene(median), bartlett, tukey_hsd, per-group describe/percentile/skew/kurtosis",
+  },
   ratioWaymarkToScipy: Number((waymark.medianMs / scipy.medianMs).toFixed(2)),
   peakRssMb: Math.round(peakRssMb),
   cli1MRows: { medianMs: Math.round(median(cliTimes)), runsMs: cliTimes.map((t) => Math.round(t)) },

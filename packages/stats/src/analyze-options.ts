@@ -34,7 +34,9 @@ export interface ResolvedOptions {
 function oneOf<T extends string>(name: string, value: unknown, allowed: readonly T[], fallback: T): T {
   if (value === undefined) return fallback;
   if (typeof value === "string" && (allowed as readonly string[]).includes(value)) return value as T;
-  throw new StatsInputError(`The ${name} option must be one of ${allowed.join(", ")}; got '${String(value)}'`);
+  throw new StatsInputError(
+    `The ${name} option must be one of ${allowed.join(", ")}; got '${String(value)}'`,
+  );
 }
 
 /**
@@ -48,15 +50,26 @@ export function resolveOptions(options: AnalyzeOptions, groupNames: readonly str
   }
   const control = options.control;
   if (control !== undefined && !groupNames.includes(control)) {
-    throw new StatsInputError(`The control group '${control}' is not one of the groups (${groupNames.map((g) => `'${g}'`).join(", ")})`);
+    throw new StatsInputError(
+      `The control group '${control}' is not one of the groups (${groupNames.map((g) => `'${g}'`).join(", ")})`,
+    );
   }
-  const comparisons = oneOf("comparisons", options.comparisons, ["all-pairs", "vs-control"], control !== undefined ? "vs-control" : "all-pairs");
+  const comparisons = oneOf(
+    "comparisons",
+    options.comparisons,
+    ["all-pairs", "vs-control"],
+    control !== undefined ? "vs-control" : "all-pairs",
+  );
   if (comparisons === "vs-control" && control === undefined) {
-    throw new StatsInputError("Comparisons against a control need the control option naming the control group");
+    throw new StatsInputError(
+      "Comparisons against a control need the control option naming the control group",
+    );
   }
   const independent = options.independent ?? true;
   if (independent !== true && independent !== false && independent !== "paired") {
-    throw new StatsInputError(`The independent option must be true, false or 'paired'; got '${String(independent)}'`);
+    throw new StatsInputError(
+      `The independent option must be true, false or 'paired'; got '${String(independent)}'`,
+    );
   }
   return {
     alpha,

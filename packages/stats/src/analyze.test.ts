@@ -19,13 +19,61 @@ function assertClean(x: unknown, path = "result"): void {
 describe("analyze", () => {
   it("returns every contract key", () => {
     const r = analyze({ groups: orchard });
-    for (const key of ["engineVersion", "groups", "anova", "welch", "kruskalWallis", "levene", "brownForsythe", "bartlett", "shapiroWilk", "shapiroWilkResiduals", "sdRatio", "outliers", "qq", "posthoc", "familyWiseError", "recommendation", "warnings"]) {
+    for (const key of [
+      "engineVersion",
+      "groups",
+      "anova",
+      "welch",
+      "kruskalWallis",
+      "levene",
+      "brownForsythe",
+      "bartlett",
+      "shapiroWilk",
+      "shapiroWilkResiduals",
+      "sdRatio",
+      "outliers",
+      "qq",
+      "posthoc",
+      "familyWiseError",
+      "recommendation",
+      "warnings",
+    ]) {
       expect(r, key).toHaveProperty(key);
     }
-    for (const key of ["name", "n", "missing", "mean", "sd", "se", "ciLower", "ciUpper", "median", "q1", "q3", "iqr", "min", "max", "skewness", "kurtosis"]) {
+    for (const key of [
+      "name",
+      "n",
+      "missing",
+      "mean",
+      "sd",
+      "se",
+      "ciLower",
+      "ciUpper",
+      "median",
+      "q1",
+      "q3",
+      "iqr",
+      "min",
+      "max",
+      "skewness",
+      "kurtosis",
+    ]) {
       expect(r.groups[0], key).toHaveProperty(key);
     }
-    for (const key of ["F", "df1", "df2", "p", "ssBetween", "ssWithin", "ssTotal", "msBetween", "msWithin", "etaSquared", "omegaSquared", "cohensF"]) {
+    for (const key of [
+      "F",
+      "df1",
+      "df2",
+      "p",
+      "ssBetween",
+      "ssWithin",
+      "ssTotal",
+      "msBetween",
+      "msWithin",
+      "etaSquared",
+      "omegaSquared",
+      "cohensF",
+    ]) {
       expect(r.anova, key).toHaveProperty(key);
     }
     expect(r.shapiroWilk.map((s) => (s as { group: string }).group)).toEqual(["Row A", "Row B", "Row C"]);
@@ -45,18 +93,33 @@ describe("analyze", () => {
   });
 
   it("throws StatsInputError for unusable input", () => {
-    expect(() => analyze({ groups: [orchard[0]!] })).toThrow(new StatsInputError("The analysis needs at least two groups; found 1"));
+    expect(() => analyze({ groups: [orchard[0]!] })).toThrow(
+      new StatsInputError("The analysis needs at least two groups; found 1"),
+    );
     expect(() => analyze({ groups: [orchard[0]!, { name: "X", values: [1, null] }] })).toThrow(
       new StatsInputError("The analysis needs at least two values in every group; group 'X' has 1"),
     );
-    expect(() => analyze({ groups: [orchard[0]!, { name: "X", values: ["1", "2", "abc"] }] })).toThrow(/'abc' in group 'X'/);
-    expect(() => analyze({ groups: [orchard[0]!, { name: "X", values: [1, 2, Infinity] }] })).toThrow(/must be finite/);
-    expect(() => analyze({ groups: orchard, options: { adjust: "sidak" as never } })).toThrow(/adjust option must be one of holm, bonferroni, bh/);
-    expect(() => analyze({ groups: orchard, options: { control: "Row Z" } })).toThrow(/control group 'Row Z'/);
+    expect(() => analyze({ groups: [orchard[0]!, { name: "X", values: ["1", "2", "abc"] }] })).toThrow(
+      /'abc' in group 'X'/,
+    );
+    expect(() => analyze({ groups: [orchard[0]!, { name: "X", values: [1, 2, Infinity] }] })).toThrow(
+      /must be finite/,
+    );
+    expect(() => analyze({ groups: orchard, options: { adjust: "sidak" as never } })).toThrow(
+      /adjust option must be one of holm, bonferroni, bh/,
+    );
+    expect(() => analyze({ groups: orchard, options: { control: "Row Z" } })).toThrow(
+      /control group 'Row Z'/,
+    );
   });
 
   it("explains, part by part, when all values are identical", () => {
-    const r = analyze({ groups: [{ name: "A", values: [3, 3, 3] }, { name: "B", values: [3, 3] }] });
+    const r = analyze({
+      groups: [
+        { name: "A", values: [3, 3, 3] },
+        { name: "B", values: [3, 3] },
+      ],
+    });
     expect(r.anova).toMatchObject({ available: false });
     expect(r.welch).toMatchObject({ available: false });
     expect(r.kruskalWallis).toMatchObject({ available: false });
@@ -67,7 +130,13 @@ describe("analyze", () => {
   });
 
   it("runs everything else when one group has zero variance", () => {
-    const r = analyze({ groups: [{ name: "A", values: [1, 2, 3, 4] }, { name: "B", values: [5, 5, 5] }, { name: "C", values: [2, 3, 4] }] });
+    const r = analyze({
+      groups: [
+        { name: "A", values: [1, 2, 3, 4] },
+        { name: "B", values: [5, 5, 5] },
+        { name: "C", values: [2, 3, 4] },
+      ],
+    });
     expect(r.welch).toMatchObject({ available: false, reason: expect.stringContaining("'B'") });
     expect(r.bartlett).toMatchObject({ available: false });
     expect(r.anova).toMatchObject({ available: true });
@@ -97,6 +166,8 @@ describe("analyze", () => {
   });
 
   it("gives paired designs an out-of-scope recommendation", () => {
-    expect(analyze({ groups: orchard, options: { independent: "paired" } }).recommendation.test).toBe("out-of-scope");
+    expect(analyze({ groups: orchard, options: { independent: "paired" } }).recommendation.test).toBe(
+      "out-of-scope",
+    );
   });
 });

@@ -73,10 +73,12 @@ function part<T>(run: () => T): T | Unavailable {
  * Cost: O(N log N) for the per-group sorts, O(N·k) for ranks, O(N) for the rest.
  */
 export function analyze(input: AnalyzeInput): AnalysisResult {
-  if (!input || !Array.isArray(input.groups)) throw new StatsInputError("The analysis needs a list of groups, each with a name and values");
+  if (!input || !Array.isArray(input.groups))
+    throw new StatsInputError("The analysis needs a list of groups, each with a name and values");
   const names = input.groups.map((g) => g.name);
   const duplicate = names.find((n, i) => names.indexOf(n) !== i);
-  if (duplicate !== undefined) throw new StatsInputError(`Group names must be unique; '${duplicate}' appears more than once`);
+  if (duplicate !== undefined)
+    throw new StatsInputError(`Group names must be unique; '${duplicate}' appears more than once`);
   const options = resolveOptions(input.options ?? {}, names);
   const sample = prepareSample(input.groups);
   requireGroupSizes(sample, "The analysis", 2);
@@ -87,12 +89,20 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const totalMissing = groups.reduce((s, g) => s + g.missing, 0);
   if (totalMissing > 0) {
     const which = groups.filter((g) => g.missing > 0).map((g) => `'${g.name}' ${g.missing}`);
-    warnings.push(`${totalMissing} missing value${totalMissing === 1 ? " was" : "s were"} excluded (${which.join(", ")}).`);
+    warnings.push(
+      `${totalMissing} missing value${totalMissing === 1 ? " was" : "s were"} excluded (${which.join(", ")}).`,
+    );
   }
-  const constantGroups = groups.filter((g) => typeof g.sd === "number" && g.sd === 0).map((g) => `'${g.name}'`);
-  const allIdentical = groups.every((g) => g.min === groups[0]?.min && g.max === groups[0]?.max && g.min === g.max);
+  const constantGroups = groups
+    .filter((g) => typeof g.sd === "number" && g.sd === 0)
+    .map((g) => `'${g.name}'`);
+  const allIdentical = groups.every(
+    (g) => g.min === groups[0]?.min && g.max === groups[0]?.max && g.min === g.max,
+  );
   if (allIdentical) {
-    warnings.push("All values are identical across all groups, so no test can detect a difference; the tests report why they cannot run.");
+    warnings.push(
+      "All values are identical across all groups, so no test can detect a difference; the tests report why they cannot run.",
+    );
   } else if (constantGroups.length > 0) {
     warnings.push(
       `Zero variance in group${constantGroups.length > 1 ? "s" : ""} ${constantGroups.join(", ")}: Welch's ANOVA, Games–Howell and Bartlett's test cannot run (they divide by or take the log of each group's variance); the other results are reported.`,
@@ -101,7 +111,12 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
 
   const anovaCore = part(() => oneWayAnova(sample));
   // η² with its 95% interval from the noncentral F (Steiger 2004), beside the point estimate.
-  const anova = anovaCore.available ? { ...anovaCore, etaSquaredCi: part(() => etaSquaredCi(anovaCore.F, anovaCore.df1, anovaCore.df2, 0.95)) } : anovaCore;
+  const anova = anovaCore.available
+    ? {
+        ...anovaCore,
+        etaSquaredCi: part(() => etaSquaredCi(anovaCore.F, anovaCore.df1, anovaCore.df2, 0.95)),
+      }
+    : anovaCore;
   const welch = part(() => welchAnova(sample));
   const kw = part(() => kruskalWallis(sample));
   const lev = part(() => levene(sample, "mean"));
@@ -109,13 +124,18 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const bart = part(() => bartlett(sample));
   const shapiro = sample.groups.map((g) => {
     const r = shapiroWilk(sortedValues(g));
-    return r.available ? { group: g.name, n: r.n, W: r.W, p: r.p } : { group: g.name, n: g.centred.length, available: false as const, reason: r.reason };
+    return r.available
+      ? { group: g.name, n: r.n, W: r.W, p: r.p }
+      : { group: g.name, n: g.centred.length, available: false as const, reason: r.reason };
   });
   // The full sorted residuals are needed only where Shapiro–Wilk applies (N ≤ 5000).
   const swResiduals =
     totalN <= SHAPIRO_WILK_MAX_N
       ? shapiroWilk(pooledResiduals(sample))
-      : ({ available: false, reason: `The Shapiro–Wilk approximation is valid up to ${SHAPIRO_WILK_MAX_N} values; the pooled residuals number ${totalN}, so skewness and kurtosis describe the shape instead` } as const);
+      : ({
+          available: false,
+          reason: `The Shapiro–Wilk approximation is valid up to ${SHAPIRO_WILK_MAX_N} values; the pooled residuals number ${totalN}, so skewness and kurtosis describe the shape instead`,
+        } as const);
   if (!swResiduals.available && totalN > SHAPIRO_WILK_MAX_N) warnings.push(swResiduals.reason + ".");
   const ratio = sdRatioOf(sample);
   const sdRatio: number | Unavailable = ratio.available ? ratio.ratio : ratio;
@@ -142,29 +162,43 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       extremeOutliers: outlierReport.available ? outlierReport.totalExtreme : 0,
     },
   );
-  if (allIdentical) recommendation.caveats.unshift("All values are identical, so none of the tests can be computed; the recommendation describes the design only.");
+  if (allIdentical)
+    recommendation.caveats.unshift(
+      "All values are identical, so none of the tests can be computed; the recommendation describes the design only.",
+    );
 
-  return finite({
-    engineVersion: ENGINE_VERSION,
-    options,
-    data: { k: sample.groups.length, totalN, totalMissing, centring: sample.centring, offset: sample.offset },
-    groups,
-    anova,
-    welch,
-    kruskalWallis: kw,
-    levene: lev,
-    brownForsythe: bf,
-    bartlett: bart,
-    shapiroWilk: shapiro,
-    shapiroWilkResiduals: swResiduals.available ? { n: swResiduals.n, W: swResiduals.W, p: swResiduals.p } : swResiduals,
-    sdRatio,
-    outliers: outlierReport,
-    qq,
-    posthoc: posthoc.posthoc,
-    familyWiseError: posthoc.familyWiseError,
-    recommendation,
+  return finite(
+    {
+      engineVersion: ENGINE_VERSION,
+      options,
+      data: {
+        k: sample.groups.length,
+        totalN,
+        totalMissing,
+        centring: sample.centring,
+        offset: sample.offset,
+      },
+      groups,
+      anova,
+      welch,
+      kruskalWallis: kw,
+      levene: lev,
+      brownForsythe: bf,
+      bartlett: bart,
+      shapiroWilk: shapiro,
+      shapiroWilkResiduals: swResiduals.available
+        ? { n: swResiduals.n, W: swResiduals.W, p: swResiduals.p }
+        : swResiduals,
+      sdRatio,
+      outliers: outlierReport,
+      qq,
+      posthoc: posthoc.posthoc,
+      familyWiseError: posthoc.familyWiseError,
+      recommendation,
+      warnings,
+    },
     warnings,
-  }, warnings);
+  );
 }
 
 /**
@@ -181,7 +215,8 @@ function finite<T>(result: T, warnings: string[]): T {
     if (Array.isArray(x)) return x.map((v, i) => visit(v, `${path}[${i}]`));
     if (x && typeof x === "object") {
       const out: Record<string, unknown> = {};
-      for (const [k, v] of Object.entries(x)) if (v !== undefined) out[k] = visit(v, path ? `${path}.${k}` : k);
+      for (const [k, v] of Object.entries(x))
+        if (v !== undefined) out[k] = visit(v, path ? `${path}.${k}` : k);
       return out;
     }
     return x;

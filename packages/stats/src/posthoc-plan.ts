@@ -24,7 +24,9 @@ function attempt<T>(run: () => T): T | Unavailable {
 }
 
 /** An Unavailable result stays as it is; a family keeps only its pairs (the contract shape). */
-function pairsOf(result: Unavailable | { available?: boolean; pairs: readonly object[] }): object[] | Unavailable {
+function pairsOf(
+  result: Unavailable | { available?: boolean; pairs: readonly object[] },
+): object[] | Unavailable {
   if ("available" in result && result.available === false) return result as Unavailable;
   return [...(result as { pairs: readonly object[] }).pairs];
 }
@@ -53,21 +55,42 @@ export function runPosthoc(
   const tukey: object[] | Unavailable =
     a.available && a.msWithin !== undefined && a.df2 !== undefined
       ? pairsOf(attempt(() => tukeyKramer(summaries, a.msWithin as number, a.df2 as number, alpha)))
-      : { available: false, reason: `Tukey–Kramer needs the classic ANOVA's error variance, which is unavailable: ${a.reason ?? "unknown reason"}` };
+      : {
+          available: false,
+          reason: `Tukey–Kramer needs the classic ANOVA's error variance, which is unavailable: ${a.reason ?? "unknown reason"}`,
+        };
   const gh = attempt(() => gamesHowell(summaries, alpha));
   const gamesHowellPairs = "pairs" in gh ? [...gh.pairs] : gh;
 
   // Ranks only: the centred values keep every order and tie exactly, and are already sorted.
-  const dunnResult = attempt(() => dunnSorted(sample.groups.map((g) => ({ name: g.name, sorted: sortedValues(g) })), options.adjust, alpha, midranks(sample)));
+  const dunnResult = attempt(() =>
+    dunnSorted(
+      sample.groups.map((g) => ({ name: g.name, sorted: sortedValues(g) })),
+      options.adjust,
+      alpha,
+      midranks(sample),
+    ),
+  );
   const dunnPairs = pairsOf(dunnResult);
 
-  const posthoc: Record<string, unknown> = { tukey, gamesHowell: gamesHowellPairs, dunn: dunnPairs, adjust: options.adjust, dunnTwoSided: true };
+  const posthoc: Record<string, unknown> = {
+    tukey,
+    gamesHowell: gamesHowellPairs,
+    dunn: dunnPairs,
+    adjust: options.adjust,
+    dunnTwoSided: true,
+  };
   const control = options.control;
   if (control !== undefined) {
     let dunnVsControl: object[] | Unavailable;
     if (Array.isArray(dunnPairs)) {
-      const withControl = (dunnPairs as { a: string; b: string; p: number }[]).filter((x) => x.a === control || x.b === control);
-      const adjusted = adjustPValues(withControl.map((x) => x.p), options.adjust);
+      const withControl = (dunnPairs as { a: string; b: string; p: number }[]).filter(
+        (x) => x.a === control || x.b === control,
+      );
+      const adjusted = adjustPValues(
+        withControl.map((x) => x.p),
+        options.adjust,
+      );
       dunnVsControl = withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] }));
     } else dunnVsControl = dunnPairs;
     posthoc.control = {

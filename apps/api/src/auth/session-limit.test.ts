@@ -8,7 +8,10 @@ describe("session limits", () => {
     const agent = await signedIn(t.app, "analyst", t.env.demoPassword);
     await agent.get("/api/auth/me").expect(200);
     // Age the stored session's sign-in time by 12 hours and a minute.
-    const rows = (await t.ds.query(`SELECT sid, data FROM sessions WHERE user_id IS NOT NULL`)) as { sid: string; data: string }[];
+    const rows = (await t.ds.query(`SELECT sid, data FROM sessions WHERE user_id IS NOT NULL`)) as {
+      sid: string;
+      data: string;
+    }[];
     for (const r of rows) {
       const data = JSON.parse(r.data) as { startedAt: number };
       data.startedAt -= (12 * 60 + 1) * 60_000;

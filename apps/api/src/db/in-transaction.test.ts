@@ -10,9 +10,13 @@ describe("inTransaction", () => {
     // Each transaction yields to the event loop mid-way, as real work (I/O, a worker) does.
     const work = (label: string) =>
       inTransaction(ds, async (tx) => {
-        await tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', ?)`, [`${label} start`]);
+        await tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', ?)`, [
+          `${label} start`,
+        ]);
         await pause(10);
-        await tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', ?)`, [`${label} end`]);
+        await tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', ?)`, [
+          `${label} end`,
+        ]);
       });
     await Promise.all(["a", "b", "c"].map(work));
     const rows = (await ds.query(`SELECT summary FROM audit_events ORDER BY id`)) as { summary: string }[];
@@ -28,7 +32,9 @@ describe("inTransaction", () => {
       await pause(5);
       throw new Error("boom");
     });
-    const next = inTransaction(ds, (tx) => tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', 'kept')`));
+    const next = inTransaction(ds, (tx) =>
+      tx.query(`INSERT INTO audit_events (action, summary) VALUES ('study.created', 'kept')`),
+    );
     await expect(failing).rejects.toThrow("boom");
     await next;
     const rows = (await ds.query(`SELECT summary FROM audit_events`)) as { summary: string }[];

@@ -47,7 +47,11 @@ function emptyWal(): void {
  * Sends a request and SIGKILLs the server once the WAL holds at least `walAtLeast` bytes, or
  * after `giveUpMs` if it never does; reports when the kill fell and how far the request got.
  */
-async function killWhileWriting(send: () => Promise<Response>, walAtLeast: number, giveUpMs: number): Promise<string> {
+async function killWhileWriting(
+  send: () => Promise<Response>,
+  walAtLeast: number,
+  giveUpMs: number,
+): Promise<string> {
   emptyWal();
   let answered = false;
   const pending = send().then(
@@ -99,7 +103,13 @@ beforeAll(async () => {
   await analyst.json(
     "PUT",
     `/api/studies/${studyId}/design`,
-    { independence: "independent", scale: "continuous", hasControl: "no", comparisons: "all-pairs", assignment: "randomized" },
+    {
+      independence: "independent",
+      scale: "continuous",
+      hasControl: "no",
+      comparisons: "all-pairs",
+      assignment: "randomized",
+    },
     200,
   );
   await analyst.json("POST", `/api/studies/${studyId}/plan/lock`, undefined, 200);
@@ -111,45 +121,59 @@ afterAll(async () => {
 });
 
 describe("a server killed mid-request leaves a sound database", () => {
-  it("a large upload cut off by SIGKILL leaves no partial dataset and an audit trail that matches", async () => {
-    const upload = () => analyst.upload(`/api/studies/${studyId}/datasets`, csv, "large.csv", UPLOAD_FIELDS);
-    const [first, ms] = await timed(upload);
-    const body = (await first.json()) as { dataset: { id: number } };
-    expect(first.status, JSON.stringify(body)).toBe(201);
-    datasetId = body.dataset.id;
+  it(
+    "a large upload cut off by SIGKILL leaves no partial dataset and an audit trail that matches",
+    async () => {
+      const upload = () =>
+        analyst.upload(`/api/studies/${studyId}/datasets`, csv, "large.csv", UPLOAD_FIELDS);
+      const [first, ms] = await timed(upload);
+      const body = (await first.json()) as { dataset: { id: number } };
+      expect(first.status, JSON.stringify(body)).toBe(201);
+      datasetId = body.dataset.id;
 
-    const outcome = await killWhileWriting(upload, 1 << 20, 3 * ms);
-    console.log(`upload of ${(csv.length / 1e6).toFixed(1)} MB took ${ms.toFixed(0)} ms; ${outcome}`);
-    expectConsistent(readStoredInvariants(dbPath));
+      const outcome = await killWhileWriting(upload, 1 << 20, 3 * ms);
+      console.log(`upload of ${(csv.length / 1e6).toFixed(1)} MB took ${ms.toFixed(0)} ms; ${outcome}`);
+      expectConsistent(readStoredInvariants(dbPath));
 
-    await restart();
-    const list = await analyst.json<{ datasets: { id: number }[] }>("GET", `/api/studies/${studyId}/datasets`, undefined, 200);
-    expect(list.datasets.map((d) => d.id)).toContain(datasetId);
-    expectConsistent(readStoredInvariants(dbPath));
-  }, TIMEOUT);
+      await restart();
+      const list = await analyst.json<{ datasets: { id: number }[] }>(
+        "GET",
+        `/api/studies/${studyId}/datasets`,
+        undefined,
+        200,
+      );
+      expect(list.datasets.map((d) => d.id)).toContain(datasetId);
+      expectConsistent(readStoredInvariants(dbPath));
+    },
+    TIMEOUT,
+  );
 
-  it("an analysis cut off by SIGKILL leaves no partial analysis, and runs again after the restart", async () => {
-    const run = () =>
-      analyst.request("POST", `/api/studies/${studyId}/analyses`, JSON.stringify({ datasetId }), {
-        "content-type": "application/json",
-      });
-    const [first, ms] = await timed(run);
-    expect(first.status, await first.text()).toBe(201);
+  it(
+    "an analysis cut off by SIGKILL leaves no partial analysis, and runs again after the restart",
+    async () => {
+      const run = () =>
+        analyst.request("POST", `/api/studies/${studyId}/analyses`, JSON.stringify({ datasetId }), {
+          "content-type": "application/json",
+        });
+      const [first, ms] = await timed(run);
+      expect(first.status, await first.text()).toBe(201);
 
-    // Waiting for the WAL's 32-byte header plus one whole frame (24 + 4096 bytes) puts this kill
-    // inside the result's write transaction or just after its commit.
-    const outcome = await killWhileWriting(run, 32 + 24 + 4096, 3 * ms);
-    console.log(`analysis of ${ROWS} values took ${ms.toFixed(0)} ms; ${outcome}`);
-    expectConsistent(readStoredInvariants(dbPath));
+      // Waiting for the WAL's 32-byte header plus one whole frame (24 + 4096 bytes) puts this kill
+      // inside the result's write transaction or just after its commit.
+      const outcome = await killWhileWriting(run, 32 + 24 + 4096, 3 * ms);
+      console.log(`analysis of ${ROWS} values took ${ms.toFixed(0)} ms; ${outcome}`);
+      expectConsistent(readStoredInvariants(dbPath));
 
-    await restart();
-    const health = await fetch(`${api.url}/api/health`);
-    expect(health.status).toBe(200);
-    const before = readStoredInvariants(dbPath).analysisIds.length;
-    const again = await run();
-    expect(again.status, await again.clone().text()).toBe(201);
-    const inv = readStoredInvariants(dbPath);
-    expectConsistent(inv);
-    expect(inv.analysisIds.length).toBe(before + 1);
-  }, TIMEOUT);
+      await restart();
+      const health = await fetch(`${api.url}/api/health`);
+      expect(health.status).toBe(200);
+      const before = readStoredInvariants(dbPath).analysisIds.length;
+      const again = await run();
+      expect(again.status, await again.clone().text()).toBe(201);
+      const inv = readStoredInvariants(dbPath);
+      expectConsistent(inv);
+      expect(inv.analysisIds.length).toBe(before + 1);
+    },
+    TIMEOUT,
+  );
 });

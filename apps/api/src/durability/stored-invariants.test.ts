@@ -10,7 +10,9 @@ describe("readStoredInvariants", () => {
   it("reports a dataset without its audit event, a blob that does not match its size and hash, and an orphan event", async () => {
     const dbPath = path.join(fs.mkdtempSync(path.join(os.tmpdir(), "waymark-invariants-")), "db.sqlite");
     const ds = await openDatabase(dbPath);
-    await ds.query(`INSERT INTO users (email, display_name, role, password_hash) VALUES ('a@x.test', 'A', 'analyst', 'x')`);
+    await ds.query(
+      `INSERT INTO users (email, display_name, role, password_hash) VALUES ('a@x.test', 'A', 'analyst', 'x')`,
+    );
     await ds.query(
       `INSERT INTO studies (title, objective, outcome_name, outcome_unit, factor_name, levels, alpha, context, status, owner_id, design, plan)
        VALUES ('t', 'o', 'v', 'u', 'g', '["A","B","C"]', 0.05, 'general', 'draft', 1, '{}', '{}')`,
@@ -21,7 +23,9 @@ describe("readStoredInvariants", () => {
        VALUES (1, 1, 'f.csv', 10, 'e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855', 'text/csv', x'0102030405', 'long', '{}', '{"groups":[]}', 1)`,
     );
     // An event for an analysis that was never stored: the pairing must fail in this direction too.
-    await ds.query(`INSERT INTO audit_events (action, summary, "after") VALUES ('analysis.run', 'ran', '{"analysisId":7}')`);
+    await ds.query(
+      `INSERT INTO audit_events (action, summary, "after") VALUES ('analysis.run', 'ran', '{"analysisId":7}')`,
+    );
     await ds.destroy();
     const inv = readStoredInvariants(dbPath);
     expect(inv.integrity).toBe("ok");

@@ -28,8 +28,12 @@ export function readStoredInvariants(databasePath: string) {
       })
       .map((d) => d.id);
 
-    const ids = (sql: string) => (db.prepare(sql).pluck().all() as (number | null)[]).sort((a, b) => (a ?? 0) - (b ?? 0));
-    const analyses = db.prepare(`SELECT id, result FROM analyses ORDER BY id`).all() as { id: number; result: string }[];
+    const ids = (sql: string) =>
+      (db.prepare(sql).pluck().all() as (number | null)[]).sort((a, b) => (a ?? 0) - (b ?? 0));
+    const analyses = db.prepare(`SELECT id, result FROM analyses ORDER BY id`).all() as {
+      id: number;
+      result: string;
+    }[];
     const unreadableAnalyses = analyses
       .filter((a) => {
         try {

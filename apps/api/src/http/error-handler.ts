@@ -23,7 +23,13 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     };
   } else if (isCsrfError(err)) {
     status = 403;
-    body = { error: { code: "csrf_invalid", message: "This request did not carry Waymark's form token, so it was refused. Reload the page and try again." } };
+    body = {
+      error: {
+        code: "csrf_invalid",
+        message:
+          "This request did not carry Waymark's form token, so it was refused. Reload the page and try again.",
+      },
+    };
   } else if (isBodyParserError(err)) {
     status = err.status;
     body = {

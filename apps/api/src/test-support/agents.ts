@@ -13,8 +13,15 @@ export async function anon(app: Express) {
 }
 
 /** A supertest agent signed in as one of the demo accounts. */
-export async function signedIn(app: Express, role: "analyst" | "reviewer" | "writer" | "admin", password: string) {
+export async function signedIn(
+  app: Express,
+  role: "analyst" | "reviewer" | "writer" | "admin",
+  password: string,
+) {
   const agent = await anon(app);
-  await agent.post("/api/auth/login").send({ email: `${role}@waymark.test`, password }).expect(200);
+  await agent
+    .post("/api/auth/login")
+    .send({ email: `${role}@waymark.test`, password })
+    .expect(200);
   return agent;
 }

@@ -42,7 +42,12 @@ export class HttpSession {
   }
 
   /** Sends JSON and returns the parsed reply, failing with the API's own message on another status. */
-  async json<T = Record<string, unknown>>(method: string, path: string, body?: unknown, expectStatus?: number): Promise<T> {
+  async json<T = Record<string, unknown>>(
+    method: string,
+    path: string,
+    body?: unknown,
+    expectStatus?: number,
+  ): Promise<T> {
     const res = await this.request(
       method,
       path,

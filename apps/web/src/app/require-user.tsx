@@ -9,7 +9,12 @@ export function RequireUser() {
   const me = useMe();
   const location = useLocation();
   if (me.isPending) return <p className="p-8 text-ink-soft">Loading…</p>;
-  if (me.isError) return <div className="p-8"><ErrorPanel message={me.error.message} /></div>;
+  if (me.isError)
+    return (
+      <div className="p-8">
+        <ErrorPanel message={me.error.message} />
+      </div>
+    );
   if (!me.data) return <Navigate to={paths.signIn} replace state={{ from: location.pathname }} />;
   return <AppShell user={me.data} />;
 }

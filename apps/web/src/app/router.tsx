@@ -38,12 +38,37 @@ export function createRouter() {
           children: [
             { path: paths.reviews, element: <ReviewQueueRoute /> },
             // The review page shows the results with their charts, so it loads on demand too.
-            { path: paths.review, lazy: () => import("./routes/reviews/review-study").then((m) => ({ Component: m.ReviewStudyRoute })) },
+            {
+              path: paths.review,
+              lazy: () =>
+                import("./routes/reviews/review-study").then((m) => ({ Component: m.ReviewStudyRoute })),
+            },
           ],
         },
-        { path: paths.audit, element: <RequirePermission permission="audit:view"><AuditRoute /></RequirePermission> },
-        { path: paths.people, element: <RequirePermission permission="people:manage"><PeopleRoute /></RequirePermission> },
-        { path: paths.settings, element: <RequirePermission permission="settings:manage"><SettingsRoute /></RequirePermission> },
+        {
+          path: paths.audit,
+          element: (
+            <RequirePermission permission="audit:view">
+              <AuditRoute />
+            </RequirePermission>
+          ),
+        },
+        {
+          path: paths.people,
+          element: (
+            <RequirePermission permission="people:manage">
+              <PeopleRoute />
+            </RequirePermission>
+          ),
+        },
+        {
+          path: paths.settings,
+          element: (
+            <RequirePermission permission="settings:manage">
+              <SettingsRoute />
+            </RequirePermission>
+          ),
+        },
         {
           element: <RequirePermission permission="reports:view" />,
           children: [
@@ -57,11 +82,23 @@ export function createRouter() {
           children: [
             { index: true, element: <StudyOverviewRoute /> },
             { path: "design", element: <StudyDesignRoute /> },
-            { path: "plan", lazy: () => import("./routes/studies/study-plan").then((m) => ({ Component: m.StudyPlanRoute })) },
+            {
+              path: "plan",
+              lazy: () =>
+                import("./routes/studies/study-plan").then((m) => ({ Component: m.StudyPlanRoute })),
+            },
             { path: "data", element: <StudyDataRoute /> },
-            { path: "checks", lazy: () => import("./routes/studies/study-checks").then((m) => ({ Component: m.StudyChecksRoute })) },
+            {
+              path: "checks",
+              lazy: () =>
+                import("./routes/studies/study-checks").then((m) => ({ Component: m.StudyChecksRoute })),
+            },
             { path: "choice", element: <StudyChoiceRoute /> },
-            { path: "results", lazy: () => import("./routes/studies/study-results").then((m) => ({ Component: m.StudyResultsRoute })) },
+            {
+              path: "results",
+              lazy: () =>
+                import("./routes/studies/study-results").then((m) => ({ Component: m.StudyResultsRoute })),
+            },
             { path: "*", element: <NotFoundRoute /> },
           ],
         },

@@ -21,7 +21,8 @@ export const STUDY_STEP_SEGMENTS = ["design", "plan", "data", "checks", "choice"
 export type StudyStepSegment = (typeof STUDY_STEP_SEGMENTS)[number];
 
 /** Links into one study: the overview, or one of its steps. */
-export const studyPath = (studyId: number | string, step?: StudyStepSegment) => `/studies/${studyId}${step ? `/${step}` : ""}`;
+export const studyPath = (studyId: number | string, step?: StudyStepSegment) =>
+  `/studies/${studyId}${step ? `/${step}` : ""}`;
 
 /** The review page of one study. */
 export const reviewPath = (studyId: number | string) => `/reviews/${studyId}`;

@@ -23,7 +23,15 @@ export function can(role: Role | undefined, permission: Permission): boolean {
 }
 
 /** Renders its children only for roles that hold the permission. */
-export function Authorization({ permission, children, fallback = null }: { permission: Permission; children: ReactNode; fallback?: ReactNode }) {
+export function Authorization({
+  permission,
+  children,
+  fallback = null,
+}: {
+  permission: Permission;
+  children: ReactNode;
+  fallback?: ReactNode;
+}) {
   const me = useMe();
   return can(me.data?.role, permission) ? <>{children}</> : <>{fallback}</>;
 }

@@ -8,7 +8,8 @@ export function fieldError(err: unknown): { field: string; message: string } | n
   if (!(err instanceof ApiError)) return null;
   const issues = (err.details as { issues?: { field?: unknown; message?: unknown }[] } | undefined)?.issues;
   const first = Array.isArray(issues) ? issues[0] : undefined;
-  if (first && typeof first.field === "string" && first.field && typeof first.message === "string") return { field: first.field, message: first.message };
+  if (first && typeof first.field === "string" && first.field && typeof first.message === "string")
+    return { field: first.field, message: first.message };
   const m = /^([A-Za-z][\w.]*): (.+)$/s.exec(err.message);
   return m ? { field: m[1]!, message: m[2]! } : null;
 }

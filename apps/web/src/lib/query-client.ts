@@ -7,7 +7,8 @@ export function makeQueryClient(): QueryClient {
       queries: {
         staleTime: 30_000,
         // A 4xx will not get better by asking again.
-        retry: (count, err) => !(err instanceof ApiError && err.status >= 400 && err.status < 500) && count < 2,
+        retry: (count, err) =>
+          !(err instanceof ApiError && err.status >= 400 && err.status < 500) && count < 2,
         refetchOnWindowFocus: false,
       },
     },

@@ -7,5 +7,12 @@ import { makeQueryClient } from "@/lib/query-client";
 /** Renders a component with the app's providers around it. */
 export function renderWithProviders(ui: ReactElement) {
   const client = makeQueryClient();
-  return { client, ...render(<QueryClientProvider client={client}><MemoryRouter>{ui}</MemoryRouter></QueryClientProvider>) };
+  return {
+    client,
+    ...render(
+      <QueryClientProvider client={client}>
+        <MemoryRouter>{ui}</MemoryRouter>
+      </QueryClientProvider>,
+    ),
+  };
 }

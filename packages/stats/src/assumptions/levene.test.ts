@@ -4,14 +4,23 @@ import { levene } from "./levene.js";
 describe("levene", () => {
   it("mean-centred: ANOVA on |x − mean| (hand computation)", () => {
     // Deviations 1,0,1 vs 2,0,2: SS_B = 2/3, SS_W = 10/3, F = (2/3)/(10/12) = 0.8.
-    const r = levene([{ name: "A", values: [1, 2, 3] }, { name: "B", values: [2, 4, 6] }], "mean");
+    const r = levene(
+      [
+        { name: "A", values: [1, 2, 3] },
+        { name: "B", values: [2, 4, 6] },
+      ],
+      "mean",
+    );
     if (!r.available) throw new Error(r.reason);
     expect(r.F).toBeCloseTo(0.8, 14);
     expect(r.method).toBe("Levene (mean-centred)");
   });
 
   it("median-centred (Brown–Forsythe) differs from mean-centred on skewed groups", () => {
-    const g = [{ name: "A", values: [1, 1, 2, 9] }, { name: "B", values: [3, 4, 4, 5, 20] }];
+    const g = [
+      { name: "A", values: [1, 1, 2, 9] },
+      { name: "B", values: [3, 4, 4, 5, 20] },
+    ];
     const m = levene(g, "mean");
     const d = levene(g, "median");
     if (!m.available || !d.available) throw new Error("unavailable");
@@ -28,7 +37,13 @@ describe("levene", () => {
   });
 
   it("is unavailable when every group is constant", () => {
-    const r = levene([{ name: "A", values: [3, 3] }, { name: "B", values: [4, 4, 4] }], "median");
+    const r = levene(
+      [
+        { name: "A", values: [3, 3] },
+        { name: "B", values: [4, 4, 4] },
+      ],
+      "median",
+    );
     expect(r.available).toBe(false);
   });
 });

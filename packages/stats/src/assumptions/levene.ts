@@ -41,7 +41,10 @@ export function levene(input: SampleInput, center: "mean" | "median"): LeveneRes
   });
   const result = oneWayAnova(sampleFromArrays(deviations));
   if (!result.available) {
-    return { available: false, reason: `${name} is undefined: the absolute deviations from the group ${center}s show no spread within groups (${result.reason.charAt(0).toLowerCase()}${result.reason.slice(1)})` };
+    return {
+      available: false,
+      reason: `${name} is undefined: the absolute deviations from the group ${center}s show no spread within groups (${result.reason.charAt(0).toLowerCase()}${result.reason.slice(1)})`,
+    };
   }
   return {
     available: true,

@@ -19,7 +19,10 @@ describe("outliers", () => {
 
   it("uses internally studentized residuals e/√(MS_W(1 − 1/n))", () => {
     const values = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 10];
-    const r = outliers([{ name: "A", values }, { name: "B", values: [1, -1, 1, -1] }]);
+    const r = outliers([
+      { name: "A", values },
+      { name: "B", values: [1, -1, 1, -1] },
+    ]);
     if (!r.available) throw new Error("unavailable");
     // Group A mean 0.5; SS_W = 19·0.25 + 9.5² + 4 = 99; df 22; MS_W = 4.5; scale √(4.5·0.95).
     const expected = 9.5 / Math.sqrt(4.5 * 0.95);

@@ -137,7 +137,11 @@ export function outliers(input: SampleInput): OutlierReport | Unavailable {
   });
   return {
     available: true,
-    fences: { mild: MILD_FENCE_IQR, extreme: EXTREME_FENCE_IQR, quantileDefinition: "linear interpolation between order statistics (type 7)" },
+    fences: {
+      mild: MILD_FENCE_IQR,
+      extreme: EXTREME_FENCE_IQR,
+      quantileDefinition: "linear interpolation between order statistics (type 7)",
+    },
     residualRule: `internally studentized residual (x − group mean) / √(MS_within · (1 − 1/n)), flagged beyond ±${STUDENTIZED_RESIDUAL_LIMIT}`,
     groups,
     totalMild,

@@ -31,7 +31,9 @@ export interface QqPlot {
  */
 export function qqPlot(input: ArrayLike<number> | CentredSample): QqPlot | Unavailable {
   const sample = "kind" in input && input.kind === "centred-sample" ? (input as CentredSample) : undefined;
-  const n = sample ? sample.groups.reduce((s, g) => s + g.centred.length, 0) : (input as ArrayLike<number>).length;
+  const n = sample
+    ? sample.groups.reduce((s, g) => s + g.centred.length, 0)
+    : (input as ArrayLike<number>).length;
   if (n < 2) return { available: false, reason: `A Q–Q plot needs at least 2 residuals; found ${n}` };
   const thinned = n > QQ_MAX_POINTS;
   const count = thinned ? QQ_MAX_POINTS : n;
@@ -48,5 +50,13 @@ export function qqPlot(input: ArrayLike<number> | CentredSample): QqPlot | Unava
     const sorted = sample ? pooledResiduals(sample) : (input as ArrayLike<number>);
     for (const i of ranks) residuals.push(sorted[i - 1] as number);
   }
-  return { available: true, plottingPositions: "Blom (i − 3/8)/(n + 1/4)", n, thinned, ranks, theoretical, residuals };
+  return {
+    available: true,
+    plottingPositions: "Blom (i − 3/8)/(n + 1/4)",
+    n,
+    thinned,
+    ranks,
+    theoretical,
+    residuals,
+  };
 }

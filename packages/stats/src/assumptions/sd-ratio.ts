@@ -24,7 +24,11 @@ export function sdRatio(input: SampleInput): SdRatio | Unavailable {
     return { group: g.name, n: m.n, sd: m.n > 1 ? Math.sqrt(m.ss / (m.n - 1)) : NaN };
   });
   const short = sds.find((s) => s.n < 2);
-  if (short) return { available: false, reason: `The SD ratio needs at least 2 values in every group; group '${short.group}' has ${short.n}` };
+  if (short)
+    return {
+      available: false,
+      reason: `The SD ratio needs at least 2 values in every group; group '${short.group}' has ${short.n}`,
+    };
   let largest = sds[0];
   let smallest = sds[0];
   for (const s of sds) {
@@ -33,7 +37,10 @@ export function sdRatio(input: SampleInput): SdRatio | Unavailable {
   }
   if (!largest || !smallest) return { available: false, reason: "The SD ratio needs at least one group" };
   if (smallest.sd === 0) {
-    return { available: false, reason: `Group '${smallest.group}' has zero standard deviation, so the ratio of SDs is undefined` };
+    return {
+      available: false,
+      reason: `Group '${smallest.group}' has zero standard deviation, so the ratio of SDs is undefined`,
+    };
   }
   return {
     available: true,

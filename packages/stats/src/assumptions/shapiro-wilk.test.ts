@@ -14,7 +14,12 @@ describe("shapiroWilk", () => {
   });
 
   it("never returns p < 0 at n = 3 (the trap), even at the smallest possible W", () => {
-    for (const xs of [[0, 0, 1], [0, 1e-12, 1], [5, 5, 5 + 1e-9], [1e9, 1e9, 1e9 + 1]]) {
+    for (const xs of [
+      [0, 0, 1],
+      [0, 1e-12, 1],
+      [5, 5, 5 + 1e-9],
+      [1e9, 1e9, 1e9 + 1],
+    ]) {
       const r = shapiroWilk(sorted(xs));
       if (!r.available) throw new Error(r.reason);
       expect(r.p).toBeGreaterThanOrEqual(0);
@@ -32,9 +37,18 @@ describe("shapiroWilk", () => {
   });
 
   it("explains n < 3, n > 5000 and zero range", () => {
-    expect(shapiroWilk(sorted([1, 2]))).toMatchObject({ available: false, reason: expect.stringContaining("at least 3") });
-    expect(shapiroWilk(new Float64Array(5001).map((_, i) => i))).toMatchObject({ available: false, reason: expect.stringContaining("5000") });
-    expect(shapiroWilk(sorted([4, 4, 4, 4]))).toMatchObject({ available: false, reason: expect.stringContaining("identical") });
+    expect(shapiroWilk(sorted([1, 2]))).toMatchObject({
+      available: false,
+      reason: expect.stringContaining("at least 3"),
+    });
+    expect(shapiroWilk(new Float64Array(5001).map((_, i) => i))).toMatchObject({
+      available: false,
+      reason: expect.stringContaining("5000"),
+    });
+    expect(shapiroWilk(sorted([4, 4, 4, 4]))).toMatchObject({
+      available: false,
+      reason: expect.stringContaining("identical"),
+    });
   });
 
   it("finds no departure for symmetric normal-score-like data", () => {

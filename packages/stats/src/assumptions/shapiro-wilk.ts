@@ -55,7 +55,11 @@ export function shapiroWilk(sorted: ArrayLike<number>): ShapiroWilkResult | Unav
   const lo = sorted[0] as number;
   const hi = sorted[n - 1] as number;
   const range = hi - lo;
-  if (!(range > 0)) return { available: false, reason: "All values are identical, so the Shapiro–Wilk statistic is undefined" };
+  if (!(range > 0))
+    return {
+      available: false,
+      reason: "All values are identical, so the Shapiro–Wilk statistic is undefined",
+    };
 
   const half = Math.floor(n / 2);
   // a[i] for i = 0..half-1 is the coefficient of the (i+1)-th largest value (positive).
@@ -92,7 +96,8 @@ export function shapiroWilk(sorted: ArrayLike<number>): ShapiroWilkResult | Unav
   }
 
   // Correlation form on median-centred, range-scaled values.
-  const med = n % 2 === 1 ? (sorted[half] as number) : ((sorted[half - 1] as number) + (sorted[half] as number)) / 2;
+  const med =
+    n % 2 === 1 ? (sorted[half] as number) : ((sorted[half - 1] as number) + (sorted[half] as number)) / 2;
   let sx = 0;
   for (let i = 0; i < n; i++) sx += ((sorted[i] as number) - med) / range;
   sx /= n;

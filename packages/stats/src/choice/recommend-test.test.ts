@@ -2,7 +2,13 @@ import { describe, expect, it } from "vitest";
 import { recommendTest, type DesignAnswers } from "./recommend-test.js";
 
 const design: DesignAnswers = { independent: true, scale: "continuous", k: 3, comparisons: "all-pairs" };
-const calm = { groupSizes: [20, 20, 20], shapiroWilkResiduals: { p: 0.4 }, brownForsythe: { p: 0.6 }, sdRatio: 1.3, extremeOutliers: 0 };
+const calm = {
+  groupSizes: [20, 20, 20],
+  shapiroWilkResiduals: { p: 0.4 },
+  brownForsythe: { p: 0.6 },
+  sdRatio: 1.3,
+  extremeOutliers: 0,
+};
 
 describe("recommendTest", () => {
   it("classic-first: classic ANOVA and Tukey–Kramer when nothing speaks against it", () => {
@@ -15,7 +21,9 @@ describe("recommendTest", () => {
   it("moves to Welch when the SD ratio exceeds 2, saying so with the numbers", () => {
     const r = recommendTest(design, { ...calm, sdRatio: 3.1 });
     expect(r).toMatchObject({ test: "welch", posthoc: "games-howell" });
-    expect(r.reasons).toContain("The largest SD is 3.1 times the smallest (above the 2.0 rule of thumb), so equal variances cannot be assumed.");
+    expect(r.reasons).toContain(
+      "The largest SD is 3.1 times the smallest (above the 2.0 rule of thumb), so equal variances cannot be assumed.",
+    );
   });
 
   it("moves to Welch when Brown–Forsythe is significant", () => {
@@ -26,20 +34,32 @@ describe("recommendTest", () => {
 
   it("uses Kruskal–Wallis for ordinal data, extreme outliers, or non-normality with small groups", () => {
     expect(recommendTest({ ...design, scale: "ordinal" }, calm).test).toBe("kruskal-wallis");
-    expect(recommendTest(design, { ...calm, extremeOutliers: 2 }).reasons[0]).toContain("2 values lie beyond 3 IQR");
-    const small = recommendTest(design, { ...calm, groupSizes: [8, 9, 10], shapiroWilkResiduals: { p: 0.002 } });
+    expect(recommendTest(design, { ...calm, extremeOutliers: 2 }).reasons[0]).toContain(
+      "2 values lie beyond 3 IQR",
+    );
+    const small = recommendTest(design, {
+      ...calm,
+      groupSizes: [8, 9, 10],
+      shapiroWilkResiduals: { p: 0.002 },
+    });
     expect(small).toMatchObject({ test: "kruskal-wallis", posthoc: "dunn" });
   });
 
   it("keeps the parametric test for non-normal residuals when every group is large (CLT)", () => {
-    const r = recommendTest(design, { ...calm, groupSizes: [80, 90, 85], shapiroWilkResiduals: { p: 0.001 } });
+    const r = recommendTest(design, {
+      ...calm,
+      groupSizes: [80, 90, 85],
+      shapiroWilkResiduals: { p: 0.001 },
+    });
     expect(r.test).toBe("anova");
     expect(r.reasons[0]).toContain("central limit theorem");
   });
 
   it("welch-first: Welch unless a rank test is called for", () => {
     expect(recommendTest({ ...design, policy: "welch-first" }, calm)).toMatchObject({ test: "welch" });
-    expect(recommendTest({ ...design, policy: "welch-first", scale: "ordinal" }, calm).test).toBe("kruskal-wallis");
+    expect(recommendTest({ ...design, policy: "welch-first", scale: "ordinal" }, calm).test).toBe(
+      "kruskal-wallis",
+    );
   });
 
   it("matches post-hoc families to comparisons against a control", () => {
@@ -56,6 +76,8 @@ describe("recommendTest", () => {
   });
 
   it("adds a caveat for two groups", () => {
-    expect(recommendTest({ ...design, k: 2 }, { ...calm, groupSizes: [20, 20] }).caveats[0]).toContain("two-sample test");
+    expect(recommendTest({ ...design, k: 2 }, { ...calm, groupSizes: [20, 20] }).caveats[0]).toContain(
+      "two-sample test",
+    );
   });
 });

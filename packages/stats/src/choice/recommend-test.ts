@@ -1,9 +1,16 @@
 import type { Unavailable } from "../types/group-summary.js";
 import { formatP, formatStat, formatUnit } from "../reporting/format.js";
-import { DEFAULT_ALPHA, LARGE_GROUP_N, SD_RATIO_LIMIT, UNBALANCED_N_RATIO, VERY_SMALL_GROUP_N } from "./thresholds.js";
+import {
+  DEFAULT_ALPHA,
+  LARGE_GROUP_N,
+  SD_RATIO_LIMIT,
+  UNBALANCED_N_RATIO,
+  VERY_SMALL_GROUP_N,
+} from "./thresholds.js";
 
 export type OmnibusTest = "anova" | "welch" | "kruskal-wallis";
-export type PosthocMethod = "tukey-kramer" | "games-howell" | "dunn" | "dunnett" | "welch-vs-control-holm" | "dunn-vs-control";
+export type PosthocMethod =
+  "tukey-kramer" | "games-howell" | "dunn" | "dunnett" | "welch-vs-control-holm" | "dunn-vs-control";
 
 /** The study design, as answered in the plan. */
 export interface DesignAnswers {
@@ -83,10 +90,14 @@ export function recommendTest(design: DesignAnswers, checks: CheckResults): Reco
   }
 
   if (design.k === 2) {
-    caveats.push("With two groups a two-sample test (Student's or Welch's t, or Mann–Whitney) is the usual frame; the one-way tests give the same answer here (F equals t squared).");
+    caveats.push(
+      "With two groups a two-sample test (Student's or Welch's t, or Mann–Whitney) is the usual frame; the one-way tests give the same answer here (F equals t squared).",
+    );
   }
   if (minN > 0 && minN < VERY_SMALL_GROUP_N) {
-    caveats.push(`The smallest group has ${minN} values (below ${VERY_SMALL_GROUP_N}), so the assumption checks have little power and can miss real departures.`);
+    caveats.push(
+      `The smallest group has ${minN} values (below ${VERY_SMALL_GROUP_N}), so the assumption checks have little power and can miss real departures.`,
+    );
   }
 
   // Variance evidence, used by both policies.
@@ -95,21 +106,34 @@ export function recommendTest(design: DesignAnswers, checks: CheckResults): Reco
   const bfSignificant = isAvailable(bf) && bf.p < alpha;
   const ratioLarge = typeof ratio === "number" && ratio > SD_RATIO_LIMIT;
   const varianceReasons: string[] = [];
-  if (ratioLarge) varianceReasons.push(`The largest SD is ${formatStat(ratio, 1)} times the smallest (above the ${SD_RATIO_LIMIT.toFixed(1)} rule of thumb), so equal variances cannot be assumed.`);
-  if (bfSignificant) varianceReasons.push(`The Brown–Forsythe test finds unequal variances (p ${formatP(bf.p)}, below α = ${formatUnit(alpha)}).`);
+  if (ratioLarge)
+    varianceReasons.push(
+      `The largest SD is ${formatStat(ratio, 1)} times the smallest (above the ${SD_RATIO_LIMIT.toFixed(1)} rule of thumb), so equal variances cannot be assumed.`,
+    );
+  if (bfSignificant)
+    varianceReasons.push(
+      `The Brown–Forsythe test finds unequal variances (p ${formatP(bf.p)}, below α = ${formatUnit(alpha)}).`,
+    );
   const variancesDiffer = varianceReasons.length > 0;
 
   // Rank-test triggers.
   const rankReasons: string[] = [];
-  if (design.scale === "ordinal") rankReasons.push("The outcome is ordinal, so means and variances are not meaningful and a rank test fits the scale.");
+  if (design.scale === "ordinal")
+    rankReasons.push(
+      "The outcome is ordinal, so means and variances are not meaningful and a rank test fits the scale.",
+    );
   const extreme = checks.extremeOutliers ?? 0;
   if (extreme > 0) {
-    rankReasons.push(`${extreme} value${extreme === 1 ? " lies" : "s lie"} beyond 3 IQR from the quartiles (extreme outliers), which would dominate means and variances.`);
+    rankReasons.push(
+      `${extreme} value${extreme === 1 ? " lies" : "s lie"} beyond 3 IQR from the quartiles (extreme outliers), which would dominate means and variances.`,
+    );
   }
   const sw = checks.shapiroWilkResiduals;
   const nonNormal = isAvailable(sw) && sw.p < alpha;
   if (nonNormal && minN < LARGE_GROUP_N) {
-    rankReasons.push(`The residuals are clearly non-normal (Shapiro–Wilk p ${formatP(sw.p)}, below α = ${formatUnit(alpha)}) and the smallest group has only ${minN} values (below ${LARGE_GROUP_N}), too few to rely on the central limit theorem.`);
+    rankReasons.push(
+      `The residuals are clearly non-normal (Shapiro–Wilk p ${formatP(sw.p)}, below α = ${formatUnit(alpha)}) and the smallest group has only ${minN} values (below ${LARGE_GROUP_N}), too few to rely on the central limit theorem.`,
+    );
   }
 
   let test: OmnibusTest;
@@ -117,15 +141,21 @@ export function recommendTest(design: DesignAnswers, checks: CheckResults): Reco
     test = "kruskal-wallis";
     reasons.push(...rankReasons);
     if (variancesDiffer && design.scale !== "ordinal") {
-      caveats.push("The group spreads differ, so the Kruskal–Wallis test compares whole distributions; a significant result need not mean that the medians differ.");
+      caveats.push(
+        "The group spreads differ, so the Kruskal–Wallis test compares whole distributions; a significant result need not mean that the medians differ.",
+      );
     }
   } else {
     if (nonNormal) {
-      reasons.push(`The residuals depart from normality (Shapiro–Wilk p ${formatP(sw.p)}), but every group has at least ${LARGE_GROUP_N} values, so the group means are close to normal (central limit theorem) and a parametric test is kept.`);
+      reasons.push(
+        `The residuals depart from normality (Shapiro–Wilk p ${formatP(sw.p)}), but every group has at least ${LARGE_GROUP_N} values, so the group means are close to normal (central limit theorem) and a parametric test is kept.`,
+      );
     }
     if (policy === "welch-first") {
       test = "welch";
-      reasons.push("Welch's ANOVA is the default under the welch-first policy: it keeps its error rate when variances differ and loses little power when they are equal (Delacre, Leys, Mora & Lakens 2019).");
+      reasons.push(
+        "Welch's ANOVA is the default under the welch-first policy: it keeps its error rate when variances differ and loses little power when they are equal (Delacre, Leys, Mora & Lakens 2019).",
+      );
       reasons.push(...varianceReasons);
     } else if (variancesDiffer) {
       test = "welch";
@@ -133,33 +163,64 @@ export function recommendTest(design: DesignAnswers, checks: CheckResults): Reco
     } else {
       test = "anova";
       const parts: string[] = [];
-      if (typeof ratio === "number") parts.push(`the largest SD is ${formatStat(ratio, 1)} times the smallest (within the ${SD_RATIO_LIMIT.toFixed(1)} rule of thumb)`);
-      if (isAvailable(bf)) parts.push(`the Brown–Forsythe test does not find unequal variances (p ${formatP(bf.p)})`);
+      if (typeof ratio === "number")
+        parts.push(
+          `the largest SD is ${formatStat(ratio, 1)} times the smallest (within the ${SD_RATIO_LIMIT.toFixed(1)} rule of thumb)`,
+        );
+      if (isAvailable(bf))
+        parts.push(`the Brown–Forsythe test does not find unequal variances (p ${formatP(bf.p)})`);
       reasons.push(
         parts.length > 0
           ? `Equal variances are plausible: ${parts.join(" and ")}, so classic one-way ANOVA is used.`
           : "No check speaks against equal variances, so classic one-way ANOVA is used.",
       );
-      if (isAvailable(sw) && !nonNormal) reasons.push(`The residuals show no clear departure from normality (Shapiro–Wilk p ${formatP(sw.p)}).`);
+      if (isAvailable(sw) && !nonNormal)
+        reasons.push(
+          `The residuals show no clear departure from normality (Shapiro–Wilk p ${formatP(sw.p)}).`,
+        );
       if (minN > 0 && maxN / minN > UNBALANCED_N_RATIO) {
-        caveats.push(`Group sizes range from ${minN} to ${maxN}; with unequal sizes classic ANOVA is sensitive to unequal variances, so Welch's ANOVA is worth reporting alongside.`);
+        caveats.push(
+          `Group sizes range from ${minN} to ${maxN}; with unequal sizes classic ANOVA is sensitive to unequal variances, so Welch's ANOVA is worth reporting alongside.`,
+        );
       }
     }
   }
-  if (!isAvailable(sw) && sw !== undefined) caveats.push(`Normality of the residuals could not be checked: ${sw.reason}.`);
-  if (!isAvailable(bf) && bf !== undefined) caveats.push(`Equality of variances could not be tested: ${bf.reason}.`);
+  if (!isAvailable(sw) && sw !== undefined)
+    caveats.push(`Normality of the residuals could not be checked: ${sw.reason}.`);
+  if (!isAvailable(bf) && bf !== undefined)
+    caveats.push(`Equality of variances could not be tested: ${bf.reason}.`);
 
   const vsControl = design.comparisons === "vs-control";
   const posthoc: PosthocMethod =
-    test === "anova" ? (vsControl ? "dunnett" : "tukey-kramer") : test === "welch" ? (vsControl ? "welch-vs-control-holm" : "games-howell") : vsControl ? "dunn-vs-control" : "dunn";
+    test === "anova"
+      ? vsControl
+        ? "dunnett"
+        : "tukey-kramer"
+      : test === "welch"
+        ? vsControl
+          ? "welch-vs-control-holm"
+          : "games-howell"
+        : vsControl
+          ? "dunn-vs-control"
+          : "dunn";
 
   const alternatives: { test: OmnibusTest; whyNot: string }[] = [];
   for (const other of ["anova", "welch", "kruskal-wallis"] as const) {
     if (other === test) continue;
     let whyNot: string;
-    if (other === "anova") whyNot = variancesDiffer ? "It assumes equal variances, which the checks do not support." : rankReasons.length ? "It assumes roughly normal data without extreme outliers, which the checks do not support." : "Welch's ANOVA was preferred by policy; classic ANOVA gives similar answers when variances are equal.";
-    else if (other === "welch") whyNot = rankReasons.length ? "It still compares means, which the scale, outliers or shape make unreliable here." : "With equal variances it answers the same question with slightly less power.";
-    else whyNot = "It compares rank distributions rather than means and loses some power when the parametric assumptions hold.";
+    if (other === "anova")
+      whyNot = variancesDiffer
+        ? "It assumes equal variances, which the checks do not support."
+        : rankReasons.length
+          ? "It assumes roughly normal data without extreme outliers, which the checks do not support."
+          : "Welch's ANOVA was preferred by policy; classic ANOVA gives similar answers when variances are equal.";
+    else if (other === "welch")
+      whyNot = rankReasons.length
+        ? "It still compares means, which the scale, outliers or shape make unreliable here."
+        : "With equal variances it answers the same question with slightly less power.";
+    else
+      whyNot =
+        "It compares rank distributions rather than means and loses some power when the parametric assumptions hold.";
     alternatives.push({ test: other, whyNot });
   }
   reasons.push(`Post-hoc comparisons: ${posthocSentence(posthoc, design.control)}`);

@@ -32,15 +32,25 @@ export function analyzeCommand(args: AnalyzeArgs): CommandOutput {
     text = readFileSync(args.file, "utf8");
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    throw new CliError(code === "ENOENT" ? `cannot read '${args.file}': no such file` : code === "EISDIR" ? `cannot read '${args.file}': it is a directory` : `cannot read '${args.file}': ${(e as Error).message}`);
+    throw new CliError(
+      code === "ENOENT"
+        ? `cannot read '${args.file}': no such file`
+        : code === "EISDIR"
+          ? `cannot read '${args.file}': it is a directory`
+          : `cannot read '${args.file}': ${(e as Error).message}`,
+    );
   }
   const csv = readGroupedCsv(text, args.group, args.outcome);
   const warnings: string[] = [];
   if (csv.skippedNoGroup.length) {
-    warnings.push(`${csv.skippedNoGroup.length} row${csv.skippedNoGroup.length === 1 ? "" : "s"} without a value in '${args.group}' skipped (line ${csv.skippedNoGroup.slice(0, 3).join(", ")}${csv.skippedNoGroup.length > 3 ? ", …" : ""})`);
+    warnings.push(
+      `${csv.skippedNoGroup.length} row${csv.skippedNoGroup.length === 1 ? "" : "s"} without a value in '${args.group}' skipped (line ${csv.skippedNoGroup.slice(0, 3).join(", ")}${csv.skippedNoGroup.length > 3 ? ", …" : ""})`,
+    );
   }
   if (csv.groups.length < 2) {
-    throw new CliError(`'${args.group}' has ${csv.groups.length === 0 ? "no groups" : `only one group ('${csv.groups[0]?.name}')`}; a comparison needs at least two`);
+    throw new CliError(
+      `'${args.group}' has ${csv.groups.length === 0 ? "no groups" : `only one group ('${csv.groups[0]?.name}')`}; a comparison needs at least two`,
+    );
   }
   let result: AnalysisResult;
   try {
@@ -51,10 +61,14 @@ export function analyzeCommand(args: AnalyzeArgs): CommandOutput {
   }
   const allSame = result.groups.every((g) => g.n > 0 && g.min === g.max && g.min === result.groups[0]?.min);
   if (allSame) {
-    throw new CliError(`every value of '${args.outcome}' is ${result.groups[0]?.min}; with no variation there is nothing to compare, so none of the tests can run`);
+    throw new CliError(
+      `every value of '${args.outcome}' is ${result.groups[0]?.min}; with no variation there is nothing to compare, so none of the tests can run`,
+    );
   }
   warnings.push(...result.warnings);
-  const stdout = args.json ? JSON.stringify(result) + "\n" : textReport(result, { group: args.group, outcome: args.outcome, file: args.file });
+  const stdout = args.json
+    ? JSON.stringify(result) + "\n"
+    : textReport(result, { group: args.group, outcome: args.outcome, file: args.file });
   return { stdout, warnings };
 }
 

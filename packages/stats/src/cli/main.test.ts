@@ -69,7 +69,14 @@ describe("waymark-stats analyze", () => {
   });
 
   it("infinite values → exit 1", async () => {
-    const r = await run("analyze", file("inf.csv", "g,y\nA,1\nA,2\nB,Infinity\nB,4\n"), "--group", "g", "--outcome", "y");
+    const r = await run(
+      "analyze",
+      file("inf.csv", "g,y\nA,1\nA,2\nB,Infinity\nB,4\n"),
+      "--group",
+      "g",
+      "--outcome",
+      "y",
+    );
     expect(r.code).toBe(1);
     oneLine(r);
     expect(r.err).toContain("line 4");
@@ -83,28 +90,58 @@ describe("waymark-stats analyze", () => {
   });
 
   it("a group with fewer than two values → exit 1", async () => {
-    const r = await run("analyze", file("small.csv", "g,y\nA,1\nA,2\nB,3\n"), "--group", "g", "--outcome", "y");
+    const r = await run(
+      "analyze",
+      file("small.csv", "g,y\nA,1\nA,2\nB,3\n"),
+      "--group",
+      "g",
+      "--outcome",
+      "y",
+    );
     expect(r.code).toBe(1);
     oneLine(r);
     expect(r.err).toContain("group 'B' has 1");
   });
 
   it("all values identical → exit 1", async () => {
-    const r = await run("analyze", file("same.csv", "g,y\nA,2\nA,2\nB,2.0\nB,2\n"), "--group", "g", "--outcome", "y");
+    const r = await run(
+      "analyze",
+      file("same.csv", "g,y\nA,2\nA,2\nB,2.0\nB,2\n"),
+      "--group",
+      "g",
+      "--outcome",
+      "y",
+    );
     expect(r.code).toBe(1);
     oneLine(r);
     expect(r.err).toContain("none of the tests can run");
   });
 
   it("zero variance in a group → warning on stderr, result on stdout, exit 0", async () => {
-    const r = await run("analyze", file("zero.csv", "g,y\nA,1\nA,2\nA,3\nB,5\nB,5\nC,2\nC,4\n"), "--group", "g", "--outcome", "y", "--json");
+    const r = await run(
+      "analyze",
+      file("zero.csv", "g,y\nA,1\nA,2\nA,3\nB,5\nB,5\nC,2\nC,4\n"),
+      "--group",
+      "g",
+      "--outcome",
+      "y",
+      "--json",
+    );
     expect(r.code).toBe(0);
     expect(r.err).toContain("warning: Zero variance in group 'B'");
     expect(JSON.parse(r.out).welch.available).toBe(false);
   });
 
   it("usage errors → exit 2, one line", async () => {
-    for (const argv of [[], ["frobnicate"], ["analyze", good], ["analyze", good, "--group", "g"], ["analyze", good, "--group", "g", "--outcome", "y", "--alpha", "2"], ["analyze", good, "--bogus"], ["analyze", good, "--group", "g", "--outcome", "y", "--adjust", "sidak"]]) {
+    for (const argv of [
+      [],
+      ["frobnicate"],
+      ["analyze", good],
+      ["analyze", good, "--group", "g"],
+      ["analyze", good, "--group", "g", "--outcome", "y", "--alpha", "2"],
+      ["analyze", good, "--bogus"],
+      ["analyze", good, "--group", "g", "--outcome", "y", "--adjust", "sidak"],
+    ]) {
       const r = await run(...argv);
       expect(r.code, argv.join(" ")).toBe(2);
       oneLine(r);
@@ -127,7 +164,9 @@ describe("waymark-stats power", () => {
   });
 
   it("--power gives the smallest n per group (scipy 1.10.1 ncf: n = 21 → 0.79782, n = 22 → above 0.8)", async () => {
-    const out = JSON.parse((await run("power", "--groups", "3", "--effect-f", "0.4", "--power", "0.8", "--json")).out);
+    const out = JSON.parse(
+      (await run("power", "--groups", "3", "--effect-f", "0.4", "--power", "0.8", "--json")).out,
+    );
     expect(out.nPerGroup).toBe(22);
     expect(out.power).toBeGreaterThan(0.8);
   });

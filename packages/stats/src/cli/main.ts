@@ -21,13 +21,19 @@ const defaultIo: CliIo = {
 function numberOption(name: string, value: string | undefined): number | undefined {
   if (value === undefined) return undefined;
   const x = Number(value);
-  if (value.trim() === "" || !Number.isFinite(x)) throw new CliError(`--${name} needs a number; got '${value}'`, 2);
+  if (value.trim() === "" || !Number.isFinite(x))
+    throw new CliError(`--${name} needs a number; got '${value}'`, 2);
   return x;
 }
 
-function choice<T extends string>(name: string, value: string | undefined, allowed: readonly T[]): T | undefined {
+function choice<T extends string>(
+  name: string,
+  value: string | undefined,
+  allowed: readonly T[],
+): T | undefined {
   if (value === undefined) return undefined;
-  if (!(allowed as readonly string[]).includes(value)) throw new CliError(`--${name} must be one of ${allowed.join(", ")}; got '${value}'`, 2);
+  if (!(allowed as readonly string[]).includes(value))
+    throw new CliError(`--${name} must be one of ${allowed.join(", ")}; got '${value}'`, 2);
   return value as T;
 }
 
@@ -52,7 +58,9 @@ export async function main(argv: readonly string[], io: CliIo = defaultIo): Prom
       io.stderr(PREFIX + (e as Error).message.replace(/\s*\n\s*/g, " ") + " (see --help)\n");
       return 2;
     }
-    io.stderr(PREFIX + `internal error: ${(e as Error).message ?? String(e)}`.replace(/\s*\n\s*/g, " ") + "\n");
+    io.stderr(
+      PREFIX + `internal error: ${(e as Error).message ?? String(e)}`.replace(/\s*\n\s*/g, " ") + "\n",
+    );
     return 1;
   }
 }
@@ -89,11 +97,20 @@ function run(argv: readonly string[], io: CliIo): number {
       io.stdout(USAGE);
       return 0;
     }
-    if (positionals.length !== 1) throw new CliError(positionals.length === 0 ? "analyze needs the CSV file to read (see --help)" : `analyze takes one file; got ${positionals.length}`, 2);
-    if (!values.group) throw new CliError("analyze needs --group COLUMN (the column with the group labels)", 2);
-    if (!values.outcome) throw new CliError("analyze needs --outcome COLUMN (the column with the measured values)", 2);
+    if (positionals.length !== 1)
+      throw new CliError(
+        positionals.length === 0
+          ? "analyze needs the CSV file to read (see --help)"
+          : `analyze takes one file; got ${positionals.length}`,
+        2,
+      );
+    if (!values.group)
+      throw new CliError("analyze needs --group COLUMN (the column with the group labels)", 2);
+    if (!values.outcome)
+      throw new CliError("analyze needs --outcome COLUMN (the column with the measured values)", 2);
     const alpha = numberOption("alpha", values.alpha);
-    if (alpha !== undefined && !(alpha > 0 && alpha < 1)) throw new CliError(`--alpha must be between 0 and 1; got ${values.alpha}`, 2);
+    if (alpha !== undefined && !(alpha > 0 && alpha < 1))
+      throw new CliError(`--alpha must be between 0 and 1; got ${values.alpha}`, 2);
     const options: AnalyzeOptions = {};
     if (alpha !== undefined) options.alpha = alpha;
     const adjust = choice("adjust", values.adjust, ["holm", "bonferroni", "bh"] as const);
@@ -103,7 +120,13 @@ function run(argv: readonly string[], io: CliIo): number {
     const scale = choice("scale", values.scale, ["continuous", "ordinal"] as const);
     if (scale) options.scale = scale;
     if (values.control !== undefined) options.control = values.control;
-    const out = analyzeCommand({ file: positionals[0] as string, group: values.group, outcome: values.outcome, json: values.json === true, options });
+    const out = analyzeCommand({
+      file: positionals[0] as string,
+      group: values.group,
+      outcome: values.outcome,
+      json: values.json === true,
+      options,
+    });
     for (const w of out.warnings) io.stderr(`${PREFIX}warning: ${w}\n`);
     io.stdout(out.stdout);
     return 0;
@@ -135,13 +158,30 @@ function run(argv: readonly string[], io: CliIo): number {
     const power = numberOption("power", values.power);
     if (k === undefined) throw new CliError("power needs --groups K", 2);
     if (f === undefined) throw new CliError("power needs --effect-f F (Cohen's f)", 2);
-    if ((n === undefined) === (power === undefined)) throw new CliError("power needs exactly one of --n N (to get the power) or --power P (to get the sample size)", 2);
-    if (!Number.isInteger(k) || k < 2) throw new CliError(`--groups must be a whole number of at least 2; got ${values.groups}`, 2);
+    if ((n === undefined) === (power === undefined))
+      throw new CliError(
+        "power needs exactly one of --n N (to get the power) or --power P (to get the sample size)",
+        2,
+      );
+    if (!Number.isInteger(k) || k < 2)
+      throw new CliError(`--groups must be a whole number of at least 2; got ${values.groups}`, 2);
     if (!(f > 0)) throw new CliError(`--effect-f must be positive; got ${values["effect-f"]}`, 2);
-    if (!(alpha > 0 && alpha < 1)) throw new CliError(`--alpha must be between 0 and 1; got ${values.alpha}`, 2);
-    if (n !== undefined && !(Number.isInteger(n) && n >= 2)) throw new CliError(`--n must be a whole number of at least 2; got ${values.n}`, 2);
-    if (power !== undefined && !(power > 0 && power < 1)) throw new CliError(`--power must be between 0 and 1; got ${values.power}`, 2);
-    io.stdout(powerCommand({ k, f, alpha, ...(n !== undefined ? { n } : {}), ...(power !== undefined ? { power } : {}), json: values.json === true }));
+    if (!(alpha > 0 && alpha < 1))
+      throw new CliError(`--alpha must be between 0 and 1; got ${values.alpha}`, 2);
+    if (n !== undefined && !(Number.isInteger(n) && n >= 2))
+      throw new CliError(`--n must be a whole number of at least 2; got ${values.n}`, 2);
+    if (power !== undefined && !(power > 0 && power < 1))
+      throw new CliError(`--power must be between 0 and 1; got ${values.power}`, 2);
+    io.stdout(
+      powerCommand({
+        k,
+        f,
+        alpha,
+        ...(n !== undefined ? { n } : {}),
+        ...(power !== undefined ? { power } : {}),
+        json: values.json === true,
+      }),
+    );
     return 0;
   }
   throw new CliError(`unknown command '${command}'; use analyze or power (see --help)`, 2);

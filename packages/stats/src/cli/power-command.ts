@@ -23,18 +23,44 @@ export function powerCommand(args: PowerArgs): string {
   try {
     if (args.n !== undefined) {
       const r = anovaPower({ k: args.k, nPerGroup: args.n, f: args.f, alpha: args.alpha });
-      const out = { mode: "power", k: args.k, f: args.f, alpha: args.alpha, nPerGroup: args.n, totalN: r.totalN, power: r.power, lambda: r.lambda, df1: r.df1, df2: r.df2, criticalF: r.criticalF };
+      const out = {
+        mode: "power",
+        k: args.k,
+        f: args.f,
+        alpha: args.alpha,
+        nPerGroup: args.n,
+        totalN: r.totalN,
+        power: r.power,
+        lambda: r.lambda,
+        df1: r.df1,
+        df2: r.df2,
+        criticalF: r.criticalF,
+      };
       if (args.json) return JSON.stringify(out) + "\n";
       return `Power of the one-way ANOVA F test\n  ${args.k} groups of ${args.n} (N = ${r.totalN}), Cohen's f = ${args.f}, α = ${args.alpha}\n  power = ${r.power.toFixed(4)} (noncentrality λ = ${r.lambda.toFixed(3)}, critical F = ${r.criticalF.toFixed(4)} on ${r.df1} and ${r.df2} df)\n`;
     }
     const target = args.power as number;
     const s = anovaSampleSize({ k: args.k, f: args.f, alpha: args.alpha, power: target });
     const r = anovaPower({ k: args.k, nPerGroup: s.nPerGroup, f: args.f, alpha: args.alpha });
-    const out = { mode: "sample-size", k: args.k, f: args.f, alpha: args.alpha, targetPower: target, nPerGroup: s.nPerGroup, totalN: s.totalN, power: s.achievedPower, lambda: r.lambda, df1: r.df1, df2: r.df2, criticalF: r.criticalF };
+    const out = {
+      mode: "sample-size",
+      k: args.k,
+      f: args.f,
+      alpha: args.alpha,
+      targetPower: target,
+      nPerGroup: s.nPerGroup,
+      totalN: s.totalN,
+      power: s.achievedPower,
+      lambda: r.lambda,
+      df1: r.df1,
+      df2: r.df2,
+      criticalF: r.criticalF,
+    };
     if (args.json) return JSON.stringify(out) + "\n";
     return `Sample size for the one-way ANOVA F test\n  ${args.k} groups, Cohen's f = ${args.f}, α = ${args.alpha}, target power ${target}\n  ${s.nPerGroup} per group (N = ${s.totalN}) gives power ${s.achievedPower.toFixed(4)}\n`;
   } catch (e) {
-    if (e instanceof StatsInputError) throw new CliError(e.message.charAt(0).toLowerCase() + e.message.slice(1));
+    if (e instanceof StatsInputError)
+      throw new CliError(e.message.charAt(0).toLowerCase() + e.message.slice(1));
     throw e;
   }
 }

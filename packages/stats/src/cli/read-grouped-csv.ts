@@ -24,16 +24,22 @@ export interface GroupedCsv {
  */
 export function readGroupedCsv(text: string, groupColumn: string, outcomeColumn: string): GroupedCsv {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-  const parsed = Papa.parse<string[]>(body, { header: false, skipEmptyLines: false, delimitersToGuess: [",", ";", "\t"] });
+  const parsed = Papa.parse<string[]>(body, {
+    header: false,
+    skipEmptyLines: false,
+    delimitersToGuess: [",", ";", "\t"],
+  });
   const rows = parsed.data;
   const header = rows[0];
-  if (!header || header.every((h) => h.trim() === "")) throw new CliError("the CSV file is empty (no header row)");
+  if (!header || header.every((h) => h.trim() === ""))
+    throw new CliError("the CSV file is empty (no header row)");
   const names = header.map((h) => h.trim());
   const gi = names.indexOf(groupColumn.trim());
   const oi = names.indexOf(outcomeColumn.trim());
   const listed = names.map((n) => `'${n}'`).join(", ");
   if (gi < 0) throw new CliError(`no column named '${groupColumn}' for --group; the columns are ${listed}`);
-  if (oi < 0) throw new CliError(`no column named '${outcomeColumn}' for --outcome; the columns are ${listed}`);
+  if (oi < 0)
+    throw new CliError(`no column named '${outcomeColumn}' for --outcome; the columns are ${listed}`);
   if (gi === oi) throw new CliError("--group and --outcome name the same column");
 
   const byName = new Map<string, { name: string; values: string[]; rows: number[] }>();

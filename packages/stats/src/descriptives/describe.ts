@@ -45,7 +45,10 @@ export function describeGroups(input: SampleInput, level = 0.95): GroupDescripti
   const sample = prepareSample(input);
   return sample.groups.map((g) => {
     const n = g.centred.length;
-    if (n === 0) throw new StatsInputError(`Descriptive statistics need at least one value in every group; group '${g.name}' has 0`);
+    if (n === 0)
+      throw new StatsInputError(
+        `Descriptive statistics need at least one value in every group; group '${g.name}' has 0`,
+      );
     const m = groupMoments(g);
     const sorted = sortedValues(g);
     const mean = meanOriginal(sample, g.centred, m.mean);
@@ -55,7 +58,10 @@ export function describeGroups(input: SampleInput, level = 0.95): GroupDescripti
     let ciLower: number | Unavailable;
     let ciUpper: number | Unavailable;
     if (n < 2) {
-      const u: Unavailable = { available: false, reason: "a standard deviation needs at least 2 values; the group has 1" };
+      const u: Unavailable = {
+        available: false,
+        reason: "a standard deviation needs at least 2 values; the group has 1",
+      };
       sd = se = ciLower = ciUpper = u;
     } else {
       const s = Math.sqrt(m.ss / (n - 1));

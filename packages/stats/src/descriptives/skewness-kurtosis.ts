@@ -10,7 +10,10 @@ import type { CentralMoments } from "../numeric/central-moments.js";
  * Example: for 1, 2, 3, 10: G1 ≈ 1.76, G2 ≈ 3.2.
  * Cost: O(1) from the central moments.
  */
-export function skewnessKurtosis(m: CentralMoments): { skewness: number | Unavailable; kurtosis: number | Unavailable } {
+export function skewnessKurtosis(m: CentralMoments): {
+  skewness: number | Unavailable;
+  kurtosis: number | Unavailable;
+} {
   const { n, ss } = m;
   if (ss <= 0) {
     const reason = "all values in the group are equal, so the shape of the distribution is undefined";
@@ -20,7 +23,9 @@ export function skewnessKurtosis(m: CentralMoments): { skewness: number | Unavai
   const g1 = m.m3 / n / Math.pow(m2, 1.5);
   const g2 = m.m4 / n / (m2 * m2) - 3;
   const skewness: number | Unavailable =
-    n >= 3 ? (g1 * Math.sqrt(n * (n - 1))) / (n - 2) : { available: false, reason: `skewness needs at least 3 values; the group has ${n}` };
+    n >= 3
+      ? (g1 * Math.sqrt(n * (n - 1))) / (n - 2)
+      : { available: false, reason: `skewness needs at least 3 values; the group has ${n}` };
   const kurtosis: number | Unavailable =
     n >= 4
       ? ((n - 1) / ((n - 2) * (n - 3))) * ((n + 1) * g2 + 6)

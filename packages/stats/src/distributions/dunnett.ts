@@ -43,7 +43,10 @@ export function dunnettSf(c: number, lambdas: readonly number[], df: number): nu
 /** The two-sided critical value c with P(max|T_i| ≤ c) = p. */
 export function dunnettQuantile(p: number, lambdas: readonly number[], df: number): number {
   check(lambdas, df);
-  if (!(p > 0 && p < 1)) throw new StatsInputError(`Dunnett's critical value needs a probability strictly between 0 and 1; got ${p}`);
+  if (!(p > 0 && p < 1))
+    throw new StatsInputError(
+      `Dunnett's critical value needs a probability strictly between 0 and 1; got ${p}`,
+    );
   const m = lambdas.length;
   const tq = (tail: number) => (df === Infinity ? -normalQuantile(tail) : tQuantile(1 - tail, df));
   // One comparison is a lower bound and Bonferroni over m an upper bound.
@@ -62,9 +65,11 @@ export function dunnettQuantile(p: number, lambdas: readonly number[], df: numbe
 function check(lambdas: readonly number[], df: number): void {
   if (lambdas.length < 1) throw new StatsInputError("Dunnett's distribution needs at least one comparison");
   for (const l of lambdas) {
-    if (!(l > 0 && l < 1)) throw new StatsInputError(`Dunnett's distribution needs each λ strictly between 0 and 1; got ${l}`);
+    if (!(l > 0 && l < 1))
+      throw new StatsInputError(`Dunnett's distribution needs each λ strictly between 0 and 1; got ${l}`);
   }
-  if (!(df >= 1)) throw new StatsInputError(`Dunnett's distribution needs at least 1 degree of freedom; got ${df}`);
+  if (!(df >= 1))
+    throw new StatsInputError(`Dunnett's distribution needs at least 1 degree of freedom; got ${df}`);
 }
 
 const upperNormal = (x: number) => 0.5 * erfc(x / Math.SQRT2);

@@ -40,7 +40,9 @@ export function noncentralFSf(x: number, d1: number, d2: number, lambda: number)
 
 function check(x: number, d1: number, d2: number, lambda: number, what: string): void {
   if (!(d1 > 0) || !(d2 > 0) || !Number.isFinite(d1) || !Number.isFinite(d2)) {
-    throw new StatsInputError(`The noncentral F ${what} needs positive, finite degrees of freedom; got ${d1} and ${d2}`);
+    throw new StatsInputError(
+      `The noncentral F ${what} needs positive, finite degrees of freedom; got ${d1} and ${d2}`,
+    );
   }
   if (!(lambda >= 0) || !Number.isFinite(lambda)) {
     throw new StatsInputError(`The noncentral F ${what} needs a noncentrality of 0 or more; got ${lambda}`);

@@ -41,7 +41,9 @@ describe("studentized range", () => {
   });
 
   it("large df approaches the infinite-df law", () => {
-    expect(Math.abs(studentizedRangeSf(3.5, 4, 1e7) - studentizedRangeSf(3.5, 4, Infinity))).toBeLessThan(1e-7);
+    expect(Math.abs(studentizedRangeSf(3.5, 4, 1e7) - studentizedRangeSf(3.5, 4, Infinity))).toBeLessThan(
+      1e-7,
+    );
   });
 
   it("edges: q ≤ 0 and q = ∞", () => {

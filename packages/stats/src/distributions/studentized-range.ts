@@ -76,12 +76,15 @@ export function studentizedRangeQuantile(p: number, k: number, df: number): numb
 
 function check(q: number, k: number, df: number, what: string): void {
   if (!Number.isInteger(k) || k < 2) {
-    throw new StatsInputError(`The studentized range ${what} needs k, the number of groups, to be a whole number of at least 2; got ${k}`);
+    throw new StatsInputError(
+      `The studentized range ${what} needs k, the number of groups, to be a whole number of at least 2; got ${k}`,
+    );
   }
   if (!(df >= 1)) {
     throw new StatsInputError(`The studentized range ${what} needs at least 1 degree of freedom; got ${df}`);
   }
-  if (Number.isNaN(q)) throw new StatsInputError(`The studentized range ${what} needs a number for q; got NaN`);
+  if (Number.isNaN(q))
+    throw new StatsInputError(`The studentized range ${what} needs a number for q; got NaN`);
 }
 
 const LOG_2PI = Math.log(2 * Math.PI);
@@ -192,7 +195,6 @@ function rangeTail(w: number, k: number, upper: boolean): number {
   }
   return k * INV_SQRT_2PI * h * sum;
 }
-
 
 const BASE_STEP = 0.1;
 const U_MIN = -50; // s = e^−50: nothing below contributes for ν ≥ 1

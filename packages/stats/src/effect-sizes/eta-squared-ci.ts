@@ -27,7 +27,9 @@ export function etaSquaredCi(f: number, df1: number, df2: number, level = 0.95):
     throw new StatsInputError(`The η² confidence interval needs a level between 0 and 1; got ${level}`);
   }
   if (!(df1 > 0) || !(df2 > 0) || !Number.isFinite(df1) || !Number.isFinite(df2)) {
-    throw new StatsInputError(`The η² confidence interval needs positive degrees of freedom; got ${df1} and ${df2}`);
+    throw new StatsInputError(
+      `The η² confidence interval needs positive degrees of freedom; got ${df1} and ${df2}`,
+    );
   }
   if (!Number.isFinite(f) || f < 0) {
     return { available: false, reason: `The η² confidence interval needs a finite F of 0 or more; got ${f}` };

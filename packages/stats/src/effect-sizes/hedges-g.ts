@@ -2,8 +2,7 @@ import gammaln from "@stdlib/math-base-special-gammaln";
 import type { GroupSummary, Unavailable } from "../types/group-summary.js";
 
 export type HedgesG =
-  | { available: true; g: number; d: number; correction: number; pooledSd: number; df: number }
-  | Unavailable;
+  { available: true; g: number; d: number; correction: number; pooledSd: number; df: number } | Unavailable;
 
 /**
  * Hedges' g: the standardized mean difference of two groups with the small-sample bias

@@ -28,7 +28,10 @@ export function rankBiserialSorted(a: ArrayLike<number>, b: ArrayLike<number>): 
   const na = a.length;
   const nb = b.length;
   if (na === 0 || nb === 0) {
-    return { available: false, reason: "The rank-biserial correlation needs at least one value in each of the two groups" };
+    return {
+      available: false,
+      reason: "The rank-biserial correlation needs at least one value in each of the two groups",
+    };
   }
   let below = 0; // first index in b with b ≥ x
   let notAbove = 0; // first index in b with b > x

@@ -19,7 +19,12 @@ export function meanOriginal(sample: CentredSample, centred: Float64Array, centr
     for (let i = 0; i < n; i++) sum += Math.round((centred[i] as number) * p);
     const numerator = n * sample.offsetInteger + sum;
     const denominator = n * p;
-    if (Math.abs(sum) < 2 ** 53 && Math.abs(n * sample.offsetInteger) < 2 ** 53 && Math.abs(numerator) < 2 ** 53 && denominator < 2 ** 53) {
+    if (
+      Math.abs(sum) < 2 ** 53 &&
+      Math.abs(n * sample.offsetInteger) < 2 ** 53 &&
+      Math.abs(numerator) < 2 ** 53 &&
+      denominator < 2 ** 53
+    ) {
       return numerator / denominator;
     }
   }

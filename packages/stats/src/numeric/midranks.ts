@@ -59,7 +59,8 @@ function byHistogram(sample: CentredSample, withRanks: boolean): Midranks | unde
   const range = hi - lo + 1;
   if (!(range <= HISTOGRAM_RANGE_FACTOR * N + HISTOGRAM_RANGE_FLOOR)) return undefined;
   const counts = new Float64Array(range);
-  for (const s of sorted) for (let i = 0; i < s.length; i++) counts[Math.round((s[i] as number) * divisor) - lo]! += 1;
+  for (const s of sorted)
+    for (let i = 0; i < s.length; i++) counts[Math.round((s[i] as number) * divisor) - lo]! += 1;
   // counts → midrank per integer value, and the tie term.
   let below = 0;
   let tieSum = 0;

@@ -4,7 +4,12 @@ import { parseDecimalBig } from "./parse-decimal-big.js";
 
 describe("parseDecimal", () => {
   it("reads decimal text as an exact integer mantissa and a power of ten", () => {
-    expect(parseDecimal("107.8681568")).toMatchObject({ kind: "number", mantissa: 1078681568, exponent: -7, long: false });
+    expect(parseDecimal("107.8681568")).toMatchObject({
+      kind: "number",
+      mantissa: 1078681568,
+      exponent: -7,
+      long: false,
+    });
     expect(parseDecimal("1000000000000.4")).toMatchObject({ mantissa: 10000000000004, exponent: -1 });
     expect(parseDecimal(" -0.050 ")).toMatchObject({ mantissa: -5, exponent: -2 });
     expect(parseDecimal("+4")).toMatchObject({ mantissa: 4, exponent: 0 });
@@ -27,7 +32,9 @@ describe("parseDecimal", () => {
 
   it("recognises missing, infinite and non-numeric text", () => {
     for (const t of ["", "  ", "NA", "N/A", "NaN", "na"]) expect(parseDecimal(t).kind).toBe("missing");
-    for (const t of ["inf", "-Infinity", "Infinity", "+inf", "1e999"]) expect(parseDecimal(t).kind).toBe("infinite");
-    for (const t of ["abc", "3,5", "1.2.3", "-", "e5", "1e", "12kg", "0x10"]) expect(parseDecimal(t).kind).toBe("not-numeric");
+    for (const t of ["inf", "-Infinity", "Infinity", "+inf", "1e999"])
+      expect(parseDecimal(t).kind).toBe("infinite");
+    for (const t of ["abc", "3,5", "1.2.3", "-", "e5", "1e", "12kg", "0x10"])
+      expect(parseDecimal(t).kind).toBe("not-numeric");
   });
 });

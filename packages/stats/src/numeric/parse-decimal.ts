@@ -12,7 +12,14 @@ export interface DecimalParse {
 /** Text that means "no value" (compared after trimming). Common practice in data files. */
 export const MISSING_TEXT: ReadonlySet<string> = new Set(["", "NA", "N/A", "NaN", "na", "n/a", "nan"]);
 
-const INFINITE_TEXT: ReadonlySet<string> = new Set(["inf", "+inf", "-inf", "infinity", "+infinity", "-infinity"]);
+const INFINITE_TEXT: ReadonlySet<string> = new Set([
+  "inf",
+  "+inf",
+  "-inf",
+  "infinity",
+  "+infinity",
+  "-infinity",
+]);
 
 /** Up to 15 significant decimal digits always fit a double exactly (10^15 < 2^53). */
 const MAX_EXACT_DIGITS = 15;
@@ -34,7 +41,10 @@ function isSpace(c: number): boolean {
  * Example: parseDecimal("107.8681568") → { kind: "number", mantissa: 1078681568, exponent: -7, long: false }.
  * Cost: one pass over the characters. Pass `out` to reuse one result object on hot paths.
  */
-export function parseDecimal(raw: string, out: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long: false }): DecimalParse {
+export function parseDecimal(
+  raw: string,
+  out: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long: false },
+): DecimalParse {
   let start = 0;
   let end = raw.length;
   while (start < end && isSpace(raw.charCodeAt(start))) start++;
@@ -89,7 +99,11 @@ export function parseDecimal(raw: string, out: DecimalParse = { kind: "missing",
       break;
     } else {
       const text = raw.slice(start, end);
-      out.kind = MISSING_TEXT.has(text) ? "missing" : INFINITE_TEXT.has(text.toLowerCase()) ? "infinite" : "not-numeric";
+      out.kind = MISSING_TEXT.has(text)
+        ? "missing"
+        : INFINITE_TEXT.has(text.toLowerCase())
+          ? "infinite"
+          : "not-numeric";
       return out;
     }
   }

@@ -4,7 +4,9 @@ import { prepareSample } from "./prepare-sample.js";
 
 describe("prepareSample", () => {
   it("removes a common offset exactly from decimal text (the NIST SmLs07 difficulty)", () => {
-    const s = prepareSample([{ name: "A", values: ["1000000000000.4", "1000000000000.3", "1000000000000.5"] }]);
+    const s = prepareSample([
+      { name: "A", values: ["1000000000000.4", "1000000000000.3", "1000000000000.5"] },
+    ]);
     expect(s.centring).toBe("scaled-integer");
     const c = s.groups[0]?.centred as Float64Array;
     // Differences are exact tenths: 0.1 apart, not the 1.2e-4 steps of the nearest doubles.
@@ -40,9 +42,13 @@ describe("prepareSample", () => {
 
   it("names the first offending values, with rows when given", () => {
     expect(() => prepareSample([{ name: "A", values: ["1", "x", "2", "y"], rows: [2, 3, 4, 5] }])).toThrow(
-      new StatsInputError("The outcome must be numeric; found 'x' in group 'A' (row 3), 'y' in group 'A' (row 5)"),
+      new StatsInputError(
+        "The outcome must be numeric; found 'x' in group 'A' (row 3), 'y' in group 'A' (row 5)",
+      ),
     );
-    expect(() => prepareSample([{ name: "B", values: [1, Infinity] }])).toThrow(/must be finite; found 'Infinity' in group 'B' \(value 2\)/);
+    expect(() => prepareSample([{ name: "B", values: [1, Infinity] }])).toThrow(
+      /must be finite; found 'Infinity' in group 'B' \(value 2\)/,
+    );
     expect(() => prepareSample([{ name: "B", values: ["1", "-inf"] }])).toThrow(StatsInputError);
   });
 

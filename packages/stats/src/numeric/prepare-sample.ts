@@ -27,7 +27,10 @@ interface Problem {
 function describe(problems: Problem[], total: number): string {
   const named = problems
     .slice(0, MAX_NAMED_PROBLEMS)
-    .map((p) => `'${p.text}' in group '${p.group}' (${p.row !== undefined ? `row ${p.row}` : `value ${p.position + 1}`})`)
+    .map(
+      (p) =>
+        `'${p.text}' in group '${p.group}' (${p.row !== undefined ? `row ${p.row}` : `value ${p.position + 1}`})`,
+    )
     .join(", ");
   return total > MAX_NAMED_PROBLEMS ? `${named} and ${total - MAX_NAMED_PROBLEMS} more` : named;
 }
@@ -95,7 +98,8 @@ export function prepareSample(input: SampleInput): CentredSample {
       if (typeof v === "number") {
         if (!Number.isFinite(v)) {
           infiniteCount += 1;
-          if (infinite.length < MAX_NAMED_PROBLEMS) infinite.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
+          if (infinite.length < MAX_NAMED_PROBLEMS)
+            infinite.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
           continue;
         }
         if (shortDecimalOfNumber(v, scratch)) {
@@ -122,7 +126,8 @@ export function prepareSample(input: SampleInput): CentredSample {
           const list = parsed.kind === "infinite" ? infinite : notNumeric;
           if (parsed.kind === "infinite") infiniteCount += 1;
           else notNumericCount += 1;
-          if (list.length < MAX_NAMED_PROBLEMS) list.push({ group: g.name, position, row: g.rows?.[position], text: v.trim() });
+          if (list.length < MAX_NAMED_PROBLEMS)
+            list.push({ group: g.name, position, row: g.rows?.[position], text: v.trim() });
           continue;
         }
         mantissa = parsed.mantissa;
@@ -130,7 +135,8 @@ export function prepareSample(input: SampleInput): CentredSample {
         kind = parsed.long ? LONG : SHORT;
       } else {
         notNumericCount += 1;
-        if (notNumeric.length < MAX_NAMED_PROBLEMS) notNumeric.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
+        if (notNumeric.length < MAX_NAMED_PROBLEMS)
+          notNumeric.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
         continue;
       }
       mantissas[k] = mantissa;
@@ -212,7 +218,10 @@ export function prepareSample(input: SampleInput): CentredSample {
     let e = Infinity;
     for (let i = 0; i < k; i++) {
       const t = texts[i];
-      const b = kinds[i] === LONG && t !== undefined ? parseDecimalBig(t) : { mantissa: BigInt(mantissas[i] as number), exponent: exponents[i] as number };
+      const b =
+        kinds[i] === LONG && t !== undefined
+          ? parseDecimalBig(t)
+          : { mantissa: BigInt(mantissas[i] as number), exponent: exponents[i] as number };
       exact.push(b);
       if (b.mantissa !== 0n && b.exponent < e) e = b.exponent;
     }
@@ -235,7 +244,12 @@ export function prepareSample(input: SampleInput): CentredSample {
   let start = 0;
   groups.forEach((g, gi) => {
     const n = sizes[gi] ?? 0;
-    const group: CentredGroup = { name: g.name, centred: centredAll.subarray(start, start + n), rows: keptRows[gi], missing: missingCounts[gi] ?? 0 };
+    const group: CentredGroup = {
+      name: g.name,
+      centred: centredAll.subarray(start, start + n),
+      rows: keptRows[gi],
+      missing: missingCounts[gi] ?? 0,
+    };
     out.push(integerDivisor !== undefined ? { ...group, integerDivisor } : group);
     start += n;
   });
@@ -247,7 +261,8 @@ function pickOffsetIndex(mantissas: Float64Array, exponents: Int32Array, k: numb
   if (k === 0) return 0;
   const step = Math.max(1, Math.floor(k / OFFSET_PROBES));
   const probes: { i: number; v: number }[] = [];
-  for (let i = 0; i < k; i += step) probes.push({ i, v: (mantissas[i] as number) * 10 ** (exponents[i] as number) });
+  for (let i = 0; i < k; i += step)
+    probes.push({ i, v: (mantissas[i] as number) * 10 ** (exponents[i] as number) });
   probes.sort((a, b) => a.v - b.v);
   return probes[Math.floor(probes.length / 2)]?.i ?? 0;
 }

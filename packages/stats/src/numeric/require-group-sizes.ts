@@ -7,7 +7,12 @@ import type { CentredSample } from "./centred-sample.js";
  * e.g. "Welch's ANOVA needs at least two values in every group; group 'B' has 1".
  * Cost: O(k).
  */
-export function requireGroupSizes(sample: CentredSample, method: string, minPerGroup: number, minGroups = 2): void {
+export function requireGroupSizes(
+  sample: CentredSample,
+  method: string,
+  minPerGroup: number,
+  minGroups = 2,
+): void {
   const k = sample.groups.length;
   if (k < minGroups) {
     throw new StatsInputError(`${method} needs at least ${numberWord(minGroups)} groups; found ${k}`);

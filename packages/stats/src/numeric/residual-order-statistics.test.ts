@@ -21,7 +21,10 @@ describe("residualOrderStatistics", () => {
   });
 
   it("handles heavy ties", () => {
-    const sample = prepareSample([{ name: "A", values: [1, 1, 1, 2, 2] }, { name: "B", values: [5, 5, 6] }]);
+    const sample = prepareSample([
+      { name: "A", values: [1, 1, 1, 2, 2] },
+      { name: "B", values: [5, 5, 6] },
+    ]);
     const full = pooledResiduals(sample);
     expect(residualOrderStatistics(sample, [1, 2, 3, 4, 5, 6, 7, 8])).toEqual(Array.from(full));
   });

@@ -103,7 +103,8 @@ export function residualOrderStatistics(sample: CentredSample, ranks: readonly n
       answer = -Infinity;
       for (let g = 0; g < k; g++) {
         const p = posHi[g] as number;
-        if (p > 0) answer = Math.max(answer, ((sorted[g] as Float64Array)[p - 1] as number) - (means[g] as number));
+        if (p > 0)
+          answer = Math.max(answer, ((sorted[g] as Float64Array)[p - 1] as number) - (means[g] as number));
       }
     } else {
       const between: number[] = [];

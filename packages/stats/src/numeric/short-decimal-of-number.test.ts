@@ -19,7 +19,11 @@ describe("shortDecimalOfNumber", () => {
       const x = Number(((i * 7919) % 1000003) / 10 ** (i % 10)) * 10 ** ((i % 7) - 3);
       if (!shortDecimalOfNumber(x, out)) continue;
       const p = parseDecimal(String(x));
-      expect([out.mantissa * 10 ** 0, out.exponent]).toEqual([p.mantissa, p.exponent].map((v, j) => (j === 0 ? v * 10 ** (p.exponent - out.exponent) : out.exponent)));
+      expect([out.mantissa * 10 ** 0, out.exponent]).toEqual(
+        [p.mantissa, p.exponent].map((v, j) =>
+          j === 0 ? v * 10 ** (p.exponent - out.exponent) : out.exponent,
+        ),
+      );
       checked++;
     }
     expect(checked).toBeGreaterThan(10000);

@@ -21,7 +21,9 @@ const COUNTING_RANGE_FLOOR = 1 << 16;
 export function sortedValues(group: CentredGroup): Float64Array {
   let sorted = cache.get(group);
   if (!sorted) {
-    sorted = (group.integerDivisor !== undefined ? countingSort(group.centred, group.integerDivisor) : undefined) ?? Float64Array.from(group.centred).sort();
+    sorted =
+      (group.integerDivisor !== undefined ? countingSort(group.centred, group.integerDivisor) : undefined) ??
+      Float64Array.from(group.centred).sort();
     cache.set(group, sorted);
   }
   return sorted;

@@ -52,7 +52,10 @@ export interface KruskalWallisOptions {
  * Cost: O(N log k) after the per-group sorts; the permutation adds O(B·N).
  * Unavailable when all values are tied (C = 0).
  */
-export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions = {}): KruskalWallisResult | Unavailable {
+export function kruskalWallis(
+  input: SampleInput,
+  options: KruskalWallisOptions = {},
+): KruskalWallisResult | Unavailable {
   const sample = prepareSample(input);
   requireGroupSizes(sample, "The Kruskal–Wallis test", 1);
   const sizes = sample.groups.map((g) => g.centred.length);
@@ -64,7 +67,10 @@ export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions 
   const Nf = N;
   const tieCorrection = 1 - tieSum / (Nf * Nf * Nf - Nf);
   if (!(tieCorrection > 0)) {
-    return { available: false, reason: "All values are tied, so the ranks carry no information and H is undefined" };
+    return {
+      available: false,
+      reason: "All values are tied, so the ranks carry no information and H is undefined",
+    };
   }
   const H = statistic(rankSums, sizes, N, tieCorrection);
   const df = k - 1;
@@ -76,7 +82,11 @@ export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions 
     p: chiSquareSf(H, df),
     epsilonSquared: H / (N - 1),
     tieCorrection,
-    meanRanks: sample.groups.map((g, i) => ({ group: g.name, n: sizes[i] as number, meanRank: (rankSums[i] as number) / (sizes[i] as number) })),
+    meanRanks: sample.groups.map((g, i) => ({
+      group: g.name,
+      n: sizes[i] as number,
+      meanRank: (rankSums[i] as number) / (sizes[i] as number),
+    })),
   };
   if (wanted && ranks) {
     result.permutation = permutationKruskalWallis(ranks, sizes, H, tieCorrection, {
@@ -87,7 +97,12 @@ export function kruskalWallis(input: SampleInput, options: KruskalWallisOptions 
   return result;
 }
 
-function statistic(rankSums: readonly number[], sizes: readonly number[], N: number, tieCorrection: number): number {
+function statistic(
+  rankSums: readonly number[],
+  sizes: readonly number[],
+  N: number,
+  tieCorrection: number,
+): number {
   const centre = (N + 1) / 2;
   let s = 0;
   rankSums.forEach((R, i) => {
@@ -95,5 +110,5 @@ function statistic(rankSums: readonly number[], sizes: readonly number[], N: num
     const d = R / n - centre;
     s += n * d * d;
   });
-  return (12 / (N * (N + 1))) * s / tieCorrection;
+  return ((12 / (N * (N + 1))) * s) / tieCorrection;
 }

@@ -6,7 +6,9 @@ import { oneWayAnova } from "./one-way-anova.js";
 
 // NIST StRD one-way ANOVA datasets (public domain; copied with a README into test/fixtures).
 const dir = path.join(path.dirname(fileURLToPath(import.meta.url)), "../../test/fixtures/nist-strd-anova");
-const files = readdirSync(dir).filter((f) => f.endsWith(".dat")).sort();
+const files = readdirSync(dir)
+  .filter((f) => f.endsWith(".dat"))
+  .sort();
 
 interface Certified {
   ssBetween: number;
@@ -68,7 +70,9 @@ describe("NIST StRD one-way ANOVA: LRE ≥ 12 for F, SS between, SS within and R
         ssWithin: lre(a.ssWithin, certified.ssWithin),
         rSquared: lre(a.rSquared, certified.rSquared),
       };
-      table[file.replace(".dat", "")] = Object.fromEntries(Object.entries(scores).map(([k, v]) => [k, Number(v.toFixed(1))]));
+      table[file.replace(".dat", "")] = Object.fromEntries(
+        Object.entries(scores).map(([k, v]) => [k, Number(v.toFixed(1))]),
+      );
       for (const v of Object.values(scores)) expect(v).toBeGreaterThanOrEqual(12);
     });
     it(`${file} given as JS numbers (shortest decimal text path)`, () => {

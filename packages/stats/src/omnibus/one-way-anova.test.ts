@@ -5,7 +5,10 @@ import { oneWayAnova } from "./one-way-anova.js";
 describe("oneWayAnova", () => {
   it("matches a hand computation", () => {
     // Means 2 and 5, grand 3.5: SS_B = 3·1.5²·2 = 13.5, SS_W = 2 + 2 = 4, F = 13.5/(4/4) = 13.5.
-    const a = oneWayAnova([{ name: "A", values: [1, 2, 3] }, { name: "B", values: [4, 5, 6] }]);
+    const a = oneWayAnova([
+      { name: "A", values: [1, 2, 3] },
+      { name: "B", values: [4, 5, 6] },
+    ]);
     if (!a.available) throw new Error(a.reason);
     expect(a.ssBetween).toBe(13.5);
     expect(a.ssWithin).toBe(4);
@@ -18,14 +21,27 @@ describe("oneWayAnova", () => {
   });
 
   it("is unavailable, with the reason, when all groups are constant (the negative-F trap)", () => {
-    const same = oneWayAnova([{ name: "A", values: [5, 5, 5] }, { name: "B", values: [5, 5] }]);
+    const same = oneWayAnova([
+      { name: "A", values: [5, 5, 5] },
+      { name: "B", values: [5, 5] },
+    ]);
     expect(same).toEqual({ available: false, reason: expect.stringMatching(/All values are identical/) });
-    const constantGroups = oneWayAnova([{ name: "A", values: [1, 1, 1] }, { name: "B", values: [2, 2] }]);
-    expect(constantGroups).toEqual({ available: false, reason: expect.stringMatching(/Every group is constant/) });
+    const constantGroups = oneWayAnova([
+      { name: "A", values: [1, 1, 1] },
+      { name: "B", values: [2, 2] },
+    ]);
+    expect(constantGroups).toEqual({
+      available: false,
+      reason: expect.stringMatching(/Every group is constant/),
+    });
   });
 
   it("does not depend on the order of groups or values", () => {
-    const g = [{ name: "A", values: [1.1, 2.7, 3.2, 0.4] }, { name: "B", values: [5.5, 4.1, 6.3] }, { name: "C", values: [2, 2.5] }];
+    const g = [
+      { name: "A", values: [1.1, 2.7, 3.2, 0.4] },
+      { name: "B", values: [5.5, 4.1, 6.3] },
+      { name: "C", values: [2, 2.5] },
+    ];
     const a = oneWayAnova(g);
     const b = oneWayAnova([...g].reverse().map((x) => ({ ...x, values: [...x.values].reverse() })));
     if (!a.available || !b.available) throw new Error("unavailable");
@@ -33,9 +49,14 @@ describe("oneWayAnova", () => {
   });
 
   it("throws for fewer than two groups or an empty group", () => {
-    expect(() => oneWayAnova([{ name: "A", values: [1, 2] }])).toThrow(new StatsInputError("One-way ANOVA needs at least two groups; found 1"));
-    expect(() => oneWayAnova([{ name: "A", values: [1, 2] }, { name: "B", values: [] }])).toThrow(
-      new StatsInputError("One-way ANOVA needs at least one value in every group; group 'B' has 0"),
+    expect(() => oneWayAnova([{ name: "A", values: [1, 2] }])).toThrow(
+      new StatsInputError("One-way ANOVA needs at least two groups; found 1"),
     );
+    expect(() =>
+      oneWayAnova([
+        { name: "A", values: [1, 2] },
+        { name: "B", values: [] },
+      ]),
+    ).toThrow(new StatsInputError("One-way ANOVA needs at least one value in every group; group 'B' has 0"));
   });
 });

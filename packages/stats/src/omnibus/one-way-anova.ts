@@ -69,7 +69,10 @@ export function oneWayAnova(input: SampleInput): OneWayAnovaResult | Unavailable
   const df1 = k - 1;
   const df2 = N - k;
   if (df2 <= 0) {
-    return { available: false, reason: `One-way ANOVA needs more values than groups to estimate the error variance; found ${N} values in ${k} groups` };
+    return {
+      available: false,
+      reason: `One-way ANOVA needs more values than groups to estimate the error variance; found ${N} values in ${k} groups`,
+    };
   }
   if (ssWithin === 0) {
     return {

@@ -42,7 +42,8 @@ export function anovaPower(input: AnovaPowerInput): AnovaPowerResult {
   if (!(input.f >= 0) || !Number.isFinite(input.f)) {
     throw new StatsInputError(`Power analysis needs an effect size f of 0 or more; got ${input.f}`);
   }
-  if (!(alpha > 0 && alpha < 1)) throw new StatsInputError(`Power analysis needs alpha between 0 and 1; got ${alpha}`);
+  if (!(alpha > 0 && alpha < 1))
+    throw new StatsInputError(`Power analysis needs alpha between 0 and 1; got ${alpha}`);
   const totalN = sizes.reduce((s, n) => s + n, 0);
   const df1 = k - 1;
   const df2 = totalN - k;
@@ -57,19 +58,24 @@ function groupSizes(input: AnovaPowerInput): number[] {
   if (typeof input.nPerGroup === "number") {
     const k = input.k;
     if (k === undefined || !Number.isInteger(k) || k < 2) {
-      throw new StatsInputError(`Power analysis needs k, the number of groups, to be a whole number of at least 2; got ${k}`);
+      throw new StatsInputError(
+        `Power analysis needs k, the number of groups, to be a whole number of at least 2; got ${k}`,
+      );
     }
     sizes = new Array<number>(k).fill(input.nPerGroup);
   } else {
     sizes = [...input.nPerGroup];
-    if (sizes.length < 2) throw new StatsInputError(`Power analysis needs at least two groups; got ${sizes.length}`);
+    if (sizes.length < 2)
+      throw new StatsInputError(`Power analysis needs at least two groups; got ${sizes.length}`);
     if (input.k !== undefined && input.k !== sizes.length) {
       throw new StatsInputError(`Power analysis got k = ${input.k} but ${sizes.length} group sizes`);
     }
   }
   for (const [i, n] of sizes.entries()) {
     if (!Number.isInteger(n) || n < 2) {
-      throw new StatsInputError(`Power analysis needs at least two subjects in every group; group ${i + 1} has ${n}`);
+      throw new StatsInputError(
+        `Power analysis needs at least two subjects in every group; group ${i + 1} has ${n}`,
+      );
     }
   }
   return sizes;

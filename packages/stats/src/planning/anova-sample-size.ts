@@ -19,15 +19,23 @@ export interface AnovaSampleSizeResult {
  * Example: anovaSampleSize({ k: 4, f: 0.25, power: 0.8 }) → 45 per group (power ≈ 0.804).
  * Cost: O(log n) power evaluations.
  */
-export function anovaSampleSize(input: { k: number; f: number; alpha?: number; power?: number }): AnovaSampleSizeResult {
+export function anovaSampleSize(input: {
+  k: number;
+  f: number;
+  alpha?: number;
+  power?: number;
+}): AnovaSampleSizeResult {
   const target = input.power ?? 0.8;
   const alpha = input.alpha ?? 0.05;
-  if (!(target > 0 && target < 1)) throw new StatsInputError(`Sample-size planning needs a target power between 0 and 1; got ${target}`);
+  if (!(target > 0 && target < 1))
+    throw new StatsInputError(`Sample-size planning needs a target power between 0 and 1; got ${target}`);
   if (!(input.f > 0) || !Number.isFinite(input.f)) {
     throw new StatsInputError(`Sample-size planning needs an effect size f above 0; got ${input.f}`);
   }
   if (target <= alpha) {
-    throw new StatsInputError(`Sample-size planning needs a target power above alpha (${alpha}); got ${target}`);
+    throw new StatsInputError(
+      `Sample-size planning needs a target power above alpha (${alpha}); got ${target}`,
+    );
   }
   const powerAt = (n: number) => anovaPower({ k: input.k, nPerGroup: n, f: input.f, alpha }).power;
   let lo = 2;
@@ -36,7 +44,10 @@ export function anovaSampleSize(input: { k: number; f: number; alpha?: number; p
   while (powerAt(hi) < target) {
     lo = hi;
     hi *= 2;
-    if (hi > 1e8) throw new StatsInputError(`Sample-size planning: f = ${input.f} is too small to reach power ${target} with fewer than 10⁸ per group`);
+    if (hi > 1e8)
+      throw new StatsInputError(
+        `Sample-size planning: f = ${input.f} is too small to reach power ${target} with fewer than 10⁸ per group`,
+      );
   }
   while (hi - lo > 1) {
     const mid = Math.floor((lo + hi) / 2);

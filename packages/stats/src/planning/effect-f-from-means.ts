@@ -12,9 +12,12 @@ import { StatsInputError } from "../errors.js";
  * Cost: O(k).
  */
 export function effectFFromMeans(means: readonly number[], sd: number): number {
-  if (means.length < 2) throw new StatsInputError(`Cohen's f needs at least two group means; got ${means.length}`);
-  for (const m of means) if (!Number.isFinite(m)) throw new StatsInputError(`Cohen's f needs finite means; got ${m}`);
-  if (!(sd > 0) || !Number.isFinite(sd)) throw new StatsInputError(`Cohen's f needs a within-group SD above 0; got ${sd}`);
+  if (means.length < 2)
+    throw new StatsInputError(`Cohen's f needs at least two group means; got ${means.length}`);
+  for (const m of means)
+    if (!Number.isFinite(m)) throw new StatsInputError(`Cohen's f needs finite means; got ${m}`);
+  if (!(sd > 0) || !Number.isFinite(sd))
+    throw new StatsInputError(`Cohen's f needs a within-group SD above 0; got ${sd}`);
   const k = means.length;
   const grand = means.reduce((s, m) => s + m, 0) / k;
   const sigmaM = Math.sqrt(means.reduce((s, m) => s + (m - grand) ** 2, 0) / k);

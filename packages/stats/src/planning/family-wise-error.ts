@@ -29,21 +29,31 @@ export interface FamilyWiseErrorResult {
  */
 export function familyWiseError(input: { k?: number; m?: number; alpha?: number }): FamilyWiseErrorResult {
   const alpha = input.alpha ?? 0.05;
-  if (!(alpha > 0 && alpha < 1)) throw new StatsInputError(`The family-wise error rate needs alpha between 0 and 1; got ${alpha}`);
+  if (!(alpha > 0 && alpha < 1))
+    throw new StatsInputError(`The family-wise error rate needs alpha between 0 and 1; got ${alpha}`);
   let m: number;
   if (input.m !== undefined) {
     m = input.m;
-    if (!Number.isInteger(m) || m < 1) throw new StatsInputError(`The family-wise error rate needs m, the number of comparisons, to be a whole number of at least 1; got ${m}`);
-    if (input.k !== undefined && input.k * (input.k - 1) / 2 !== m) {
-      throw new StatsInputError(`The family-wise error rate got k = ${input.k} and m = ${m}, which disagree (k groups give k(k − 1)/2 pairs)`);
+    if (!Number.isInteger(m) || m < 1)
+      throw new StatsInputError(
+        `The family-wise error rate needs m, the number of comparisons, to be a whole number of at least 1; got ${m}`,
+      );
+    if (input.k !== undefined && (input.k * (input.k - 1)) / 2 !== m) {
+      throw new StatsInputError(
+        `The family-wise error rate got k = ${input.k} and m = ${m}, which disagree (k groups give k(k − 1)/2 pairs)`,
+      );
     }
   } else if (input.k !== undefined) {
     if (!Number.isInteger(input.k) || input.k < 2) {
-      throw new StatsInputError(`The family-wise error rate needs k, the number of groups, to be a whole number of at least 2; got ${input.k}`);
+      throw new StatsInputError(
+        `The family-wise error rate needs k, the number of groups, to be a whole number of at least 2; got ${input.k}`,
+      );
     }
     m = (input.k * (input.k - 1)) / 2;
   } else {
-    throw new StatsInputError("The family-wise error rate needs k (number of groups) or m (number of comparisons)");
+    throw new StatsInputError(
+      "The family-wise error rate needs k (number of groups) or m (number of comparisons)",
+    );
   }
   const log1mAlpha = Math.log1p(-alpha);
   return {

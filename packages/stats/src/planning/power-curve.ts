@@ -19,12 +19,18 @@ export function powerCurve(input: {
 }): { n: number; power: number }[] {
   const nMin = input.nMin ?? 2;
   const step = input.step ?? 1;
-  if (!Number.isInteger(step) || step < 1) throw new StatsInputError(`A power curve needs a whole step of at least 1; got ${step}`);
-  if (!(input.nMax >= nMin)) throw new StatsInputError(`A power curve needs nMax ≥ nMin; got ${input.nMax} and ${nMin}`);
-  if ((input.nMax - nMin) / step > 10_000) throw new StatsInputError("A power curve is limited to 10 000 points");
+  if (!Number.isInteger(step) || step < 1)
+    throw new StatsInputError(`A power curve needs a whole step of at least 1; got ${step}`);
+  if (!(input.nMax >= nMin))
+    throw new StatsInputError(`A power curve needs nMax ≥ nMin; got ${input.nMax} and ${nMin}`);
+  if ((input.nMax - nMin) / step > 10_000)
+    throw new StatsInputError("A power curve is limited to 10 000 points");
   const points: { n: number; power: number }[] = [];
   for (let n = nMin; n <= input.nMax; n += step) {
-    points.push({ n, power: anovaPower({ k: input.k, nPerGroup: n, f: input.f, alpha: input.alpha ?? 0.05 }).power });
+    points.push({
+      n,
+      power: anovaPower({ k: input.k, nPerGroup: n, f: input.f, alpha: input.alpha ?? 0.05 }).power,
+    });
   }
   return points;
 }

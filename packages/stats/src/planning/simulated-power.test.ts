@@ -10,7 +10,13 @@ describe("simulated power", () => {
   });
 
   it("under equal means the rejection rate is α within 4 Monte-Carlo standard errors", () => {
-    const r = simulatedPower({ means: [5, 5, 5], sds: [1, 2, 3], n: [10, 15, 20], simulations: 500, seed: 11 });
+    const r = simulatedPower({
+      means: [5, 5, 5],
+      sds: [1, 2, 3],
+      n: [10, 15, 20],
+      simulations: 500,
+      seed: 11,
+    });
     const se = Math.sqrt((0.05 * 0.95) / 500);
     expect(Math.abs(r.welch.power - 0.05)).toBeLessThan(4 * se);
     expect(Math.abs(r.kruskalWallis.power - 0.05)).toBeLessThan(4 * se);

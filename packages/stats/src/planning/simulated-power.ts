@@ -53,28 +53,46 @@ export function simulatedPower(input: {
   const seed = input.seed ?? 20_240_101;
   const k = input.means.length;
   if (k < 2) throw new StatsInputError(`Simulated power needs at least two groups; got ${k}`);
-  if (input.sds.length !== k) throw new StatsInputError(`Simulated power needs one SD per group; got ${input.sds.length} SDs for ${k} means`);
+  if (input.sds.length !== k)
+    throw new StatsInputError(
+      `Simulated power needs one SD per group; got ${input.sds.length} SDs for ${k} means`,
+    );
   const sizes = typeof input.n === "number" ? new Array<number>(k).fill(input.n) : [...input.n];
-  if (sizes.length !== k) throw new StatsInputError(`Simulated power needs one group size per group; got ${sizes.length} for ${k} means`);
+  if (sizes.length !== k)
+    throw new StatsInputError(
+      `Simulated power needs one group size per group; got ${sizes.length} for ${k} means`,
+    );
   for (const [i, n] of sizes.entries()) {
-    if (!Number.isInteger(n) || n < 2) throw new StatsInputError(`Simulated power needs at least two values in every group; group ${i + 1} has ${n}`);
+    if (!Number.isInteger(n) || n < 2)
+      throw new StatsInputError(
+        `Simulated power needs at least two values in every group; group ${i + 1} has ${n}`,
+      );
   }
   for (const [i, s] of input.sds.entries()) {
-    if (!(s > 0) || !Number.isFinite(s)) throw new StatsInputError(`Simulated power needs every SD above 0; group ${i + 1} has ${s}`);
+    if (!(s > 0) || !Number.isFinite(s))
+      throw new StatsInputError(`Simulated power needs every SD above 0; group ${i + 1} has ${s}`);
   }
-  for (const m of input.means) if (!Number.isFinite(m)) throw new StatsInputError(`Simulated power needs finite means; got ${m}`);
-  if (!(alpha > 0 && alpha < 1)) throw new StatsInputError(`Simulated power needs alpha between 0 and 1; got ${alpha}`);
+  for (const m of input.means)
+    if (!Number.isFinite(m)) throw new StatsInputError(`Simulated power needs finite means; got ${m}`);
+  if (!(alpha > 0 && alpha < 1))
+    throw new StatsInputError(`Simulated power needs alpha between 0 and 1; got ${alpha}`);
   if (!Number.isInteger(simulations) || simulations < 1 || simulations > 1_000_000) {
-    throw new StatsInputError(`Simulated power needs between 1 and 1 000 000 simulations; got ${simulations}`);
+    throw new StatsInputError(
+      `Simulated power needs between 1 and 1 000 000 simulations; got ${simulations}`,
+    );
   }
-  if (!Number.isInteger(seed)) throw new StatsInputError(`Simulated power needs a whole-number seed; got ${seed}`);
+  if (!Number.isInteger(seed))
+    throw new StatsInputError(`Simulated power needs a whole-number seed; got ${seed}`);
 
   const rng = xoroshiro128plus(seed);
   const counts = { welch: { hit: 0, na: 0 }, kw: { hit: 0, na: 0 } };
   for (let r = 0; r < simulations; r++) {
     const groups = sizes.map((n, i) => ({
       name: `g${i + 1}`,
-      values: Array.from({ length: n }, () => (input.means[i] as number) + (input.sds[i] as number) * normal(rng)),
+      values: Array.from(
+        { length: n },
+        () => (input.means[i] as number) + (input.sds[i] as number) * normal(rng),
+      ),
     }));
     const w = welchAnova(groups);
     if (!w.available) counts.welch.na++;
@@ -85,7 +103,12 @@ export function simulatedPower(input: {
   }
   const estimate = ({ hit, na }: { hit: number; na: number }): SimulatedPowerEstimate => {
     const power = hit / simulations;
-    return { power, standardError: Math.sqrt((power * (1 - power)) / simulations), runs: simulations, unavailableRuns: na };
+    return {
+      power,
+      standardError: Math.sqrt((power * (1 - power)) / simulations),
+      runs: simulations,
+      unavailableRuns: na,
+    };
   };
   return { seed, simulations, alpha, welch: estimate(counts.welch), kruskalWallis: estimate(counts.kw) };
 }

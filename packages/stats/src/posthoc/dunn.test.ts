@@ -38,9 +38,17 @@ describe("Dunn's test", () => {
   });
 
   it("input errors name the group", () => {
-    expect(() => dunn([{ name: "A", values: [1] }, { name: "B", values: [] }])).toThrow(
-      "Dunn's test needs at least one value in every group; group 'B' has 0",
-    );
-    expect(() => dunn([{ name: "A", values: [1, Number.NaN] }, { name: "B", values: [2] }])).toThrow(/group 'A' contains NaN/);
+    expect(() =>
+      dunn([
+        { name: "A", values: [1] },
+        { name: "B", values: [] },
+      ]),
+    ).toThrow("Dunn's test needs at least one value in every group; group 'B' has 0");
+    expect(() =>
+      dunn([
+        { name: "A", values: [1, Number.NaN] },
+        { name: "B", values: [2] },
+      ]),
+    ).toThrow(/group 'A' contains NaN/);
   });
 });

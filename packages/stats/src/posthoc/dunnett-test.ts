@@ -38,7 +38,10 @@ export function dunnettTest(groups: readonly GroupSummary[], control: string, al
   validateSummaries(method, groups, 2);
   validateAlpha(method, alpha);
   const c = groups.find((g) => g.name === control);
-  if (!c) throw new StatsInputError(`${method} needs the control to be one of the groups; '${control}' is not among them`);
+  if (!c)
+    throw new StatsInputError(
+      `${method} needs the control to be one of the groups; '${control}' is not among them`,
+    );
   const n = groups.reduce((s, g) => s + g.n, 0);
   const df = n - groups.length;
   const msWithin = groups.reduce((s, g) => s + (g.n - 1) * g.variance, 0) / df;

@@ -9,7 +9,8 @@ describe("adjustPValues", () => {
     const holm = adjustPValues(p, "holm");
     const bonf = adjustPValues(p, "bonferroni");
     const order = p.map((_, i) => i).sort((i, j) => p[i]! - p[j]!);
-    for (let r = 1; r < order.length; r++) expect(holm[order[r]!]!).toBeGreaterThanOrEqual(holm[order[r - 1]!]!);
+    for (let r = 1; r < order.length; r++)
+      expect(holm[order[r]!]!).toBeGreaterThanOrEqual(holm[order[r - 1]!]!);
     holm.forEach((h, i) => {
       expect(h).toBeGreaterThanOrEqual(p[i]!);
       expect(h).toBeLessThanOrEqual(bonf[i]!);

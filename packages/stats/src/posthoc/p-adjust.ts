@@ -22,7 +22,9 @@ export type PAdjustMethod = "holm" | "bonferroni" | "bh" | "none";
 export function adjustPValues(p: readonly number[], method: PAdjustMethod): number[] {
   for (const [i, v] of p.entries()) {
     if (!(v >= 0 && v <= 1)) {
-      throw new StatsInputError(`Adjusting p-values needs every p-value between 0 and 1; p-value ${i + 1} is ${v}`);
+      throw new StatsInputError(
+        `Adjusting p-values needs every p-value between 0 and 1; p-value ${i + 1} is ${v}`,
+      );
     }
   }
   const m = p.length;
@@ -48,5 +50,7 @@ export function adjustPValues(p: readonly number[], method: PAdjustMethod): numb
     }
     return out;
   }
-  throw new StatsInputError(`Adjusting p-values needs the method "holm", "bonferroni", "bh" or "none"; got "${String(method)}"`);
+  throw new StatsInputError(
+    `Adjusting p-values needs the method "holm", "bonferroni", "bh" or "none"; got "${String(method)}"`,
+  );
 }

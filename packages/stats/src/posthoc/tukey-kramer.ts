@@ -59,9 +59,12 @@ export function tukeyKramer(
   const method = "Tukey–Kramer";
   validateSummaries(method, groups, 2);
   validateAlpha(method, alpha);
-  if (!(dfWithin >= 1)) throw new StatsInputError(`${method} needs at least 1 within-group degree of freedom; got ${dfWithin}`);
+  if (!(dfWithin >= 1))
+    throw new StatsInputError(`${method} needs at least 1 within-group degree of freedom; got ${dfWithin}`);
   if (!Number.isFinite(msWithin) || msWithin < 0) {
-    throw new StatsInputError(`${method} needs a finite within-group mean square of 0 or more; got ${msWithin}`);
+    throw new StatsInputError(
+      `${method} needs a finite within-group mean square of 0 or more; got ${msWithin}`,
+    );
   }
   if (msWithin === 0) {
     return {

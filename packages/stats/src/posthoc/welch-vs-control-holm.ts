@@ -33,12 +33,19 @@ export interface WelchVsControlResult {
  * t = 1/√(0.1 + 0.3333) ≈ 1.519, df ≈ 16.7, p ≈ 0.147.
  * Cost: O(k).
  */
-export function welchVsControlHolm(groups: readonly GroupSummary[], control: string, alpha = 0.05): WelchVsControlResult {
+export function welchVsControlHolm(
+  groups: readonly GroupSummary[],
+  control: string,
+  alpha = 0.05,
+): WelchVsControlResult {
   const method = "Welch t-tests against a control";
   validateSummaries(method, groups, 2);
   validateAlpha(method, alpha);
   const c = groups.find((g) => g.name === control);
-  if (!c) throw new StatsInputError(`${method} need the control to be one of the groups; '${control}' is not among them`);
+  if (!c)
+    throw new StatsInputError(
+      `${method} need the control to be one of the groups; '${control}' is not among them`,
+    );
   const raw = groups
     .filter((g) => g.name !== control)
     .map((g) => {
@@ -56,7 +63,17 @@ export function welchVsControlHolm(groups: readonly GroupSummary[], control: str
       const se = Math.sqrt(va + vc);
       const t = diff / se;
       const df = (va + vc) ** 2 / (va ** 2 / (g.n - 1) + vc ** 2 / (c.n - 1));
-      return { available: true as const, a: g.name, b: control, diff, se, t, df, p: tTwoSided(t, df), hedgesG: hedgesG(g, c) };
+      return {
+        available: true as const,
+        a: g.name,
+        b: control,
+        diff,
+        se,
+        t,
+        df,
+        p: tTwoSided(t, df),
+        hedgesG: hedgesG(g, c),
+      };
     });
   const computed = raw.filter((r) => r.available);
   const adjusted = adjustPValues(
@@ -64,6 +81,8 @@ export function welchVsControlHolm(groups: readonly GroupSummary[], control: str
     "holm",
   );
   const pAdjOf = new Map(computed.map((r, i) => [r.a, adjusted[i] as number]));
-  const pairs: WelchVsControlPair[] = raw.map((r) => (r.available ? { ...r, pAdj: pAdjOf.get(r.a) as number } : r));
+  const pairs: WelchVsControlPair[] = raw.map((r) =>
+    r.available ? { ...r, pAdj: pAdjOf.get(r.a) as number } : r,
+  );
   return { method: "Welch t-tests vs control, Holm-adjusted", control, alpha, pairs };
 }

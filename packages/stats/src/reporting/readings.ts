@@ -44,14 +44,21 @@ export function checkReadings(r: ResultView): Reading[] {
           : `No clear departure from normality in the residuals (Shapiro–Wilk W = ${formatStat(sw.W, 3)}, p ${formatP(sw.p)}).`,
     });
   } else {
-    out.push({ key: "normality", level: "attention", text: `Normality of the residuals was not tested: ${reasonOf(sw)}.` });
+    out.push({
+      key: "normality",
+      level: "attention",
+      text: `Normality of the residuals was not tested: ${reasonOf(sw)}.`,
+    });
   }
 
   const bf = r.brownForsythe;
   const ratio = typeof r.sdRatio === "number" ? r.sdRatio : ok(r.sdRatio) ? r.sdRatio.ratio : null;
   if (ok(bf)) {
     const differs = bf.p < alpha || (ratio !== null && ratio > SD_RATIO_ATTENTION);
-    const ratioText = ratio !== null ? `the largest SD is ${formatStat(ratio, 1)} times the smallest` : "the SD ratio could not be computed";
+    const ratioText =
+      ratio !== null
+        ? `the largest SD is ${formatStat(ratio, 1)} times the smallest`
+        : "the SD ratio could not be computed";
     out.push({
       key: "spread",
       level: differs ? "attention" : "ok",
@@ -60,7 +67,11 @@ export function checkReadings(r: ResultView): Reading[] {
         : `The groups have similar spread: ${ratioText} (Brown–Forsythe F(${formatDf(bf.df1)}, ${formatDf(bf.df2)}) = ${formatStat(bf.F)}, p ${formatP(bf.p)}).`,
     });
   } else {
-    out.push({ key: "spread", level: "attention", text: `Equality of spread was not tested: ${reasonOf(bf)}.` });
+    out.push({
+      key: "spread",
+      level: "attention",
+      text: `Equality of spread was not tested: ${reasonOf(bf)}.`,
+    });
   }
 
   const o = r.outliers;
@@ -87,7 +98,10 @@ export function omnibusSentence(r: ResultView, test: string): string {
   if (test === "anova") {
     const a = r.anova;
     if (!ok(a)) return `Classic one-way ANOVA could not be computed: ${reasonOf(a)}.`;
-    const ci = a.etaSquaredCi && ok(a.etaSquaredCi) ? `, η² = ${formatUnit(a.etaSquared)} [95% CI ${formatUnit(a.etaSquaredCi.lower)}, ${formatUnit(a.etaSquaredCi.upper)}]` : `, η² = ${formatUnit(a.etaSquared)}`;
+    const ci =
+      a.etaSquaredCi && ok(a.etaSquaredCi)
+        ? `, η² = ${formatUnit(a.etaSquared)} [95% CI ${formatUnit(a.etaSquaredCi.lower)}, ${formatUnit(a.etaSquaredCi.upper)}]`
+        : `, η² = ${formatUnit(a.etaSquared)}`;
     return `F(${formatDf(a.df1)}, ${formatDf(a.df2)}) = ${formatStat(a.F)}, p ${formatP(a.p)}, ω² = ${formatUnit(a.omegaSquared)}${ci}`;
   }
   if (test === "welch") {
@@ -126,10 +140,16 @@ export function resultSummary(r: ResultView, test: string, outcomeName: string):
   if (!ok(p)) return [`${name[0]!.toUpperCase()}${name.slice(1)} could not be computed: ${reasonOf(p)}.`];
   const sentence = omnibusSentence(r, test);
   if (p.p < alpha) {
-    lines.push(`At α = ${formatUnit(alpha)}, ${name} found a difference in ${outcome} between at least two of the groups (${sentence}). The post-hoc comparisons show which pairs differ.`);
+    lines.push(
+      `At α = ${formatUnit(alpha)}, ${name} found a difference in ${outcome} between at least two of the groups (${sentence}). The post-hoc comparisons show which pairs differ.`,
+    );
   } else {
-    lines.push(`At α = ${formatUnit(alpha)}, ${name} did not find a difference in ${outcome} between the groups (${sentence}). This is not evidence that the groups are equal: the study may be too small to detect a difference that matters.`);
+    lines.push(
+      `At α = ${formatUnit(alpha)}, ${name} did not find a difference in ${outcome} between the groups (${sentence}). This is not evidence that the groups are equal: the study may be too small to detect a difference that matters.`,
+    );
   }
-  lines.push("A small p-value says a difference is unlikely to be chance alone, not that it is large or important: judge the size of the differences and their intervals against what matters in practice.");
+  lines.push(
+    "A small p-value says a difference is unlikely to be chance alone, not that it is large or important: judge the size of the differences and their intervals against what matters in practice.",
+  );
   return lines;
 }

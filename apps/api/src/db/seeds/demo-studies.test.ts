@@ -13,11 +13,17 @@ function groupsOf(csv: string) {
 }
 
 describe("demo scenarios", () => {
-  it.each(demoScenarios().map((s) => [s.title, s] as const))("%s lands on the test it was built for", (_t, s) => {
-    const r = analyze({ groups: groupsOf(s.csv), options: { policy: "classic-first", scale: s.design.scale === "ordinal" ? "ordinal" : "continuous" } });
-    expect(r.recommendation.test).toBe(s.expectedTest);
-    expect(groupsOf(s.csv).map((g) => g.name)).toEqual(s.levels);
-  });
+  it.each(demoScenarios().map((s) => [s.title, s] as const))(
+    "%s lands on the test it was built for",
+    (_t, s) => {
+      const r = analyze({
+        groups: groupsOf(s.csv),
+        options: { policy: "classic-first", scale: s.design.scale === "ordinal" ? "ordinal" : "continuous" },
+      });
+      expect(r.recommendation.test).toBe(s.expectedTest);
+      expect(groupsOf(s.csv).map((g) => g.name)).toEqual(s.levels);
+    },
+  );
 
   it("is the same data on every run (seeded)", () => {
     expect(demoScenarios().map((s) => s.csv)).toEqual(demoScenarios().map((s) => s.csv));

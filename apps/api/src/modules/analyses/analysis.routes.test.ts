@@ -80,10 +80,14 @@ describe("checks and analyses", () => {
   it("stores every one of many concurrent runs whole (transactions queued on the one SQLite connection)", async () => {
     const count = async (sql: string) => Number((await t.ds.query(sql))[0].n);
     const before = await count(`SELECT count(*) AS n FROM analyses`);
-    const runs = await Promise.all(Array.from({ length: 12 }, () => analyst.post(`/api/studies/${studyId}/analyses`).send({ datasetId })));
+    const runs = await Promise.all(
+      Array.from({ length: 12 }, () => analyst.post(`/api/studies/${studyId}/analyses`).send({ datasetId })),
+    );
     expect(runs.map((r) => r.status)).toEqual(Array(12).fill(201));
     expect(await count(`SELECT count(*) AS n FROM analyses`)).toBe(before + 12);
-    expect(await count(`SELECT count(*) AS n FROM audit_events WHERE action = 'analysis.run'`)).toBe(await count(`SELECT count(*) AS n FROM analyses`));
+    expect(await count(`SELECT count(*) AS n FROM audit_events WHERE action = 'analysis.run'`)).toBe(
+      await count(`SELECT count(*) AS n FROM analyses`),
+    );
   });
 
   it("keeps roles and states apart", async () => {

@@ -19,7 +19,9 @@ export function AuditRoute() {
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-3xl font-semibold text-spruce">Audit trail</h1>
-          <p className="mt-1 max-w-prose text-ink-soft">Every recorded action, newest first. Nothing here can be changed or deleted.</p>
+          <p className="mt-1 max-w-prose text-ink-soft">
+            Every recorded action, newest first. Nothing here can be changed or deleted.
+          </p>
         </div>
         <a
           href={auditCsvHref(filters)}
@@ -35,7 +37,9 @@ export function AuditRoute() {
       {events.data && (
         <>
           <p className="text-sm text-ink-soft" role="status">
-            {events.data.length === LIMIT ? `Showing the latest ${LIMIT} matching events; narrow the filters to see older ones.` : `${events.data.length} matching event${events.data.length === 1 ? "" : "s"}.`}
+            {events.data.length === LIMIT
+              ? `Showing the latest ${LIMIT} matching events; narrow the filters to see older ones.`
+              : `${events.data.length} matching event${events.data.length === 1 ? "" : "s"}.`}
           </p>
           <AuditTable events={events.data} />
         </>

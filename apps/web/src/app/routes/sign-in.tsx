@@ -24,7 +24,9 @@ export function SignInRoute() {
           <WaymarkLogo className="h-10 w-10" />
           <div>
             <h1 className="text-2xl font-semibold text-spruce">Waymark</h1>
-            <p className="text-sm text-ink-soft">From a locked plan to a signed-off result, one marked step at a time.</p>
+            <p className="text-sm text-ink-soft">
+              From a locked plan to a signed-off result, one marked step at a time.
+            </p>
           </div>
         </div>
         <div className="rounded-lg border border-ink/10 bg-paper p-6 shadow-sm">

@@ -13,15 +13,23 @@ export function AppShell({ user }: { user: User }) {
   const logout = useLogout();
   const navigate = useNavigate();
   const config = usePublicConfig();
-  const items = NAV_ITEMS.filter((i) => can(user.role, i.permission) && (!i.demoOnly || config.data?.demo === true));
+  const items = NAV_ITEMS.filter(
+    (i) => can(user.role, i.permission) && (!i.demoOnly || config.data?.demo === true),
+  );
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-paper focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-paper focus:p-2"
+      >
         Skip to content
       </a>
       <header className="border-b-4 border-amber bg-spruce text-stone">
         <div className="mx-auto flex max-w-6xl items-center gap-6 px-4 py-3">
-          <NavLink to={paths.home} className="flex items-center gap-2 text-stone no-underline hover:no-underline">
+          <NavLink
+            to={paths.home}
+            className="flex items-center gap-2 text-stone no-underline hover:no-underline"
+          >
             <WaymarkLogo />
             <span className="text-lg font-semibold tracking-wide">Waymark</span>
           </NavLink>
@@ -52,7 +60,9 @@ export function AppShell({ user }: { user: User }) {
               variant="secondary"
               className="!py-1.5"
               disabled={logout.isPending}
-              onClick={() => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn, { replace: true }) })}
+              onClick={() =>
+                logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn, { replace: true }) })
+              }
             >
               Sign out
             </Button>

@@ -2,7 +2,13 @@ import { paths } from "@/config/paths";
 import type { Permission } from "@/lib/authorization";
 
 /** The main navigation; each entry is shown only to roles holding its permission. */
-export const NAV_ITEMS: { to: string; label: string; permission: Permission; end?: boolean; demoOnly?: boolean }[] = [
+export const NAV_ITEMS: {
+  to: string;
+  label: string;
+  permission: Permission;
+  end?: boolean;
+  demoOnly?: boolean;
+}[] = [
   { to: paths.home, label: "Home", permission: "home:view", end: true },
   { to: paths.studies, label: "Studies", permission: "studies:view", end: false },
   { to: paths.reviews, label: "Review queue", permission: "reviews:view", end: false },

@@ -4,7 +4,9 @@
  */
 export function AttentionMarker({ children, className = "" }: { children: string; className?: string }) {
   return (
-    <span className={`inline-flex items-center gap-1.5 rounded-sm bg-amber-100 px-1.5 py-0.5 text-xs font-semibold text-amber-800 ring-1 ring-amber/60 ${className}`}>
+    <span
+      className={`inline-flex items-center gap-1.5 rounded-sm bg-amber-100 px-1.5 py-0.5 text-xs font-semibold text-amber-800 ring-1 ring-amber/60 ${className}`}
+    >
       <span aria-hidden="true" className="inline-block h-2 w-2 rotate-45 bg-amber" />
       {children}
     </span>

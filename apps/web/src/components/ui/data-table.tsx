@@ -29,7 +29,12 @@ export const tableFeatureSet = tableFeatures({
   globalFilteringFeature,
   sortedRowModel: createSortedRowModel(),
   filteredRowModel: createFilteredRowModel(),
-  sortFns: { alphanumeric: sortFn_alphanumeric, text: sortFn_text, datetime: sortFn_datetime, basic: sortFn_basic },
+  sortFns: {
+    alphanumeric: sortFn_alphanumeric,
+    text: sortFn_text,
+    datetime: sortFn_datetime,
+    basic: sortFn_basic,
+  },
   filterFns: { includesString: filterFn_includesString },
 });
 
@@ -69,7 +74,18 @@ interface DataTableProps<T extends RowData> {
  * order (aria-sort) and show it with an arrow and in words for screen readers; numbers align
  * right when a column's meta says so.
  */
-export function DataTable<T extends RowData>({ columns, data, label, getRowId, initialSorting, filter, empty, rowClassName, testId, searchColumns }: DataTableProps<T>) {
+export function DataTable<T extends RowData>({
+  columns,
+  data,
+  label,
+  getRowId,
+  initialSorting,
+  filter,
+  empty,
+  rowClassName,
+  testId,
+  searchColumns,
+}: DataTableProps<T>) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting ?? []);
   const table = useTable({
     features: tableFeatureSet,
@@ -92,13 +108,24 @@ export function DataTable<T extends RowData>({ columns, data, label, getRowId, i
               {group.headers.map((header) => {
                 const col = header.column;
                 const sorted = col.getIsSorted();
-                const align = (col.columnDef.meta as { align?: "right" } | undefined)?.align === "right" ? "text-right" : "text-left";
+                const align =
+                  (col.columnDef.meta as { align?: "right" } | undefined)?.align === "right"
+                    ? "text-right"
+                    : "text-left";
                 return (
                   <th
                     key={header.id}
                     scope="col"
                     className={`px-3 py-2 font-semibold ${align}`}
-                    aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : col.getCanSort() ? "none" : undefined}
+                    aria-sort={
+                      sorted === "asc"
+                        ? "ascending"
+                        : sorted === "desc"
+                          ? "descending"
+                          : col.getCanSort()
+                            ? "none"
+                            : undefined
+                    }
                   >
                     {header.isPlaceholder ? null : col.getCanSort() ? (
                       <button
@@ -115,7 +142,11 @@ export function DataTable<T extends RowData>({ columns, data, label, getRowId, i
                           <ArrowUpDown aria-hidden="true" className="h-3.5 w-3.5 text-ink-soft" />
                         )}
                         <span className="sr-only">
-                          {sorted === "asc" ? ", sorted from low to high" : sorted === "desc" ? ", sorted from high to low" : ", select to sort"}
+                          {sorted === "asc"
+                            ? ", sorted from low to high"
+                            : sorted === "desc"
+                              ? ", sorted from high to low"
+                              : ", select to sort"}
                         </span>
                       </button>
                     ) : (
@@ -136,9 +167,13 @@ export function DataTable<T extends RowData>({ columns, data, label, getRowId, i
             </tr>
           ) : (
             rows.map((row) => (
-              <tr key={row.id} className={`border-b border-ink/10 last:border-0 ${rowClassName?.(row.original) ?? ""}`}>
+              <tr
+                key={row.id}
+                className={`border-b border-ink/10 last:border-0 ${rowClassName?.(row.original) ?? ""}`}
+              >
                 {row.getAllCells().map((cell) => {
-                  const right = (cell.column.columnDef.meta as { align?: "right" } | undefined)?.align === "right";
+                  const right =
+                    (cell.column.columnDef.meta as { align?: "right" } | undefined)?.align === "right";
                   return (
                     <td key={cell.id} className={`px-3 py-2 align-top ${right ? "text-right" : ""}`}>
                       <table.FlexRender cell={cell} />

@@ -1,6 +1,12 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { ReactNode } from "react";
-import { useForm, type DefaultValues, type FieldValues, type Resolver, type UseFormReturn } from "react-hook-form";
+import {
+  useForm,
+  type DefaultValues,
+  type FieldValues,
+  type Resolver,
+  type UseFormReturn,
+} from "react-hook-form";
 import type { z } from "zod";
 
 interface FormProps<TValues extends FieldValues> {
@@ -13,10 +19,25 @@ interface FormProps<TValues extends FieldValues> {
 }
 
 /** The one form wrapper: react-hook-form validated by a zod schema. */
-export function Form<TValues extends FieldValues>({ schema, defaultValues, onSubmit, children, className, ...rest }: FormProps<TValues>) {
-  const form = useForm<TValues>({ resolver: zodResolver(schema) as unknown as Resolver<TValues>, defaultValues });
+export function Form<TValues extends FieldValues>({
+  schema,
+  defaultValues,
+  onSubmit,
+  children,
+  className,
+  ...rest
+}: FormProps<TValues>) {
+  const form = useForm<TValues>({
+    resolver: zodResolver(schema) as unknown as Resolver<TValues>,
+    defaultValues,
+  });
   return (
-    <form noValidate className={className} aria-label={rest["aria-label"]} onSubmit={form.handleSubmit((v) => onSubmit(v, form))}>
+    <form
+      noValidate
+      className={className}
+      aria-label={rest["aria-label"]}
+      onSubmit={form.handleSubmit((v) => onSubmit(v, form))}
+    >
       {children(form)}
     </form>
   );

@@ -10,7 +10,10 @@ interface Props extends SelectHTMLAttributes<HTMLSelectElement> {
 }
 
 /** A labelled drop-down whose error is announced and tied to the field. */
-export const SelectField = forwardRef<HTMLSelectElement, Props>(function SelectField({ label, options, error, hint, hideLabel, id, className = "", ...props }, ref) {
+export const SelectField = forwardRef<HTMLSelectElement, Props>(function SelectField(
+  { label, options, error, hint, hideLabel, id, className = "", ...props },
+  ref,
+) {
   const auto = useId();
   const inputId = id ?? auto;
   const describedBy = error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined;

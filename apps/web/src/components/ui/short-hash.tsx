@@ -19,7 +19,12 @@ export function ShortHash({ hash, label = "hash" }: { hash: string; label?: stri
       <abbr title={hash} className="num no-underline" data-testid="short-hash">
         {hash.slice(0, 12)}…
       </abbr>
-      <button type="button" onClick={copy} className="rounded p-0.5 text-ink-soft hover:bg-panel hover:text-ink" aria-label={`Copy the full ${label}`}>
+      <button
+        type="button"
+        onClick={copy}
+        className="rounded p-0.5 text-ink-soft hover:bg-panel hover:text-ink"
+        aria-label={`Copy the full ${label}`}
+      >
         <Copy aria-hidden="true" className="h-3.5 w-3.5" />
       </button>
       {copied && (

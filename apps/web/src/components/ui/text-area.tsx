@@ -7,10 +7,15 @@ interface Props extends TextareaHTMLAttributes<HTMLTextAreaElement> {
 }
 
 /** A labelled multi-line input whose error is announced and tied to the field. */
-export const TextArea = forwardRef<HTMLTextAreaElement, Props>(function TextArea({ label, error, hint, id, rows = 3, ...props }, ref) {
+export const TextArea = forwardRef<HTMLTextAreaElement, Props>(function TextArea(
+  { label, error, hint, id, rows = 3, ...props },
+  ref,
+) {
   const auto = useId();
   const inputId = id ?? auto;
-  const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null].filter(Boolean).join(" ") || undefined;
+  const describedBy =
+    [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null].filter(Boolean).join(" ") ||
+    undefined;
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={inputId} className="text-sm font-medium">

@@ -7,7 +7,10 @@ interface Props extends InputHTMLAttributes<HTMLInputElement> {
 }
 
 /** A labelled input whose error is announced and tied to the field. */
-export const TextField = forwardRef<HTMLInputElement, Props>(function TextField({ label, error, hint, id, ...props }, ref) {
+export const TextField = forwardRef<HTMLInputElement, Props>(function TextField(
+  { label, error, hint, id, ...props },
+  ref,
+) {
   const auto = useId();
   const inputId = id ?? auto;
   const describedBy = error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined;

@@ -25,7 +25,11 @@ export const ACTION_LABELS: Record<string, string> = {
 };
 
 /** Actions a reviewer should notice at a glance. */
-export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set(["analysis.override", "auth.sign-in-failed", "mail.failed"]);
+export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set([
+  "analysis.override",
+  "auth.sign-in-failed",
+  "mail.failed",
+]);
 
 export function actionLabel(action: string): string {
   return ACTION_LABELS[action] ?? action;

@@ -7,7 +7,13 @@ export interface AuditFilters {
   to: string;
 }
 
-export const FILTER_KEYS = ["studyId", "actor", "action", "from", "to"] as const satisfies readonly (keyof AuditFilters)[];
+export const FILTER_KEYS = [
+  "studyId",
+  "actor",
+  "action",
+  "from",
+  "to",
+] as const satisfies readonly (keyof AuditFilters)[];
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 

@@ -2,14 +2,38 @@ import type { Role } from "@/lib/roles";
 
 /** The steps every study walks through, and who carries each one. */
 export const TRAIL: { step: string; owner: Role; what: string }[] = [
-  { step: "Design questions", owner: "analyst", what: "Independent groups? Continuous or ordinal outcome? A control group?" },
-  { step: "Plan and sample size", owner: "analyst", what: "Test policy, post-hoc method, α and n per group, locked before data." },
-  { step: "Data", owner: "analyst", what: "Upload a versioned CSV or XLSX and see what was read and excluded." },
+  {
+    step: "Design questions",
+    owner: "analyst",
+    what: "Independent groups? Continuous or ordinal outcome? A control group?",
+  },
+  {
+    step: "Plan and sample size",
+    owner: "analyst",
+    what: "Test policy, post-hoc method, α and n per group, locked before data.",
+  },
+  {
+    step: "Data",
+    owner: "analyst",
+    what: "Upload a versioned CSV or XLSX and see what was read and excluded.",
+  },
   { step: "Checks", owner: "analyst", what: "Normality, spread and outliers, each with a plain reading." },
-  { step: "Test choice", owner: "analyst", what: "Classic ANOVA, Welch's ANOVA or Kruskal–Wallis, with the reasons." },
+  {
+    step: "Test choice",
+    owner: "analyst",
+    what: "Classic ANOVA, Welch's ANOVA or Kruskal–Wallis, with the reasons.",
+  },
   { step: "Results", owner: "analyst", what: "Omnibus test, matched post-hoc comparisons and effect sizes." },
-  { step: "Review and sign-off", owner: "reviewer", what: "A senior reviewer approves with an electronic signature or asks for changes." },
-  { step: "Report", owner: "writer", what: "A methods-and-results section as a DOCX, from the approved record." },
+  {
+    step: "Review and sign-off",
+    owner: "reviewer",
+    what: "A senior reviewer approves with an electronic signature or asks for changes.",
+  },
+  {
+    step: "Report",
+    owner: "writer",
+    what: "A methods-and-results section as a DOCX, from the approved record.",
+  },
 ];
 
 export const ROLE_GUIDES: Record<Role, { title: string; summary: string; duties: string[] }> = {

@@ -22,7 +22,11 @@ function blockText(b: Block): string {
     case "paragraph":
       return b.runs.map((r) => clean(r.text)).join("");
     case "table":
-      return [clean(b.caption), b.header.map(cleanCell).join("\t"), ...b.rows.map((r) => r.map(cleanCell).join("\t"))].join("\n");
+      return [
+        clean(b.caption),
+        b.header.map(cleanCell).join("\t"),
+        ...b.rows.map((r) => r.map(cleanCell).join("\t")),
+      ].join("\n");
     case "figure":
       return clean(b.caption);
     case "caution":
@@ -45,5 +49,8 @@ export function methodsText(blocks: Block[]): string | null {
     if (b.type === "heading" && b.level <= level) break;
     part.push(b);
   }
-  return part.map(blockText).filter((t) => t.trim().length > 0).join("\n\n");
+  return part
+    .map(blockText)
+    .filter((t) => t.trim().length > 0)
+    .join("\n\n");
 }

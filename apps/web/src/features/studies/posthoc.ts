@@ -1,4 +1,14 @@
-import { isAvailable, isUnavailable, num, reasonOf, type AnalysisResult, type ComparisonSet, type GroupDescription, type PairRow, type TestId } from "./types";
+import {
+  isAvailable,
+  isUnavailable,
+  num,
+  reasonOf,
+  type AnalysisResult,
+  type ComparisonSet,
+  type GroupDescription,
+  type PairRow,
+  type TestId,
+} from "./types";
 
 export interface PairView {
   a: string;
@@ -42,8 +52,13 @@ function groupSd(g: GroupDescription | undefined): number | null {
  * methods, ÷ √((s_a² + s_b²)/2) for Games–Howell and Welch t; common practice) or r = z/√N for
  * Dunn's test (Rosenthal 1991). Returns the reason when the comparisons are not available.
  */
-export function posthocView(test: TestId, comparisons: ComparisonSet, r: AnalysisResult): PosthocView | { unavailable: string } {
-  if (!isAvailable(r.posthoc)) return { unavailable: reasonOf(r.posthoc, "The post-hoc comparisons are missing.") };
+export function posthocView(
+  test: TestId,
+  comparisons: ComparisonSet,
+  r: AnalysisResult,
+): PosthocView | { unavailable: string } {
+  if (!isAvailable(r.posthoc))
+    return { unavailable: reasonOf(r.posthoc, "The post-hoc comparisons are missing.") };
   const key = keyFor(test, comparisons);
   let raw = (r.posthoc as Record<string, unknown>)[key];
   if (key === "control" && raw && typeof raw === "object" && !Array.isArray(raw) && !isUnavailable(raw)) {
@@ -62,8 +77,14 @@ export function posthocView(test: TestId, comparisons: ComparisonSet, r: Analysi
   const rank = test === "kruskal-wallis";
   const separate = test === "welch";
 
-  const gOf = (row: PairRow) => (typeof row.hedgesG === "number" ? num(row.hedgesG) : isAvailable(row.hedgesG) && row.hedgesG ? num(row.hedgesG.g) : null);
-  const rbOf = (row: PairRow) => (isAvailable(row.rankBiserial) && row.rankBiserial ? num(row.rankBiserial.r) : null);
+  const gOf = (row: PairRow) =>
+    typeof row.hedgesG === "number"
+      ? num(row.hedgesG)
+      : isAvailable(row.hedgesG) && row.hedgesG
+        ? num(row.hedgesG.g)
+        : null;
+  const rbOf = (row: PairRow) =>
+    isAvailable(row.rankBiserial) && row.rankBiserial ? num(row.rankBiserial.r) : null;
   // One kind of effect size per table: the engine's whenever it sent one for any pair.
   const usedG = !rank && rows.some((row) => row.hedgesG !== undefined);
   const usedRankBiserial = rank && rows.some((row) => row.rankBiserial !== undefined);

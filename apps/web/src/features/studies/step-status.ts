@@ -75,20 +75,45 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
   const analysisStale = !!(analysis && dataset && analysis.datasetId !== dataset.id);
 
   const design: StepStatus = outOfScope
-    ? { key: "design", label: STEP_LABELS.design, state: "open", fact: "Out of scope: matched or repeated measurements", attention: true }
+    ? {
+        key: "design",
+        label: STEP_LABELS.design,
+        state: "open",
+        fact: "Out of scope: matched or repeated measurements",
+        attention: true,
+      }
     : designDone
       ? { key: "design", label: STEP_LABELS.design, state: "done", fact: designFact(study) }
-      : { key: "design", label: STEP_LABELS.design, state: "open", fact: `${answered} of ${DESIGN_KEYS.length} answered` };
+      : {
+          key: "design",
+          label: STEP_LABELS.design,
+          state: "open",
+          fact: `${answered} of ${DESIGN_KEYS.length} answered`,
+        };
 
   const plan: StepStatus = !designDone
-    ? { key: "plan", label: STEP_LABELS.plan, state: planLocked ? "done" : "locked", fact: planLocked ? `Plan locked ${short(study.plan.lockedAt)}` : "Opens when the design questions are answered" }
+    ? {
+        key: "plan",
+        label: STEP_LABELS.plan,
+        state: planLocked ? "done" : "locked",
+        fact: planLocked
+          ? `Plan locked ${short(study.plan.lockedAt)}`
+          : "Opens when the design questions are answered",
+      }
     : planLocked
-      ? { key: "plan", label: STEP_LABELS.plan, state: "done", fact: `Plan locked ${short(study.plan.lockedAt)}` }
+      ? {
+          key: "plan",
+          label: STEP_LABELS.plan,
+          state: "done",
+          fact: `Plan locked ${short(study.plan.lockedAt)}`,
+        }
       : {
           key: "plan",
           label: STEP_LABELS.plan,
           state: "open",
-          fact: study.plan.power ? `${testTitle(study.plan.plannedTest)}, n = ${study.plan.power.nPerGroup} per group, not locked` : `${testTitle(study.plan.plannedTest)} planned, not locked`,
+          fact: study.plan.power
+            ? `${testTitle(study.plan.plannedTest)}, n = ${study.plan.power.nPerGroup} per group, not locked`
+            : `${testTitle(study.plan.plannedTest)} planned, not locked`,
         };
 
   const data: StepStatus = !planLocked
@@ -97,29 +122,73 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
       ? { key: "data", label: STEP_LABELS.data, state: "done", fact: dataFact(study) }
       : { key: "data", label: STEP_LABELS.data, state: "open", fact: "No data uploaded yet" };
 
-  const checks: StepStatus = !planLocked || !dataset
-    ? { key: "checks", label: STEP_LABELS.checks, state: "locked", fact: "Opens when data are uploaded" }
-    : { key: "checks", label: STEP_LABELS.checks, state: hasAnalysis && !analysisStale ? "done" : "open", fact: `Checks on data version ${dataset.version}` };
+  const checks: StepStatus =
+    !planLocked || !dataset
+      ? { key: "checks", label: STEP_LABELS.checks, state: "locked", fact: "Opens when data are uploaded" }
+      : {
+          key: "checks",
+          label: STEP_LABELS.checks,
+          state: hasAnalysis && !analysisStale ? "done" : "open",
+          fact: `Checks on data version ${dataset.version}`,
+        };
 
   let choice: StepStatus;
-  if (!planLocked || !dataset) choice = { key: "choice", label: STEP_LABELS.choice, state: "locked", fact: "Opens when data are uploaded" };
-  else if (!hasAnalysis) choice = { key: "choice", label: STEP_LABELS.choice, state: "open", fact: "Recommendation ready, not yet run" };
-  else if (analysisStale) choice = { key: "choice", label: STEP_LABELS.choice, state: "open", fact: `New data version ${dataset.version} not yet analysed`, attention: true };
+  if (!planLocked || !dataset)
+    choice = {
+      key: "choice",
+      label: STEP_LABELS.choice,
+      state: "locked",
+      fact: "Opens when data are uploaded",
+    };
+  else if (!hasAnalysis)
+    choice = {
+      key: "choice",
+      label: STEP_LABELS.choice,
+      state: "open",
+      fact: "Recommendation ready, not yet run",
+    };
+  else if (analysisStale)
+    choice = {
+      key: "choice",
+      label: STEP_LABELS.choice,
+      state: "open",
+      fact: `New data version ${dataset.version} not yet analysed`,
+      attention: true,
+    };
   else if (analysis?.override)
-    choice = { key: "choice", label: STEP_LABELS.choice, state: "done", fact: `${testTitle(analysis.chosenTest)}, override flagged for the reviewer`, attention: true };
+    choice = {
+      key: "choice",
+      label: STEP_LABELS.choice,
+      state: "done",
+      fact: `${testTitle(analysis.chosenTest)}, override flagged for the reviewer`,
+      attention: true,
+    };
   else if (analysis)
-    choice = { key: "choice", label: STEP_LABELS.choice, state: "done", fact: `${testTitle(analysis.chosenTest)}, reason: ${shortReason(isAvailable(analysis.result.recommendation) ? analysis.result.recommendation : null)}` };
+    choice = {
+      key: "choice",
+      label: STEP_LABELS.choice,
+      state: "done",
+      fact: `${testTitle(analysis.chosenTest)}, reason: ${shortReason(isAvailable(analysis.result.recommendation) ? analysis.result.recommendation : null)}`,
+    };
   else choice = { key: "choice", label: STEP_LABELS.choice, state: "done", fact: "Test chosen and run" };
 
   let results: StepStatus;
-  if (!hasAnalysis) results = { key: "results", label: STEP_LABELS.results, state: "locked", fact: "Opens when the analysis has run" };
+  if (!hasAnalysis)
+    results = {
+      key: "results",
+      label: STEP_LABELS.results,
+      state: "locked",
+      fact: "Opens when the analysis has run",
+    };
   else {
     const line = analysis ? omnibusShort(analysis) : null;
     results = {
       key: "results",
       label: STEP_LABELS.results,
       state: "done",
-      fact: analysis ? `${line ?? testTitle(analysis.chosenTest)}${analysis.datasetVersion !== null ? ` (data v${analysis.datasetVersion})` : ""}` : "Analysis ready",
+      fact: analysis
+        ? `${line ?? testTitle(analysis.chosenTest)}${analysis.datasetVersion !== null ? ` (data v${analysis.datasetVersion})` : ""}`
+        : "Analysis ready",
     };
   }
 
@@ -145,5 +214,11 @@ function dataFact(study: Study): string {
 
 /** The first step with work to do, for "continue" links; the results once everything is done. */
 export function currentStep(steps: StepStatus[]): StudyStepSegment {
-  return (steps.find((s) => s.state === "open") ?? [...steps].reverse().find((s) => s.state === "done") ?? steps[0])?.key ?? "design";
+  return (
+    (
+      steps.find((s) => s.state === "open") ??
+      [...steps].reverse().find((s) => s.state === "done") ??
+      steps[0]
+    )?.key ?? "design"
+  );
 }

@@ -109,7 +109,12 @@ export type Layout = "long" | "wide";
 export interface ValidationReport {
   rowsRead: number;
   rowsUsed: number;
-  excluded: { row: number; reason: "missing" | "non-numeric" | "missing-group" | "unknown-level" | string; value: string | number | null; column?: string }[];
+  excluded: {
+    row: number;
+    reason: "missing" | "non-numeric" | "missing-group" | "unknown-level" | string;
+    value: string | number | null;
+    column?: string;
+  }[];
   /** All exclusions; the list above may be capped for very large files. */
   excludedCount?: number;
   /** Whether the data can be analysed (at least two groups of two values). */
@@ -271,7 +276,17 @@ export interface PosthocPart {
   gamesHowell?: Maybe<PairRow[]>;
   dunn?: Maybe<PairRow[]>;
   /** Comparisons with the control, one family per omnibus test. */
-  control?: Maybe<PairRow[] | { control?: string; dunnett?: Maybe<PairRow[]>; welchHolm?: Maybe<PairRow[]>; dunn?: Maybe<PairRow[]>; comparisons?: PairRow[]; rows?: PairRow[] }>;
+  control?: Maybe<
+    | PairRow[]
+    | {
+        control?: string;
+        dunnett?: Maybe<PairRow[]>;
+        welchHolm?: Maybe<PairRow[]>;
+        dunn?: Maybe<PairRow[]>;
+        comparisons?: PairRow[];
+        rows?: PairRow[];
+      }
+  >;
   [method: string]: unknown;
 }
 

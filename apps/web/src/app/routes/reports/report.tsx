@@ -6,7 +6,8 @@ import { ReportPage } from "@/features/reports/components/report-page";
 export function ReportRoute() {
   const { studyId } = useParams();
   const id = Number(studyId);
-  if (!Number.isInteger(id) || id <= 0) return <ErrorPanel title="No such study" message="The address does not name a study." />;
+  if (!Number.isInteger(id) || id <= 0)
+    return <ErrorPanel title="No such study" message="The address does not name a study." />;
   return (
     <div className="flex flex-col gap-4">
       <p className="text-sm">

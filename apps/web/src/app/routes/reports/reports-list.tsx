@@ -10,7 +10,9 @@ export function ReportsListRoute() {
     <div className="flex flex-col gap-5">
       <header>
         <h1 className="text-3xl font-semibold text-spruce">Reports</h1>
-        <p className="mt-1 max-w-prose text-ink-soft">Approved studies, each with its methods-and-results section ready to read, copy or download.</p>
+        <p className="mt-1 max-w-prose text-ink-soft">
+          Approved studies, each with its methods-and-results section ready to read, copy or download.
+        </p>
       </header>
       <div className="flex flex-col gap-1">
         <label htmlFor="reports-filter" className="text-sm font-medium">
@@ -25,7 +27,9 @@ export function ReportsListRoute() {
         />
       </div>
       {studies.isPending && <p className="text-ink-soft">Loading the approved studies…</p>}
-      {studies.error && <ErrorPanel title="The studies could not be loaded" message={studies.error.message} />}
+      {studies.error && (
+        <ErrorPanel title="The studies could not be loaded" message={studies.error.message} />
+      )}
       {studies.data && <ApprovedStudiesTable studies={studies.data} filter={filter} />}
     </div>
   );

@@ -49,7 +49,11 @@ export function ReviewStudyRoute() {
   const steps = [
     { id: "design", title: "Design" },
     { id: "plan", title: "Plan", flag: s.plan.lockedAt ? undefined : "Not locked" },
-    { id: "data", title: "Data", flag: s.latestDataset && !s.latestDataset.afterPlanLock ? "Before plan lock" : undefined },
+    {
+      id: "data",
+      title: "Data",
+      flag: s.latestDataset && !s.latestDataset.afterPlanLock ? "Before plan lock" : undefined,
+    },
     { id: "checks", title: "Checks", flag: attention ? `${attention} to look at` : undefined },
     { id: "choice", title: "Test choice", flag: overridden ? "Override" : undefined },
     { id: "results", title: "Results" },
@@ -86,7 +90,8 @@ export function ReviewStudyRoute() {
         <div className="flex min-w-0 flex-col gap-5">
           <ReviewSection id="design" number={1} title="Design">
             <p className="mb-3 text-sm">
-              {s.outcomeName} compared across {s.levels.length} groups of {s.factorName.toLowerCase()}: {s.levels.join(", ")}.
+              {s.outcomeName} compared across {s.levels.length} groups of {s.factorName.toLowerCase()}:{" "}
+              {s.levels.join(", ")}.
             </p>
             <DesignSummary study={s} />
           </ReviewSection>
@@ -97,8 +102,12 @@ export function ReviewStudyRoute() {
             <DataFacts study={s} analysis={a} />
           </ReviewSection>
           <ReviewSection id="checks" number={4} title="Assumption checks" flag={steps[3]!.flag}>
-            {checks.isPending && datasetId ? <p className="text-sm text-ink-soft">Loading the checks…</p> : null}
-            {checks.error && <ErrorPanel title="The checks could not be loaded" message={checks.error.message} />}
+            {checks.isPending && datasetId ? (
+              <p className="text-sm text-ink-soft">Loading the checks…</p>
+            ) : null}
+            {checks.error && (
+              <ErrorPanel title="The checks could not be loaded" message={checks.error.message} />
+            )}
             {checks.data && <CheckReadings readings={readings} />}
             {!datasetId && <p className="text-sm text-ink-soft">There are no data to check.</p>}
             <p className="mt-3 text-sm">
@@ -106,8 +115,12 @@ export function ReviewStudyRoute() {
             </p>
           </ReviewSection>
           <ReviewSection id="choice" number={5} title="Test choice" flag={steps[4]!.flag}>
-            {analysis.isPending && analysisId ? <p className="text-sm text-ink-soft">Loading the analysis…</p> : null}
-            {analysis.error && <ErrorPanel title="The analysis could not be loaded" message={analysis.error.message} />}
+            {analysis.isPending && analysisId ? (
+              <p className="text-sm text-ink-soft">Loading the analysis…</p>
+            ) : null}
+            {analysis.error && (
+              <ErrorPanel title="The analysis could not be loaded" message={analysis.error.message} />
+            )}
             {!analysisId && <p className="text-sm text-ink-soft">No analysis has been run.</p>}
             {a && (
               <div className="flex flex-col gap-4">
@@ -117,7 +130,11 @@ export function ReviewStudyRoute() {
             )}
           </ReviewSection>
           <ReviewSection id="results" number={6} title="Results">
-            {a ? <ResultsPanel study={s} analysis={a} /> : <p className="text-sm text-ink-soft">No results yet.</p>}
+            {a ? (
+              <ResultsPanel study={s} analysis={a} />
+            ) : (
+              <p className="text-sm text-ink-soft">No results yet.</p>
+            )}
           </ReviewSection>
           <ReviewSection id="history" number={7} title="History">
             <HistoryTimeline studyId={s.id} />

@@ -12,7 +12,8 @@ export function NewStudyRoute() {
     <div>
       <h1 className="text-3xl font-semibold text-spruce">Start a study</h1>
       <p className="mb-6 mt-1 max-w-prose text-ink-soft">
-        Say what is measured and across which groups. The design questions and the plan come next, all before any data are uploaded.
+        Say what is measured and across which groups. The design questions and the plan come next, all before
+        any data are uploaded.
       </p>
       <CreateStudyForm onCreated={(s) => navigate(studyPath(s.id, "design"))} />
     </div>

@@ -18,9 +18,14 @@ export function StudyChoiceRoute() {
   const rec = checks.data?.checks.recommendation;
   return (
     <div className="flex flex-col gap-5">
-      <StepHeading title="Test choice" intro="The test the plan and the checks point to, with the reasons. Another test can be chosen only with a written reason." />
+      <StepHeading
+        title="Test choice"
+        intro="The test the plan and the checks point to, with the reasons. Another test can be chosen only with a written reason."
+      />
       {checks.isPending && <p className="text-ink-soft">Loading the recommendation…</p>}
-      {checks.error && <ErrorPanel title="The recommendation could not be loaded" message={checks.error.message} />}
+      {checks.error && (
+        <ErrorPanel title="The recommendation could not be loaded" message={checks.error.message} />
+      )}
       {checks.data && !isAvailable(rec) && <UnavailableNote what="The recommendation" value={rec} />}
       {isAvailable(rec) && rec.test === "out-of-scope" && <OutOfScopeStop reason={rec.reasons[0]} />}
       {isAvailable(rec) && rec.test !== "out-of-scope" && ds && (
@@ -28,11 +33,19 @@ export function StudyChoiceRoute() {
           <RecommendationCard rec={rec} plannedTest={study.plan.plannedTest} />
           {latestAnalysis && latestAnalysis.datasetId === ds.id && (
             <p className="text-sm text-ink-soft">
-              This data version was analysed with {latestAnalysis.chosenTest === rec.test ? "the recommended test" : "another test"}; running again adds a new analysis.
+              This data version was analysed with{" "}
+              {latestAnalysis.chosenTest === rec.test ? "the recommended test" : "another test"}; running
+              again adds a new analysis.
             </p>
           )}
           {canEdit && (
-            <RunAnalysisForm studyId={study.id} datasetId={ds.id} datasetVersion={ds.version} recommended={rec.test} onDone={() => navigate(studyPath(study.id, "results"))} />
+            <RunAnalysisForm
+              studyId={study.id}
+              datasetId={ds.id}
+              datasetVersion={ds.version}
+              recommended={rec.test}
+              onDone={() => navigate(studyPath(study.id, "results"))}
+            />
           )}
         </>
       )}

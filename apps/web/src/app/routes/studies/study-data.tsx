@@ -11,7 +11,10 @@ export function StudyDataRoute() {
   const datasets = useDatasets(study.id);
   return (
     <div className="flex flex-col gap-6">
-      <StepHeading title="Data" intro="Upload the measurements as CSV or XLSX. Every upload is kept as a new version with its fingerprint; the latest one is analysed." />
+      <StepHeading
+        title="Data"
+        intro="Upload the measurements as CSV or XLSX. Every upload is kept as a new version with its fingerprint; the latest one is analysed."
+      />
       {canEdit && <DataUpload study={study} />}
       {study.latestDataset && (
         <div>
@@ -20,8 +23,12 @@ export function StudyDataRoute() {
         </div>
       )}
       <section aria-labelledby="versions-title">
-        <h3 id="versions-title" className="mb-2 font-semibold">Versions</h3>
-        {datasets.error && <ErrorPanel title="The versions could not be loaded" message={datasets.error.message} />}
+        <h3 id="versions-title" className="mb-2 font-semibold">
+          Versions
+        </h3>
+        {datasets.error && (
+          <ErrorPanel title="The versions could not be loaded" message={datasets.error.message} />
+        )}
         {datasets.data && <DatasetVersions datasets={datasets.data} />}
       </section>
     </div>

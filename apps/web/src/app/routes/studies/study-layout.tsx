@@ -21,16 +21,21 @@ export function StudyLayoutRoute() {
   const latest = useAnalysis(id, study.data?.latestAnalysisId);
   const location = useLocation();
 
-  if (!Number.isInteger(id) || id <= 0) return <ErrorPanel title="No such study" message="The address does not name a study." />;
+  if (!Number.isInteger(id) || id <= 0)
+    return <ErrorPanel title="No such study" message="The address does not name a study." />;
   if (study.isPending) return <p className="text-ink-soft">Loading the study…</p>;
   if (study.error) return <ErrorPanel title="The study could not be loaded" message={study.error.message} />;
 
   const s = study.data;
   const latestAnalysis = latest.data ?? null;
   const steps = studySteps(s, latestAnalysis);
-  const canEdit = !!me.data && can(me.data.role, "studies:create") && me.data.id === s.owner.id && s.status === "draft";
+  const canEdit =
+    !!me.data && can(me.data.role, "studies:create") && me.data.id === s.owner.id && s.status === "draft";
   const segment = location.pathname.split("/")[3] as StudyStepSegment | undefined;
-  const step = segment && (STUDY_STEP_SEGMENTS as readonly string[]).includes(segment) ? steps.find((x) => x.key === segment) : undefined;
+  const step =
+    segment && (STUDY_STEP_SEGMENTS as readonly string[]).includes(segment)
+      ? steps.find((x) => x.key === segment)
+      : undefined;
   const context: StudyOutletContext = { study: s, steps, canEdit, latestAnalysis };
 
   return (
@@ -41,7 +46,11 @@ export function StudyLayoutRoute() {
       <div className="mb-6 mt-1 flex flex-wrap items-center gap-3">
         <h1 className="text-3xl font-semibold text-spruce">{s.title}</h1>
         <LifecycleBadge status={s.status} />
-        {s.context !== "general" && <span className="rounded-full bg-brick-100 px-2.5 py-0.5 text-xs font-semibold text-brick">{CONTEXT_LABELS[s.context]}</span>}
+        {s.context !== "general" && (
+          <span className="rounded-full bg-brick-100 px-2.5 py-0.5 text-xs font-semibold text-brick">
+            {CONTEXT_LABELS[s.context]}
+          </span>
+        )}
         <PlanLockedNote plan={s.plan} />
         {!canEdit && <span className="text-sm text-ink-soft">Read-only</span>}
       </div>

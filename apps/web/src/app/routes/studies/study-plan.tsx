@@ -14,17 +14,27 @@ export function StudyPlanRoute() {
     <div className="flex flex-col gap-6">
       <StepHeading
         title="Plan and sample size"
-        intro={locked ? "The plan is locked: these are the rules the analysis follows." : "Fix the rules of the analysis before seeing the data: the test policy, the comparisons, α and the sample size."}
+        intro={
+          locked
+            ? "The plan is locked: these are the rules the analysis follows."
+            : "Fix the rules of the analysis before seeing the data: the test policy, the comparisons, α and the sample size."
+        }
       />
       <PlannedMethods study={study} />
       {editable && (
         <section aria-labelledby="plan-rules" className="rounded-lg bg-paper p-5 shadow-sm">
-          <h3 id="plan-rules" className="mb-3 font-semibold">Rules of the analysis</h3>
+          <h3 id="plan-rules" className="mb-3 font-semibold">
+            Rules of the analysis
+          </h3>
           <PlanForm study={study} />
         </section>
       )}
       <PowerCalculator study={study} editable={editable} />
-      <FamilyWisePanel k={study.levels.length} alpha={study.plan.alpha} comparisons={study.plan.comparisons} />
+      <FamilyWisePanel
+        k={study.levels.length}
+        alpha={study.plan.alpha}
+        comparisons={study.plan.comparisons}
+      />
       {editable && <LockPlanPanel study={study} />}
     </div>
   );

@@ -14,14 +14,21 @@ export function StudyResultsRoute() {
   return (
     <div className="flex flex-col gap-8">
       <div>
-        <StepHeading title="Results" intro="What the test found, in words first and then in numbers, with the effect sizes beside the p-values." />
+        <StepHeading
+          title="Results"
+          intro="What the test found, in words first and then in numbers, with the effect sizes beside the p-values."
+        />
         {analysis.isPending && <p className="text-ink-soft">Loading the results…</p>}
-        {analysis.error && <ErrorPanel title="The results could not be loaded" message={analysis.error.message} />}
+        {analysis.error && (
+          <ErrorPanel title="The results could not be loaded" message={analysis.error.message} />
+        )}
         {analysis.data && <ResultsPanel study={study} analysis={analysis.data} />}
       </div>
       {analysis.data && owner && (
         <div className="flex flex-col gap-3">
-          {(canEdit || study.status === "in_review" || study.status === "approved") && <SubmitPanel study={study} analysisId={analysis.data.id} />}
+          {(canEdit || study.status === "in_review" || study.status === "approved") && (
+            <SubmitPanel study={study} analysisId={analysis.data.id} />
+          )}
           <DraftReportLink studyId={study.id} />
         </div>
       )}

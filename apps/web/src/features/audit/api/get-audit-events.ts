@@ -21,7 +21,11 @@ export function getAuditEvents(filters: AuditFilters): Promise<AuditEvent[]> {
 }
 
 export const auditEventsQueryOptions = (filters: AuditFilters) =>
-  queryOptions({ queryKey: ["audit", filters], queryFn: () => getAuditEvents(filters), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: ["audit", filters],
+    queryFn: () => getAuditEvents(filters),
+    placeholderData: keepPreviousData,
+  });
 
 export function useAuditEvents(filters: AuditFilters) {
   return useQuery(auditEventsQueryOptions(filters));

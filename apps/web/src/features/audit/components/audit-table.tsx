@@ -27,13 +27,17 @@ function Changes({ e }: { e: AuditEvent }) {
         {before && (
           <div>
             <p className="font-semibold">Before</p>
-            <pre className="num max-w-xs overflow-x-auto whitespace-pre-wrap rounded bg-stone p-2">{before}</pre>
+            <pre className="num max-w-xs overflow-x-auto whitespace-pre-wrap rounded bg-stone p-2">
+              {before}
+            </pre>
           </div>
         )}
         {after && (
           <div>
             <p className="font-semibold">After</p>
-            <pre className="num max-w-xs overflow-x-auto whitespace-pre-wrap rounded bg-stone p-2">{after}</pre>
+            <pre className="num max-w-xs overflow-x-auto whitespace-pre-wrap rounded bg-stone p-2">
+              {after}
+            </pre>
           </div>
         )}
       </div>
@@ -43,7 +47,11 @@ function Changes({ e }: { e: AuditEvent }) {
 
 const h = columnHelper<AuditEvent>();
 const columns = h.columns([
-  h.accessor((e) => timeOf(e.at), { id: "at", header: "When", cell: (c) => <span className="num whitespace-nowrap">{formatDateTime(c.row.original.at)}</span> }),
+  h.accessor((e) => timeOf(e.at), {
+    id: "at",
+    header: "When",
+    cell: (c) => <span className="num whitespace-nowrap">{formatDateTime(c.row.original.at)}</span>,
+  }),
   h.accessor((e) => e.actorEmail ?? "system", { id: "actor", header: "Person", sortFn: "text" }),
   h.accessor((e) => actionLabel(e.action), {
     id: "action",
@@ -51,7 +59,11 @@ const columns = h.columns([
     sortFn: "text",
     cell: (c) => {
       const e = c.row.original;
-      return FLAGGED_ACTIONS.has(e.action) ? <AttentionMarker>{actionLabel(e.action)}</AttentionMarker> : <span>{actionLabel(e.action)}</span>;
+      return FLAGGED_ACTIONS.has(e.action) ? (
+        <AttentionMarker>{actionLabel(e.action)}</AttentionMarker>
+      ) : (
+        <span>{actionLabel(e.action)}</span>
+      );
     },
   }),
   h.accessor((e) => e.studyId ?? 0, {
@@ -69,8 +81,17 @@ const columns = h.columns([
       );
     },
   }),
-  h.accessor("summary", { header: "What happened", enableSorting: false, cell: (c) => <span className="break-words">{c.row.original.summary}</span> }),
-  h.accessor((e) => e.ip ?? "", { id: "ip", header: "From address", enableSorting: false, cell: (c) => <span className="num text-xs">{c.row.original.ip ?? "—"}</span> }),
+  h.accessor("summary", {
+    header: "What happened",
+    enableSorting: false,
+    cell: (c) => <span className="break-words">{c.row.original.summary}</span>,
+  }),
+  h.accessor((e) => e.ip ?? "", {
+    id: "ip",
+    header: "From address",
+    enableSorting: false,
+    cell: (c) => <span className="num text-xs">{c.row.original.ip ?? "—"}</span>,
+  }),
   h.display({ id: "changes", header: "Changes", cell: (c) => <Changes e={c.row.original} /> }),
 ]);
 

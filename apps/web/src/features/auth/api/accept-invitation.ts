@@ -7,15 +7,27 @@ export const MIN_PASSWORD_LENGTH = 12;
 
 export const acceptInvitationSchema = z
   .object({
-    displayName: z.string().trim().min(2, "Enter your name as colleagues know it").max(120, "Use at most 120 characters"),
-    password: z.string().min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters`).max(200, "Use at most 200 characters"),
+    displayName: z
+      .string()
+      .trim()
+      .min(2, "Enter your name as colleagues know it")
+      .max(120, "Use at most 120 characters"),
+    password: z
+      .string()
+      .min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters`)
+      .max(200, "Use at most 200 characters"),
     confirm: z.string(),
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
 export type AcceptInvitationInput = z.infer<typeof acceptInvitationSchema>;
 
-export function acceptInvitation(token: string, input: { displayName: string; password: string }): Promise<User> {
-  return api.post<{ user: User }>(`/invitations/${encodeURIComponent(token)}/accept`, input).then((r) => r.user);
+export function acceptInvitation(
+  token: string,
+  input: { displayName: string; password: string },
+): Promise<User> {
+  return api
+    .post<{ user: User }>(`/invitations/${encodeURIComponent(token)}/accept`, input)
+    .then((r) => r.user);
 }
 
 /** Creates the invited account; the server signs the browser in, so the signed-in user is set. */

@@ -10,11 +10,17 @@ export interface InvitationDetails {
 
 /** What an invitation link is for; 404 and 410 come back as ApiErrors with the reason in words. */
 export function getInvitation(token: string): Promise<InvitationDetails> {
-  return api.get<{ invitation: InvitationDetails }>(`/invitations/${encodeURIComponent(token)}`).then((r) => r.invitation);
+  return api
+    .get<{ invitation: InvitationDetails }>(`/invitations/${encodeURIComponent(token)}`)
+    .then((r) => r.invitation);
 }
 
 export const invitationQueryOptions = (token: string) =>
-  queryOptions({ queryKey: ["invitations", "token", token], queryFn: () => getInvitation(token), staleTime: Infinity });
+  queryOptions({
+    queryKey: ["invitations", "token", token],
+    queryFn: () => getInvitation(token),
+    staleTime: Infinity,
+  });
 
 export function useInvitation(token: string) {
   return useQuery(invitationQueryOptions(token));

@@ -9,7 +9,12 @@ import { ApiError } from "@/lib/api-client";
 import { fieldError } from "@/lib/field-error";
 import { formatDateTime } from "@/lib/format";
 import { ROLE_LABELS } from "@/lib/roles";
-import { acceptInvitationSchema, MIN_PASSWORD_LENGTH, useAcceptInvitation, type AcceptInvitationInput } from "../api/accept-invitation";
+import {
+  acceptInvitationSchema,
+  MIN_PASSWORD_LENGTH,
+  useAcceptInvitation,
+  type AcceptInvitationInput,
+} from "../api/accept-invitation";
 import { useInvitation, type InvitationDetails } from "../api/get-invitation";
 
 const GONE_TITLES: Record<string, string> = {
@@ -39,7 +44,15 @@ function InvitationGone({ error }: { error: ApiError }) {
   );
 }
 
-function AcceptForm({ token, invitation, onAccepted }: { token: string; invitation: InvitationDetails; onAccepted: () => void }) {
+function AcceptForm({
+  token,
+  invitation,
+  onAccepted,
+}: {
+  token: string;
+  invitation: InvitationDetails;
+  onAccepted: () => void;
+}) {
   const accept = useAcceptInvitation(token);
   const [refusal, setRefusal] = useState<ApiError | Error | null>(null);
   if (refusal instanceof ApiError && refusal.status === 410) return <InvitationGone error={refusal} />;
@@ -47,13 +60,17 @@ function AcceptForm({ token, invitation, onAccepted }: { token: string; invitati
     <div className="rounded-lg border border-ink/10 bg-paper p-6 shadow-sm">
       <h1 className="text-2xl font-semibold text-spruce">Join Waymark</h1>
       <p className="mt-2">
-        You were invited as <span className="font-semibold">{ROLE_LABELS[invitation.role] ?? invitation.role}</span> with the address{" "}
+        You were invited as{" "}
+        <span className="font-semibold">{ROLE_LABELS[invitation.role] ?? invitation.role}</span> with the
+        address{" "}
         <span className="font-semibold" data-testid="invited-email">
           {invitation.email}
         </span>
         .
       </p>
-      <p className="mt-1 text-sm text-ink-soft">The link works until {formatDateTime(invitation.expiresAt)}.</p>
+      <p className="mt-1 text-sm text-ink-soft">
+        The link works until {formatDateTime(invitation.expiresAt)}.
+      </p>
       <Form<AcceptInvitationInput>
         schema={acceptInvitationSchema}
         defaultValues={{ displayName: "", password: "", confirm: "" }}
@@ -66,14 +83,21 @@ function AcceptForm({ token, invitation, onAccepted }: { token: string; invitati
             onAccepted();
           } catch (e) {
             const f = fieldError(e);
-            if (f && (f.field === "password" || f.field === "displayName")) form.setError(f.field, { message: f.message });
+            if (f && (f.field === "password" || f.field === "displayName"))
+              form.setError(f.field, { message: f.message });
             else setRefusal(e instanceof Error ? e : new Error("The account was not created."));
           }
         }}
       >
         {(form) => (
           <>
-            <TextField label="Your name" autoComplete="name" hint="As colleagues know you; it appears on your signatures." error={form.formState.errors.displayName?.message} {...form.register("displayName")} />
+            <TextField
+              label="Your name"
+              autoComplete="name"
+              hint="As colleagues know you; it appears on your signatures."
+              error={form.formState.errors.displayName?.message}
+              {...form.register("displayName")}
+            />
             <TextField
               label="Password"
               type="password"
@@ -82,7 +106,13 @@ function AcceptForm({ token, invitation, onAccepted }: { token: string; invitati
               error={form.formState.errors.password?.message}
               {...form.register("password")}
             />
-            <TextField label="Password again" type="password" autoComplete="new-password" error={form.formState.errors.confirm?.message} {...form.register("confirm")} />
+            <TextField
+              label="Password again"
+              type="password"
+              autoComplete="new-password"
+              error={form.formState.errors.confirm?.message}
+              {...form.register("confirm")}
+            />
             {refusal && <ErrorPanel title="The account was not created" message={refusal.message} />}
             <Button type="submit" disabled={form.formState.isSubmitting}>
               {form.formState.isSubmitting ? "Creating your account…" : "Create account and sign in"}

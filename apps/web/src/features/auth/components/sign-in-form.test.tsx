@@ -17,8 +17,13 @@ describe("SignInForm", () => {
   });
 
   it("shows the server's message when the password is wrong", async () => {
-    const body = { error: { code: "invalid_credentials", message: "That e-mail and password do not match an account." } };
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify(body), { status: 401 })));
+    const body = {
+      error: { code: "invalid_credentials", message: "That e-mail and password do not match an account." },
+    };
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response(JSON.stringify(body), { status: 401 })),
+    );
     const onSignedIn = vi.fn();
     renderWithProviders(<SignInForm onSignedIn={onSignedIn} />);
     fireEvent.input(screen.getByLabelText("E-mail"), { target: { value: "analyst@waymark.test" } });
@@ -29,8 +34,17 @@ describe("SignInForm", () => {
   });
 
   it("calls onSignedIn after a successful sign-in", async () => {
-    const user = { id: 1, email: "analyst@waymark.test", displayName: "Ada Okafor", role: "analyst", active: true };
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ user }), { status: 200 })));
+    const user = {
+      id: 1,
+      email: "analyst@waymark.test",
+      displayName: "Ada Okafor",
+      role: "analyst",
+      active: true,
+    };
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response(JSON.stringify({ user }), { status: 200 })),
+    );
     const onSignedIn = vi.fn();
     renderWithProviders(<SignInForm onSignedIn={onSignedIn} />);
     fireEvent.input(screen.getByLabelText("E-mail"), { target: { value: user.email } });

@@ -17,8 +17,20 @@ export function SignInForm({ onSignedIn, prefillEmail }: { onSignedIn: () => voi
     >
       {({ register, formState }) => (
         <>
-          <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register("email")} />
-          <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register("password")} />
+          <TextField
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            error={formState.errors.email?.message}
+            {...register("email")}
+          />
+          <TextField
+            label="Password"
+            type="password"
+            autoComplete="current-password"
+            error={formState.errors.password?.message}
+            {...register("password")}
+          />
           {login.error && <ErrorPanel title="Could not sign in" message={login.error.message} />}
           <Button type="submit" disabled={login.isPending}>
             {login.isPending ? "Signing in…" : "Sign in"}

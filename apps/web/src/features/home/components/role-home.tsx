@@ -33,7 +33,9 @@ export function RoleHome({ user }: { user: User }) {
             const mine = t.owner === user.role;
             return (
               <li key={t.step} className="relative flex gap-3 pb-4 last:pb-0">
-                {i < TRAIL.length - 1 && <span aria-hidden="true" className="absolute left-[11px] top-6 h-full w-0.5 bg-ink/15" />}
+                {i < TRAIL.length - 1 && (
+                  <span aria-hidden="true" className="absolute left-[11px] top-6 h-full w-0.5 bg-ink/15" />
+                )}
                 <span
                   aria-hidden="true"
                   className={`relative z-10 mt-0.5 flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-xs font-semibold ${mine ? "bg-spruce text-stone" : "bg-paper text-ink-soft ring-1 ring-ink/20"}`}

@@ -16,7 +16,12 @@ export function getDevMail(): Promise<MailMessage[]> {
 }
 
 /** The messages the local fake mail server caught, newest first; refreshed every few seconds. */
-export const devMailQueryOptions = queryOptions({ queryKey: ["dev", "mail"], queryFn: getDevMail, refetchInterval: 5000, staleTime: 0 });
+export const devMailQueryOptions = queryOptions({
+  queryKey: ["dev", "mail"],
+  queryFn: getDevMail,
+  refetchInterval: 5000,
+  staleTime: 0,
+});
 
 export function useDevMail() {
   return useQuery(devMailQueryOptions);

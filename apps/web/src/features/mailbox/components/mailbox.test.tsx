@@ -17,11 +17,16 @@ const MESSAGE = {
 
 describe("Mailbox", () => {
   it("lists messages, opens one with clickable links, and keeps the HTML in a sandbox", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ messages: [MESSAGE] }), { status: 200 })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response(JSON.stringify({ messages: [MESSAGE] }), { status: 200 })),
+    );
     renderWithProviders(<Mailbox />);
     fireEvent.click(await screen.findByRole("button", { name: /invited you as reviewer/ }));
     const text = screen.getByTestId("mail-text");
-    expect(within(text).getByRole("link", { name: "http://localhost:3100/invite/tok_123" }).getAttribute("href")).toBe("http://localhost:3100/invite/tok_123");
+    expect(
+      within(text).getByRole("link", { name: "http://localhost:3100/invite/tok_123" }).getAttribute("href"),
+    ).toBe("http://localhost:3100/invite/tok_123");
     expect(text.textContent).toContain("<b>not bold</b>");
     fireEvent.click(screen.getByRole("button", { name: "Formatted (HTML)" }));
     const frame = screen.getByTitle("The message as HTML");
@@ -30,7 +35,15 @@ describe("Mailbox", () => {
   });
 
   it("explains that the mailbox is off outside demo mode", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ error: { code: "not_found", message: "No such route" } }), { status: 404 })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(
+        async () =>
+          new Response(JSON.stringify({ error: { code: "not_found", message: "No such route" } }), {
+            status: 404,
+          }),
+      ),
+    );
     renderWithProviders(<Mailbox />);
     expect(await screen.findByText("The mailbox is off")).toBeTruthy();
   });

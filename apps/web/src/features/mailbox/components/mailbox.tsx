@@ -8,7 +8,11 @@ import { LinkedText } from "./linked-text";
 function MessageView({ message }: { message: MailMessage }) {
   const [view, setView] = useState<"text" | "html">("text");
   return (
-    <article aria-labelledby="message-subject" className="flex min-w-0 flex-col gap-3 rounded-lg bg-paper p-5 shadow-sm" data-testid="mail-message">
+    <article
+      aria-labelledby="message-subject"
+      className="flex min-w-0 flex-col gap-3 rounded-lg bg-paper p-5 shadow-sm"
+      data-testid="mail-message"
+    >
       <header>
         <h2 id="message-subject" className="text-lg font-semibold">
           {message.subject}
@@ -36,12 +40,20 @@ function MessageView({ message }: { message: MailMessage }) {
         ))}
       </div>
       {view === "text" ? (
-        <pre className="whitespace-pre-wrap break-words rounded-md bg-stone p-4 font-sans text-sm" data-testid="mail-text">
+        <pre
+          className="whitespace-pre-wrap break-words rounded-md bg-stone p-4 font-sans text-sm"
+          data-testid="mail-text"
+        >
           <LinkedText text={message.text} />
         </pre>
       ) : (
         // The HTML comes from outside the app: shown only inside a sandbox with no rights at all.
-        <iframe title="The message as HTML" sandbox="" srcDoc={message.html} className="h-96 w-full rounded-md border border-ink/15 bg-white" />
+        <iframe
+          title="The message as HTML"
+          sandbox=""
+          srcDoc={message.html}
+          className="h-96 w-full rounded-md border border-ink/15 bg-white"
+        />
       )}
     </article>
   );
@@ -55,14 +67,22 @@ export function Mailbox() {
   if (mail.error) {
     const off = mail.error instanceof ApiError && mail.error.status === 404;
     return off ? (
-      <ErrorPanel title="The mailbox is off" message="The development mailbox exists only when Waymark runs in demo or development mode. Real e-mail goes to real inboxes." />
+      <ErrorPanel
+        title="The mailbox is off"
+        message="The development mailbox exists only when Waymark runs in demo or development mode. Real e-mail goes to real inboxes."
+      />
     ) : (
       <ErrorPanel title="The mailbox could not be loaded" message={mail.error.message} />
     );
   }
   const messages = mail.data;
   const open = messages.find((m) => m.id === openId) ?? null;
-  if (messages.length === 0) return <p className="rounded-lg bg-paper p-5 text-ink-soft shadow-sm">No e-mail has been sent yet. Invitations and review notices appear here within seconds.</p>;
+  if (messages.length === 0)
+    return (
+      <p className="rounded-lg bg-paper p-5 text-ink-soft shadow-sm">
+        No e-mail has been sent yet. Invitations and review notices appear here within seconds.
+      </p>
+    );
   return (
     <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
       <ul className="flex flex-col gap-1 self-start rounded-lg bg-panel p-2" aria-label="Messages">
@@ -81,7 +101,11 @@ export function Mailbox() {
           </li>
         ))}
       </ul>
-      {open ? <MessageView message={open} /> : <p className="rounded-lg bg-paper p-5 text-ink-soft shadow-sm">Choose a message to read it.</p>}
+      {open ? (
+        <MessageView message={open} />
+      ) : (
+        <p className="rounded-lg bg-paper p-5 text-ink-soft shadow-sm">Choose a message to read it.</p>
+      )}
     </div>
   );
 }

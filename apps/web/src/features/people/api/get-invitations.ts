@@ -7,7 +7,10 @@ export function getInvitations(): Promise<Invitation[]> {
   return api.get<{ invitations: Invitation[] }>("/invitations").then((r) => r.invitations);
 }
 
-export const invitationsQueryOptions = queryOptions({ queryKey: peopleKeys.invitations, queryFn: getInvitations });
+export const invitationsQueryOptions = queryOptions({
+  queryKey: peopleKeys.invitations,
+  queryFn: getInvitations,
+});
 
 export function useInvitations() {
   return useQuery(invitationsQueryOptions);

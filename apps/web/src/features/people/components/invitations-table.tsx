@@ -19,12 +19,26 @@ const columns = h.columns([
     sortFn: "text",
     cell: (c) => {
       const s = STATE[c.row.original.state] ?? { label: c.row.original.state, className: "bg-panel" };
-      return <span className={`rounded-sm px-1.5 py-0.5 text-xs font-semibold ${s.className}`}>{s.label}</span>;
+      return (
+        <span className={`rounded-sm px-1.5 py-0.5 text-xs font-semibold ${s.className}`}>{s.label}</span>
+      );
     },
   }),
-  h.accessor((i) => i.invitedBy?.displayName ?? "—", { id: "invitedBy", header: "Invited by", sortFn: "text" }),
-  h.accessor((i) => timeOf(i.createdAt), { id: "sent", header: "Sent", cell: (c) => <span className="num">{formatDateTime(c.row.original.createdAt)}</span> }),
-  h.accessor((i) => timeOf(i.expiresAt), { id: "expires", header: "Link expires", cell: (c) => <span className="num">{formatDateTime(c.row.original.expiresAt)}</span> }),
+  h.accessor((i) => i.invitedBy?.displayName ?? "—", {
+    id: "invitedBy",
+    header: "Invited by",
+    sortFn: "text",
+  }),
+  h.accessor((i) => timeOf(i.createdAt), {
+    id: "sent",
+    header: "Sent",
+    cell: (c) => <span className="num">{formatDateTime(c.row.original.createdAt)}</span>,
+  }),
+  h.accessor((i) => timeOf(i.expiresAt), {
+    id: "expires",
+    header: "Link expires",
+    cell: (c) => <span className="num">{formatDateTime(c.row.original.expiresAt)}</span>,
+  }),
 ]);
 
 export function InvitationsTable({ invitations }: { invitations: Invitation[] }) {

@@ -25,7 +25,9 @@ export function InviteForm() {
         setRefusal(null);
         try {
           const inv = await invite.mutateAsync(values);
-          setSent(`Invitation sent to ${inv.email} as ${ROLE_LABELS[inv.role] ?? inv.role}. The link works once and lasts 72 hours.`);
+          setSent(
+            `Invitation sent to ${inv.email} as ${ROLE_LABELS[inv.role] ?? inv.role}. The link works once and lasts 72 hours.`,
+          );
           form.reset({ email: "", role: values.role });
         } catch (e) {
           setRefusal(e instanceof Error ? e.message : "The invitation was not sent.");
@@ -35,8 +37,19 @@ export function InviteForm() {
       {(form) => (
         <>
           <div className="grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-start">
-            <TextField label="E-mail" type="email" autoComplete="off" error={form.formState.errors.email?.message} {...form.register("email")} />
-            <SelectField label="Role" options={ROLE_OPTIONS} error={form.formState.errors.role?.message} {...form.register("role")} />
+            <TextField
+              label="E-mail"
+              type="email"
+              autoComplete="off"
+              error={form.formState.errors.email?.message}
+              {...form.register("email")}
+            />
+            <SelectField
+              label="Role"
+              options={ROLE_OPTIONS}
+              error={form.formState.errors.role?.message}
+              {...form.register("role")}
+            />
             <Button type="submit" className="sm:mt-6" disabled={form.formState.isSubmitting}>
               {form.formState.isSubmitting ? "Sending…" : "Send invitation"}
             </Button>

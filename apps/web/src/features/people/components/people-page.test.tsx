@@ -6,8 +6,24 @@ import { PeoplePage } from "./people-page";
 afterEach(() => vi.unstubAllGlobals());
 
 const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status });
-const ADMIN = { id: 4, email: "admin@waymark.test", displayName: "Amal Reyes", role: "admin", active: true, lastSignInAt: "2025-12-09T08:00:00Z", createdAt: "2025-12-01T08:00:00Z" };
-const ANALYST = { id: 1, email: "analyst@waymark.test", displayName: "Ada Okafor", role: "analyst", active: true, lastSignInAt: null, createdAt: "2025-12-01T08:00:00Z" };
+const ADMIN = {
+  id: 4,
+  email: "admin@waymark.test",
+  displayName: "Amal Reyes",
+  role: "admin",
+  active: true,
+  lastSignInAt: "2025-12-09T08:00:00Z",
+  createdAt: "2025-12-01T08:00:00Z",
+};
+const ANALYST = {
+  id: 1,
+  email: "analyst@waymark.test",
+  displayName: "Ada Okafor",
+  role: "analyst",
+  active: true,
+  lastSignInAt: null,
+  createdAt: "2025-12-01T08:00:00Z",
+};
 const LAST_ADMIN = "This is the last active admin; make someone else an admin first.";
 
 function server() {
@@ -17,9 +33,26 @@ function server() {
     calls.push({ method, url, body: init?.body ? JSON.parse(String(init.body)) : undefined });
     if (url === "/api/users" && method === "GET") return json({ users: [ADMIN, ANALYST] });
     if (url === "/api/invitations" && method === "GET")
-      return json({ invitations: [{ id: 9, email: "new@waymark.test", role: "reviewer", state: "expired", createdAt: "2025-12-01T08:00:00Z", expiresAt: "2025-12-04T08:00:00Z", invitedBy: { id: 4, displayName: "Amal Reyes" } }] });
-    if (url === "/api/users/4" && method === "PATCH") return json({ error: { code: "conflict", message: LAST_ADMIN } }, 409);
-    if (url === "/api/invitations" && method === "POST") return json({ error: { code: "conflict", message: "analyst@waymark.test already has an account." } }, 409);
+      return json({
+        invitations: [
+          {
+            id: 9,
+            email: "new@waymark.test",
+            role: "reviewer",
+            state: "expired",
+            createdAt: "2025-12-01T08:00:00Z",
+            expiresAt: "2025-12-04T08:00:00Z",
+            invitedBy: { id: 4, displayName: "Amal Reyes" },
+          },
+        ],
+      });
+    if (url === "/api/users/4" && method === "PATCH")
+      return json({ error: { code: "conflict", message: LAST_ADMIN } }, 409);
+    if (url === "/api/invitations" && method === "POST")
+      return json(
+        { error: { code: "conflict", message: "analyst@waymark.test already has an account." } },
+        409,
+      );
     return json({ error: { code: "not_found", message: "no" } }, 404);
   });
   vi.stubGlobal("fetch", fetchMock);
@@ -43,7 +76,11 @@ describe("PeoplePage", () => {
     expect(calls.some((c) => c.method === "PATCH")).toBe(false);
     fireEvent.click(screen.getByRole("button", { name: "Yes, deactivate" }));
     expect(await screen.findByText(LAST_ADMIN)).toBeTruthy();
-    expect(calls.find((c) => c.method === "PATCH")).toEqual({ method: "PATCH", url: "/api/users/4", body: { active: false } });
+    expect(calls.find((c) => c.method === "PATCH")).toEqual({
+      method: "PATCH",
+      url: "/api/users/4",
+      body: { active: false },
+    });
   });
 
   it("shows the last-admin message when the role change is refused", async () => {
@@ -51,7 +88,9 @@ describe("PeoplePage", () => {
     renderWithProviders(<PeoplePage />);
     fireEvent.change(await screen.findByLabelText("Role of Amal Reyes"), { target: { value: "reviewer" } });
     expect(await screen.findByText(LAST_ADMIN)).toBeTruthy();
-    await waitFor(() => expect((screen.getByLabelText("Role of Amal Reyes") as HTMLSelectElement).value).toBe("admin"));
+    await waitFor(() =>
+      expect((screen.getByLabelText("Role of Amal Reyes") as HTMLSelectElement).value).toBe("admin"),
+    );
   });
 
   it("shows why an invitation was not sent", async () => {

@@ -14,7 +14,8 @@ export function PeoplePage() {
       <header>
         <h1 className="text-3xl font-semibold text-spruce">People</h1>
         <p className="mt-1 max-w-prose text-ink-soft">
-          Who can sign in, and in which role. A role change or deactivation signs the person out, so they never keep rights they no longer have.
+          Who can sign in, and in which role. A role change or deactivation signs the person out, so they
+          never keep rights they no longer have.
         </p>
       </header>
       <section aria-labelledby="accounts-title" className="flex flex-col gap-3">
@@ -38,7 +39,9 @@ export function PeoplePage() {
           Invitations
         </h2>
         {invitations.isPending && <p className="text-ink-soft">Loading the invitations…</p>}
-        {invitations.error && <ErrorPanel title="The invitations could not be loaded" message={invitations.error.message} />}
+        {invitations.error && (
+          <ErrorPanel title="The invitations could not be loaded" message={invitations.error.message} />
+        )}
         {invitations.data && <InvitationsTable invitations={invitations.data} />}
       </section>
     </div>

@@ -20,7 +20,8 @@ function Problem({ error }: { error: Error | null }) {
 /** The role drop-down of one account; a refusal (such as the last admin) is shown beneath it. */
 function RoleCell({ user }: { user: Account }) {
   const update = useUpdateUser(user.id);
-  const shown = update.isPending && update.variables && "role" in update.variables ? update.variables.role : user.role;
+  const shown =
+    update.isPending && update.variables && "role" in update.variables ? update.variables.role : user.role;
   return (
     <div>
       <label htmlFor={`role-${user.id}`} className="sr-only">
@@ -53,7 +54,11 @@ function ActiveCell({ user }: { user: Account }) {
   return (
     <div>
       {confirming ? (
-        <div className="flex flex-col gap-2 rounded-md bg-stone p-2" role="group" aria-label={`Confirm: ${verb.toLowerCase()} ${user.displayName}`}>
+        <div
+          className="flex flex-col gap-2 rounded-md bg-stone p-2"
+          role="group"
+          aria-label={`Confirm: ${verb.toLowerCase()} ${user.displayName}`}
+        >
           <p className="text-sm">
             {next
               ? `${user.displayName} will be able to sign in again.`
@@ -93,7 +98,11 @@ function ActiveCell({ user }: { user: Account }) {
 
 const h = columnHelper<Account>();
 const columns = h.columns([
-  h.accessor("displayName", { header: "Name", sortFn: "text", cell: (c) => <span className="font-medium">{c.row.original.displayName}</span> }),
+  h.accessor("displayName", {
+    header: "Name",
+    sortFn: "text",
+    cell: (c) => <span className="font-medium">{c.row.original.displayName}</span>,
+  }),
   h.accessor("email", { header: "E-mail", sortFn: "text" }),
   h.accessor("role", { header: "Role", sortFn: "text", cell: (c) => <RoleCell user={c.row.original} /> }),
   h.accessor((u) => (u.active ? "Active" : "Deactivated"), {
@@ -104,15 +113,26 @@ const columns = h.columns([
       c.row.original.active ? (
         <span className="text-spruce">Active</span>
       ) : (
-        <span className="rounded-sm bg-panel px-1.5 py-0.5 text-xs font-semibold text-ink-soft">Deactivated</span>
+        <span className="rounded-sm bg-panel px-1.5 py-0.5 text-xs font-semibold text-ink-soft">
+          Deactivated
+        </span>
       ),
   }),
   h.accessor((u) => timeOf(u.lastSignInAt), {
     id: "lastSignIn",
     header: "Last sign-in",
-    cell: (c) => (c.row.original.lastSignInAt ? <span className="num">{formatDateTime(c.row.original.lastSignInAt)}</span> : <span className="text-ink-soft">Never</span>),
+    cell: (c) =>
+      c.row.original.lastSignInAt ? (
+        <span className="num">{formatDateTime(c.row.original.lastSignInAt)}</span>
+      ) : (
+        <span className="text-ink-soft">Never</span>
+      ),
   }),
-  h.display({ id: "actions", header: () => <span className="sr-only">Actions</span>, cell: (c) => <ActiveCell user={c.row.original} /> }),
+  h.display({
+    id: "actions",
+    header: () => <span className="sr-only">Actions</span>,
+    cell: (c) => <ActiveCell user={c.row.original} />,
+  }),
 ]);
 
 export function UsersTable({ users }: { users: Account[] }) {

@@ -8,7 +8,10 @@ export function getReportPreview(studyId: number, draft = false): Promise<Report
 }
 
 export const reportPreviewQueryOptions = (studyId: number, draft = false) =>
-  queryOptions({ queryKey: reportKeys.preview(studyId, draft), queryFn: () => getReportPreview(studyId, draft) });
+  queryOptions({
+    queryKey: reportKeys.preview(studyId, draft),
+    queryFn: () => getReportPreview(studyId, draft),
+  });
 
 export function useReportPreview(studyId: number, draft = false) {
   return useQuery(reportPreviewQueryOptions(studyId, draft));

@@ -17,8 +17,17 @@ const columns = h.columns([
   }),
   h.accessor((s) => s.owner?.displayName ?? "—", { id: "analyst", header: "Analyst", sortFn: "text" }),
   h.accessor("outcomeName", { header: "Outcome", sortFn: "text" }),
-  h.accessor((s) => (Array.isArray(s.levels) ? s.levels.length : 0), { id: "groups", header: "Groups", meta: { align: "right" }, cell: (c) => <span className="num">{c.getValue()}</span> }),
-  h.accessor((s) => timeOf(s.updatedAt), { id: "updated", header: "Last changed", cell: (c) => <span className="num">{formatDate(c.row.original.updatedAt)}</span> }),
+  h.accessor((s) => (Array.isArray(s.levels) ? s.levels.length : 0), {
+    id: "groups",
+    header: "Groups",
+    meta: { align: "right" },
+    cell: (c) => <span className="num">{c.getValue()}</span>,
+  }),
+  h.accessor((s) => timeOf(s.updatedAt), {
+    id: "updated",
+    header: "Last changed",
+    cell: (c) => <span className="num">{formatDate(c.row.original.updatedAt)}</span>,
+  }),
 ]);
 
 export function ApprovedStudiesTable({ studies, filter }: { studies: ApprovedStudy[]; filter: string }) {
@@ -32,7 +41,9 @@ export function ApprovedStudiesTable({ studies, filter }: { studies: ApprovedStu
       initialSorting={[{ id: "updated", desc: true }]}
       filter={filter}
       searchColumns={["title", "analyst", "outcomeName"]}
-      empty={studies.length === 0 ? "No study has been approved yet." : "No approved study matches the filter."}
+      empty={
+        studies.length === 0 ? "No study has been approved yet." : "No approved study matches the filter."
+      }
     />
   );
 }

@@ -23,7 +23,11 @@ export function CopyMethodsButton({ blocks }: { blocks: Block[] }) {
         <ClipboardCopy aria-hidden="true" className="h-4 w-4" /> Copy methods as plain text
       </Button>
       <span role="status" className="text-sm">
-        {state === "copied" ? "Copied." : state === "failed" ? "The browser did not allow copying; select the text instead." : ""}
+        {state === "copied"
+          ? "Copied."
+          : state === "failed"
+            ? "The browser did not allow copying; select the text instead."
+            : ""}
       </span>
     </span>
   );

@@ -13,18 +13,41 @@ afterEach(() => {
 });
 
 // A 1×1 PNG.
-const PNG = "data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==";
+const PNG =
+  "data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==";
 
 const BLOCKS: Block[] = [
   { type: "heading", level: 1, text: "Fertiliser trial" },
   { type: "heading", level: 2, text: "Methods" },
   { type: "heading", level: 3, text: "Choice of test" },
-  { type: "paragraph", runs: [{ text: "Welch's ANOVA was used; " }, { text: "F", italic: true }, { text: " is reported with " }, { text: "undefined", bold: true }, { text: " decimals." }] },
+  {
+    type: "paragraph",
+    runs: [
+      { text: "Welch's ANOVA was used; " },
+      { text: "F", italic: true },
+      { text: " is reported with " },
+      { text: "undefined", bold: true },
+      { text: " decimals." },
+    ],
+  },
   { type: "heading", level: 2, text: "Results" },
-  { type: "table", caption: "Table 1. Descriptive statistics", header: ["Group", "n", "M", "SD"], rows: [["A", "12", "4.20", "NaN"], ["B", "11", "5.10", ""]] },
+  {
+    type: "table",
+    caption: "Table 1. Descriptive statistics",
+    header: ["Group", "n", "M", "SD"],
+    rows: [
+      ["A", "12", "4.20", "NaN"],
+      ["B", "11", "5.10", ""],
+    ],
+  },
   { type: "figure", caption: "Figure 1. Each group's values", image: PNG },
   { type: "caution", text: "The groups were not assigned at random; read differences as associations." },
-  { type: "references", items: ["Delacre, M., Leys, C., Mora, Y. L., & Lakens, D. (2019). Taking parametric assumptions seriously."] },
+  {
+    type: "references",
+    items: [
+      "Delacre, M., Leys, C., Mora, Y. L., & Lakens, D. (2019). Taking parametric assumptions seriously.",
+    ],
+  },
 ];
 
 describe("ReportBlocks", () => {
@@ -35,7 +58,11 @@ describe("ReportBlocks", () => {
     expect(screen.getByRole("heading", { level: 4, name: "Choice of test" })).toBeTruthy();
     expect(screen.getByText("F").tagName).toBe("EM");
     const table = screen.getByRole("table", { name: /Descriptive statistics/ });
-    expect(within(table).getAllByRole("columnheader").map((h) => h.textContent)).toEqual(["Group", "n", "M", "SD"]);
+    expect(
+      within(table)
+        .getAllByRole("columnheader")
+        .map((h) => h.textContent),
+    ).toEqual(["Group", "n", "M", "SD"]);
     expect(within(table).getAllByRole("row")).toHaveLength(3);
     const img = screen.getByRole("img", { name: "Figure 1. Each group's values" });
     expect(img.getAttribute("src")).toBe(PNG);
@@ -50,7 +77,9 @@ describe("ReportBlocks", () => {
   });
 
   it("does not load an image that is not an embedded PNG", () => {
-    renderWithProviders(<ReportBlocks blocks={[{ type: "figure", caption: "Figure 2", image: "https://example.org/x.png" }]} />);
+    renderWithProviders(
+      <ReportBlocks blocks={[{ type: "figure", caption: "Figure 2", image: "https://example.org/x.png" }]} />,
+    );
     expect(screen.queryByRole("img")).toBeNull();
     expect(screen.getByText("The figure is in the DOCX.")).toBeTruthy();
   });
@@ -80,7 +109,14 @@ describe("ReportPage", () => {
       "fetch",
       vi.fn(async (url: string) =>
         url.endsWith("/report/exports")
-          ? new Response(JSON.stringify({ exports: [{ id: 1, at: "2025-12-10T10:00:00Z", actorEmail: "writer@waymark.test", draft: false }] }), { status: 200 })
+          ? new Response(
+              JSON.stringify({
+                exports: [
+                  { id: 1, at: "2025-12-10T10:00:00Z", actorEmail: "writer@waymark.test", draft: false },
+                ],
+              }),
+              { status: 200 },
+            )
           : new Response(JSON.stringify({ report: { blocks: BLOCKS }, approved: true }), { status: 200 }),
       ),
     );
@@ -92,7 +128,12 @@ describe("ReportPage", () => {
 
   it("says the report is not ready before approval", async () => {
     const message = "The report is available once the study is approved. The study has not been approved.";
-    vi.stubGlobal("fetch", vi.fn(async () => new Response(JSON.stringify({ error: { code: "conflict", message } }), { status: 409 })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(
+        async () => new Response(JSON.stringify({ error: { code: "conflict", message } }), { status: 409 }),
+      ),
+    );
     renderWithProviders(<ReportPage studyId={5} />);
     expect(await screen.findByText("The report is not ready")).toBeTruthy();
     expect(screen.getByText(message)).toBeTruthy();

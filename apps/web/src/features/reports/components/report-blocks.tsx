@@ -22,7 +22,8 @@ function Runs({ runs }: { runs: Run[] }) {
 function Heading({ level, text }: { level: 1 | 2 | 3; text: string }) {
   // The page has its own title, so the report's levels sit one below it.
   if (level === 1) return <h2 className="text-2xl font-semibold text-ink">{clean(text)}</h2>;
-  if (level === 2) return <h3 className="mt-4 border-b border-ink/15 pb-1 text-xl font-semibold text-ink">{clean(text)}</h3>;
+  if (level === 2)
+    return <h3 className="mt-4 border-b border-ink/15 pb-1 text-xl font-semibold text-ink">{clean(text)}</h3>;
   return <h4 className="mt-2 text-base font-semibold text-ink">{clean(text)}</h4>;
 }
 
@@ -40,7 +41,10 @@ function BlockView({ block, index }: { block: Block; index: number }) {
       const id = `report-table-${index}`;
       // A column of numbers (after the first, which names the row) lines up on the right, header too.
       const numeric = block.header.map(
-        (_, c) => c > 0 && block.rows.length > 0 && block.rows.every((row) => cleanCell(row[c]) === "—" || NUMERIC.test(cleanCell(row[c]))),
+        (_, c) =>
+          c > 0 &&
+          block.rows.length > 0 &&
+          block.rows.every((row) => cleanCell(row[c]) === "—" || NUMERIC.test(cleanCell(row[c]))),
       );
       return (
         <div className="overflow-x-auto">
@@ -51,7 +55,11 @@ function BlockView({ block, index }: { block: Block; index: number }) {
             <thead>
               <tr className="border-y-2 border-ink/60">
                 {block.header.map((h, i) => (
-                  <th key={i} scope="col" className={`px-2 py-1.5 font-semibold ${numeric[i] ? "text-right" : "text-left"}`}>
+                  <th
+                    key={i}
+                    scope="col"
+                    className={`px-2 py-1.5 font-semibold ${numeric[i] ? "text-right" : "text-left"}`}
+                  >
                     {cleanCell(h)}
                   </th>
                 ))}
@@ -79,9 +87,15 @@ function BlockView({ block, index }: { block: Block; index: number }) {
       return (
         <figure className="flex flex-col gap-1">
           {block.image && IMAGE.test(block.image) ? (
-            <img src={block.image} alt={clean(block.caption)} className="max-w-full rounded border border-ink/10 bg-white" />
+            <img
+              src={block.image}
+              alt={clean(block.caption)}
+              className="max-w-full rounded border border-ink/10 bg-white"
+            />
           ) : (
-            <p className="rounded border border-dashed border-ink/30 p-4 text-sm text-ink-soft">The figure is in the DOCX.</p>
+            <p className="rounded border border-dashed border-ink/30 p-4 text-sm text-ink-soft">
+              The figure is in the DOCX.
+            </p>
           )}
           <figcaption className="text-sm text-ink-soft">{clean(block.caption)}</figcaption>
         </figure>
@@ -111,7 +125,11 @@ function BlockView({ block, index }: { block: Block; index: number }) {
 /** The report rendered from its blocks: the same content the DOCX carries, as plain text nodes. */
 export function ReportBlocks({ blocks }: { blocks: Block[] }) {
   return (
-    <article className="flex flex-col gap-3 rounded-lg bg-paper p-6 shadow-sm sm:p-10" data-testid="report-preview" aria-label="Report preview">
+    <article
+      className="flex flex-col gap-3 rounded-lg bg-paper p-6 shadow-sm sm:p-10"
+      data-testid="report-preview"
+      aria-label="Report preview"
+    >
       {blocks.map((b, i) => (
         <BlockView key={i} block={b} index={i} />
       ))}

@@ -15,7 +15,12 @@ export function ReportPage({ studyId }: { studyId: number }) {
   if (preview.isPending) return <p className="text-ink-soft">Building the report preview…</p>;
   if (preview.error) {
     const notYet = preview.error instanceof ApiError && preview.error.status === 409;
-    return <ErrorPanel title={notYet ? "The report is not ready" : "The report could not be loaded"} message={preview.error.message} />;
+    return (
+      <ErrorPanel
+        title={notYet ? "The report is not ready" : "The report could not be loaded"}
+        message={preview.error.message}
+      />
+    );
   }
   const blocks = Array.isArray(preview.data.report?.blocks) ? preview.data.report.blocks : [];
   const titleBlock = blocks.find((b) => b.type === "heading" && b.level === 1);
@@ -31,14 +36,18 @@ export function ReportPage({ studyId }: { studyId: number }) {
             <a
               href={reportDocxHref(studyId)}
               download
-              onClick={() => setTimeout(() => void qc.invalidateQueries({ queryKey: reportKeys.exports(studyId) }), 1500)}
+              onClick={() =>
+                setTimeout(() => void qc.invalidateQueries({ queryKey: reportKeys.exports(studyId) }), 1500)
+              }
               className="inline-flex items-center justify-center gap-2 rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline"
               aria-label={`Download DOCX${titleBlock && titleBlock.type === "heading" ? ` of ${titleBlock.text}` : ""}`}
             >
               <FileDown aria-hidden="true" className="h-4 w-4" /> Download DOCX
             </a>
           ) : (
-            <p className="rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">This is a draft; the DOCX of record is available once the study is approved.</p>
+            <p className="rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">
+              This is a draft; the DOCX of record is available once the study is approved.
+            </p>
           )}
           <CopyMethodsButton blocks={blocks} />
         </div>

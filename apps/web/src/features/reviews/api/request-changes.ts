@@ -10,7 +10,9 @@ export interface RequestChangesInput {
 }
 
 export function requestChanges(studyId: number, input: RequestChangesInput): Promise<ReviewStudy> {
-  return api.post<{ study: ReviewStudy }>(`/studies/${studyId}/request-changes`, { ...input }).then((r) => r.study);
+  return api
+    .post<{ study: ReviewStudy }>(`/studies/${studyId}/request-changes`, { ...input })
+    .then((r) => r.study);
 }
 
 /** Sends the study back to its analyst; the study, its history and the queue all change. */

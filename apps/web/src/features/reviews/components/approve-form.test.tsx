@@ -6,13 +6,16 @@ import { ApproveForm } from "./approve-form";
 
 afterEach(() => vi.unstubAllGlobals());
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
+const json = (body: unknown, status = 200) =>
+  new Response(JSON.stringify(body), { status, headers: { "content-type": "application/json" } });
 
 describe("ApproveForm", () => {
   it("offers a starting meaning and explains what signing records", () => {
     vi.stubGlobal("fetch", vi.fn());
     renderWithProviders(<ApproveForm studyId={7} signerName="Rui Takahashi" />);
-    expect((screen.getByLabelText("Meaning of your signature") as HTMLTextAreaElement).value).toBe(DEFAULT_MEANING);
+    expect((screen.getByLabelText("Meaning of your signature") as HTMLTextAreaElement).value).toBe(
+      DEFAULT_MEANING,
+    );
     const explainer = screen.getByTestId("signature-explainer").textContent ?? "";
     expect(explainer).toContain("Rui Takahashi");
     expect(explainer).toMatch(/name.*time.*meaning.*hash/s);
@@ -47,7 +50,10 @@ describe("ApproveForm", () => {
 
   it("shows a separation-of-duties refusal in place", async () => {
     const message = "You created this study, so someone else must review it (separation of duties).";
-    vi.stubGlobal("fetch", vi.fn(async () => json({ error: { code: "forbidden", message } }, 403)));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => json({ error: { code: "forbidden", message } }, 403)),
+    );
     renderWithProviders(<ApproveForm studyId={7} signerName="Rui Takahashi" />);
     fireEvent.input(screen.getByLabelText("Your password"), { target: { value: "right-one" } });
     fireEvent.click(screen.getByRole("button", { name: "Sign and approve" }));
@@ -56,7 +62,10 @@ describe("ApproveForm", () => {
   });
 
   it("calls onApproved after the signature is recorded", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => json({ study: { id: 7, status: "approved" } })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => json({ study: { id: 7, status: "approved" } })),
+    );
     const onApproved = vi.fn();
     renderWithProviders(<ApproveForm studyId={7} signerName="Rui Takahashi" onApproved={onApproved} />);
     fireEvent.input(screen.getByLabelText("Your password"), { target: { value: "right-one" } });

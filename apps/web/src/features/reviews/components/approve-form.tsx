@@ -5,14 +5,27 @@ import { Form } from "@/components/ui/form";
 import { TextArea } from "@/components/ui/text-area";
 import { TextField } from "@/components/ui/text-field";
 import { ApiError } from "@/lib/api-client";
-import { approveInputSchema, DEFAULT_MEANING, useApproveStudy, type ApproveInput } from "../api/approve-study";
+import {
+  approveInputSchema,
+  DEFAULT_MEANING,
+  useApproveStudy,
+  type ApproveInput,
+} from "../api/approve-study";
 
 /**
  * The electronic signature: the reviewer re-enters their password and states what the signature
  * means. A wrong password is shown under the password; any other refusal (for example separation
  * of duties) above the button, both in the server's words.
  */
-export function ApproveForm({ studyId, signerName, onApproved }: { studyId: number; signerName: string; onApproved?: () => void }) {
+export function ApproveForm({
+  studyId,
+  signerName,
+  onApproved,
+}: {
+  studyId: number;
+  signerName: string;
+  onApproved?: () => void;
+}) {
   const approve = useApproveStudy(studyId);
   const [refusal, setRefusal] = useState<string | null>(null);
   return (
@@ -41,9 +54,10 @@ export function ApproveForm({ studyId, signerName, onApproved }: { studyId: numb
           <div className="rounded-md bg-stone p-3 text-sm" data-testid="signature-explainer">
             <p className="font-semibold">What signing means</p>
             <p className="mt-1">
-              Your signature makes this analysis the approved analysis of record. Waymark records your name ({signerName}), the time, the meaning you
-              state below, and a SHA-256 hash of exactly what you approve: the plan, the data version and the analysis. If any of them changes later,
-              the approval no longer holds and the study must be reviewed again.
+              Your signature makes this analysis the approved analysis of record. Waymark records your name (
+              {signerName}), the time, the meaning you state below, and a SHA-256 hash of exactly what you
+              approve: the plan, the data version and the analysis. If any of them changes later, the approval
+              no longer holds and the study must be reviewed again.
             </p>
           </div>
           <TextArea

@@ -11,11 +11,15 @@ const TITLES: Record<string, string> = {
 
 /** One line per assumption check, the ones needing attention marked in amber with words. */
 export function CheckReadings({ readings }: { readings: CheckReading[] }) {
-  if (readings.length === 0) return <p className="text-sm text-ink-soft">No check readings were returned for these data.</p>;
+  if (readings.length === 0)
+    return <p className="text-sm text-ink-soft">No check readings were returned for these data.</p>;
   return (
     <ul className="flex flex-col gap-2" aria-label="Assumption checks" data-testid="check-readings">
       {readings.map((r) => (
-        <li key={r.key} className={`rounded-md p-3 text-sm ${r.level === "attention" ? "border-l-4 border-amber bg-amber-100/60" : "bg-stone"}`}>
+        <li
+          key={r.key}
+          className={`rounded-md p-3 text-sm ${r.level === "attention" ? "border-l-4 border-amber bg-amber-100/60" : "bg-stone"}`}
+        >
           <p className="flex flex-wrap items-center gap-2 font-semibold">
             {TITLES[r.key] ?? r.key}
             {r.level === "attention" ? (

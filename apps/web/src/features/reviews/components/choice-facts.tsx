@@ -13,11 +13,14 @@ export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
           <p className="flex flex-wrap items-center gap-2">
             <AttentionMarker>Override</AttentionMarker>
             <span className="font-semibold">
-              The analyst used {testLabel(analysis.chosenTest)} instead of the recommended {testLabel(analysis.recommendedTest)}.
+              The analyst used {testLabel(analysis.chosenTest)} instead of the recommended{" "}
+              {testLabel(analysis.recommendedTest)}.
             </span>
           </p>
           {analysis.override?.justification ? (
-            <blockquote className="mt-2 border-l-2 border-amber-800/40 pl-3 text-sm whitespace-pre-wrap">{analysis.override.justification}</blockquote>
+            <blockquote className="mt-2 border-l-2 border-amber-800/40 pl-3 text-sm whitespace-pre-wrap">
+              {analysis.override.justification}
+            </blockquote>
           ) : (
             <p className="mt-2 text-sm">No justification was recorded.</p>
           )}
@@ -36,7 +39,8 @@ export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
         <dt className="text-ink-soft">Run</dt>
         <dd>
           <span className="num">{formatDateTime(analysis.createdAt)}</span>
-          {analysis.createdBy ? ` by ${analysis.createdBy.displayName}` : ""} · engine {analysis.engineVersion}
+          {analysis.createdBy ? ` by ${analysis.createdBy.displayName}` : ""} · engine{" "}
+          {analysis.engineVersion}
           {analysis.datasetVersion !== null ? ` · data version ${analysis.datasetVersion}` : ""}
         </dd>
       </dl>

@@ -12,7 +12,15 @@ type Choice = "approve" | "changes";
  * Where the reviewer decides: approve with an electronic signature, or send the study back with
  * comments. Once decided it shows the outcome instead of the forms.
  */
-export function DecisionPanel({ study, history, me }: { study: ReviewStudy; history: StudyHistory | undefined; me: { id: number; displayName: string } }) {
+export function DecisionPanel({
+  study,
+  history,
+  me,
+}: {
+  study: ReviewStudy;
+  history: StudyHistory | undefined;
+  me: { id: number; displayName: string };
+}) {
   const [choice, setChoice] = useState<Choice>("approve");
   const [done, setDone] = useState<string | null>(null);
   const lastRound = history?.rounds.at(-1);
@@ -20,7 +28,11 @@ export function DecisionPanel({ study, history, me }: { study: ReviewStudy; hist
   if (study.status === "approved") {
     const sig = [...(history?.rounds ?? [])].reverse().find((r) => r.signature)?.signature;
     return (
-      <section aria-labelledby="decision-title" className="rounded-lg border-l-4 border-spruce bg-paper p-5 shadow-sm" data-testid="decision-panel">
+      <section
+        aria-labelledby="decision-title"
+        className="rounded-lg border-l-4 border-spruce bg-paper p-5 shadow-sm"
+        data-testid="decision-panel"
+      >
         <h2 id="decision-title" className="flex items-center gap-2 text-lg font-semibold text-spruce">
           <CheckCircle2 aria-hidden="true" className="h-5 w-5" /> Approved
         </h2>
@@ -44,7 +56,9 @@ export function DecisionPanel({ study, history, me }: { study: ReviewStudy; hist
           </dl>
         )}
         {history && !history.approvalValid && history.approvalNote && (
-          <p className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">{history.approvalNote}</p>
+          <p className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">
+            {history.approvalNote}
+          </p>
         )}
       </section>
     );
@@ -52,7 +66,11 @@ export function DecisionPanel({ study, history, me }: { study: ReviewStudy; hist
 
   if (study.status !== "in_review") {
     return (
-      <section aria-labelledby="decision-title" className="rounded-lg bg-paper p-5 shadow-sm" data-testid="decision-panel">
+      <section
+        aria-labelledby="decision-title"
+        className="rounded-lg bg-paper p-5 shadow-sm"
+        data-testid="decision-panel"
+      >
         <h2 id="decision-title" className="text-lg font-semibold">
           Not waiting for a decision
         </h2>
@@ -61,21 +79,34 @@ export function DecisionPanel({ study, history, me }: { study: ReviewStudy; hist
             {done}
           </p>
         ) : (
-          <p className="mt-1 text-sm">This study is a draft with its analyst. It comes back to the review queue when it is submitted again.</p>
+          <p className="mt-1 text-sm">
+            This study is a draft with its analyst. It comes back to the review queue when it is submitted
+            again.
+          </p>
         )}
       </section>
     );
   }
 
   return (
-    <section aria-labelledby="decision-title" className="rounded-lg bg-paper p-5 shadow-sm" data-testid="decision-panel">
+    <section
+      aria-labelledby="decision-title"
+      className="rounded-lg bg-paper p-5 shadow-sm"
+      data-testid="decision-panel"
+    >
       <h2 id="decision-title" className="text-lg font-semibold">
         Your decision{lastRound ? ` on round ${lastRound.round}` : ""}
       </h2>
       {study.owner?.id === me.id && (
-        <p className="mt-2 rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">You created this study, so another reviewer must decide on it.</p>
+        <p className="mt-2 rounded-md border-l-4 border-amber bg-amber-100 p-2 text-sm">
+          You created this study, so another reviewer must decide on it.
+        </p>
       )}
-      <div role="group" aria-label="Choose a decision" className="mt-3 grid max-w-md grid-cols-2 gap-1 rounded-md bg-stone p-1">
+      <div
+        role="group"
+        aria-label="Choose a decision"
+        className="mt-3 grid max-w-md grid-cols-2 gap-1 rounded-md bg-stone p-1"
+      >
         <button
           type="button"
           aria-pressed={choice === "approve"}
@@ -95,9 +126,16 @@ export function DecisionPanel({ study, history, me }: { study: ReviewStudy; hist
       </div>
       <div className="mt-4 max-w-2xl">
         {choice === "approve" ? (
-          <ApproveForm studyId={study.id} signerName={me.displayName} onApproved={() => setDone("Your signature was recorded and the study is approved.")} />
+          <ApproveForm
+            studyId={study.id}
+            signerName={me.displayName}
+            onApproved={() => setDone("Your signature was recorded and the study is approved.")}
+          />
         ) : (
-          <RequestChangesForm studyId={study.id} onSent={() => setDone("The study went back to its analyst with your comments.")} />
+          <RequestChangesForm
+            studyId={study.id}
+            onSent={() => setDone("The study went back to its analyst with your comments.")}
+          />
         )}
       </div>
     </section>

@@ -17,8 +17,18 @@ const HISTORY: StudyHistory = {
       decidedAt: "2025-12-02T09:00:00Z",
       decidedBy: person(2, "Rui Takahashi"),
       comments: [
-        { step: null, body: "Explain the override.", author: person(2, "Rui Takahashi"), createdAt: "2025-12-02T09:00:00Z" },
-        { step: "checks", body: "<b>Two</b> outliers are not discussed.", author: person(2, "Rui Takahashi"), createdAt: "2025-12-02T09:00:00Z" },
+        {
+          step: null,
+          body: "Explain the override.",
+          author: person(2, "Rui Takahashi"),
+          createdAt: "2025-12-02T09:00:00Z",
+        },
+        {
+          step: "checks",
+          body: "<b>Two</b> outliers are not discussed.",
+          author: person(2, "Rui Takahashi"),
+          createdAt: "2025-12-02T09:00:00Z",
+        },
       ],
       signature: null,
     },
@@ -30,18 +40,35 @@ const HISTORY: StudyHistory = {
       decidedAt: "2025-12-04T09:00:00Z",
       decidedBy: person(2, "Rui Takahashi"),
       comments: [],
-      signature: { signerName: "Rui Takahashi", signedAt: "2025-12-04T09:00:00Z", meaning: "Approved as the analysis of record", contentHash: HASH },
+      signature: {
+        signerName: "Rui Takahashi",
+        signedAt: "2025-12-04T09:00:00Z",
+        meaning: "Approved as the analysis of record",
+        contentHash: HASH,
+      },
     },
   ],
   approvalValid: false,
   approvalNote: "What was approved has changed since it was signed, so the approval no longer holds.",
-  events: [{ id: 1, at: "2025-12-01T09:00:00Z", actorEmail: "analyst@waymark.test", action: "study.submitted", summary: "Submitted for review (round 1, analysis 3)" }],
+  events: [
+    {
+      id: 1,
+      at: "2025-12-01T09:00:00Z",
+      actorEmail: "analyst@waymark.test",
+      action: "study.submitted",
+      summary: "Submitted for review (round 1, analysis 3)",
+    },
+  ],
 };
 
 describe("HistoryTimelineView", () => {
   it("shows rounds, decisions, step comments as text, and the signature with a shortened hash", () => {
     renderWithProviders(<HistoryTimelineView history={HISTORY} />);
-    expect(within(screen.getByRole("list", { name: "Review rounds" })).getAllByRole("heading").map((h) => h.textContent)).toEqual(["Round 1", "Round 2"]);
+    expect(
+      within(screen.getByRole("list", { name: "Review rounds" }))
+        .getAllByRole("heading")
+        .map((h) => h.textContent),
+    ).toEqual(["Round 1", "Round 2"]);
     expect(screen.getByText(/Changes requested by Rui Takahashi/)).toBeTruthy();
     expect(screen.getByText("On the Checks step", { exact: false })).toBeTruthy();
     expect(screen.getByText("<b>Two</b> outliers are not discussed.")).toBeTruthy();

@@ -10,14 +10,16 @@ function DecisionLine({ round }: { round: ReviewRound }) {
   if (round.decision === "approved")
     return (
       <p className="flex items-center gap-1.5 font-medium text-spruce">
-        <CheckCircle2 aria-hidden="true" className="h-4 w-4" /> Approved{round.decidedBy ? ` by ${round.decidedBy.displayName}` : ""}
+        <CheckCircle2 aria-hidden="true" className="h-4 w-4" /> Approved
+        {round.decidedBy ? ` by ${round.decidedBy.displayName}` : ""}
         <span className="num font-normal text-ink-soft">{formatDateTime(round.decidedAt)}</span>
       </p>
     );
   if (round.decision === "changes_requested")
     return (
       <p className="flex items-center gap-1.5 font-medium text-amber-800">
-        <Undo2 aria-hidden="true" className="h-4 w-4" /> Changes requested{round.decidedBy ? ` by ${round.decidedBy.displayName}` : ""}
+        <Undo2 aria-hidden="true" className="h-4 w-4" /> Changes requested
+        {round.decidedBy ? ` by ${round.decidedBy.displayName}` : ""}
         <span className="num font-normal text-ink-soft">{formatDateTime(round.decidedAt)}</span>
       </p>
     );
@@ -35,7 +37,8 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
     <div className="flex flex-col gap-5" data-testid="history-timeline">
       {hasApproval && !history.approvalValid && history.approvalNote && (
         <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm">
-          <span className="font-semibold text-amber-800">The approval no longer holds.</span> {history.approvalNote}
+          <span className="font-semibold text-amber-800">The approval no longer holds.</span>{" "}
+          {history.approvalNote}
         </p>
       )}
       {history.rounds.length === 0 ? (
@@ -44,10 +47,14 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
         <ol className="flex flex-col gap-4 border-l-2 border-panel pl-5" aria-label="Review rounds">
           {history.rounds.map((r) => (
             <li key={r.id ?? r.round} className="relative">
-              <span aria-hidden="true" className="absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 border-paper bg-spruce" />
+              <span
+                aria-hidden="true"
+                className="absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 border-paper bg-spruce"
+              />
               <h4 className="font-semibold">Round {r.round}</h4>
               <p className="flex items-center gap-1.5 text-sm">
-                <Send aria-hidden="true" className="h-4 w-4 text-ink-soft" /> Submitted{r.submittedBy ? ` by ${r.submittedBy.displayName}` : ""}
+                <Send aria-hidden="true" className="h-4 w-4 text-ink-soft" /> Submitted
+                {r.submittedBy ? ` by ${r.submittedBy.displayName}` : ""}
                 <span className="num text-ink-soft">{formatDateTime(r.submittedAt)}</span>
               </p>
               <div className="mt-1 text-sm">
@@ -59,7 +66,8 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
                     <li key={c.id ?? i} className="rounded-md bg-stone p-3 text-sm">
                       <p className="text-xs text-ink-soft">
                         {c.step ? `On the ${STEP_LABELS[c.step] ?? c.step} step` : "On the study as a whole"}
-                        {c.author ? ` · ${c.author.displayName}` : ""} · <span className="num">{formatDateTime(c.createdAt)}</span>
+                        {c.author ? ` · ${c.author.displayName}` : ""} ·{" "}
+                        <span className="num">{formatDateTime(c.createdAt)}</span>
                       </p>
                       <p className="mt-1 whitespace-pre-wrap">{c.body}</p>
                     </li>
@@ -67,7 +75,10 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
                 </ul>
               )}
               {r.signature && (
-                <div className="mt-2 rounded-md border border-spruce/30 bg-spruce-100/60 p-3 text-sm" data-testid="signature-record">
+                <div
+                  className="mt-2 rounded-md border border-spruce/30 bg-spruce-100/60 p-3 text-sm"
+                  data-testid="signature-record"
+                >
                   <p className="flex items-center gap-1.5 font-semibold text-spruce">
                     <PenLine aria-hidden="true" className="h-4 w-4" /> Electronic signature
                   </p>
@@ -90,7 +101,9 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
         </ol>
       )}
       <details className="rounded-md bg-stone p-3" open={history.events.length <= 12}>
-        <summary className="cursor-pointer text-sm font-semibold">Every recorded action ({history.events.length})</summary>
+        <summary className="cursor-pointer text-sm font-semibold">
+          Every recorded action ({history.events.length})
+        </summary>
         {history.events.length === 0 ? (
           <p className="mt-2 text-sm text-ink-soft">Nothing has been recorded for this study yet.</p>
         ) : (
@@ -118,6 +131,7 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
 export function HistoryTimeline({ studyId }: { studyId: number }) {
   const history = useStudyHistory(studyId);
   if (history.isPending) return <p className="text-sm text-ink-soft">Loading the history…</p>;
-  if (history.error) return <ErrorPanel title="The history could not be loaded" message={history.error.message} />;
+  if (history.error)
+    return <ErrorPanel title="The history could not be loaded" message={history.error.message} />;
   return <HistoryTimelineView history={history.data} />;
 }

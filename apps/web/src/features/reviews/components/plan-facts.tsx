@@ -38,8 +38,10 @@ export function PlanFacts({ study }: { study: ReviewStudy }) {
       <Row term="Sample size plan">
         {p.power ? (
           <span>
-            <span className="num">{p.power.nPerGroup}</span> per group for <span className="num">f = {formatStat(p.power.effectF)}</span> at a target power
-            of <span className="num">{formatBounded(p.power.targetPower)}</span> (achieved <span className="num">{formatBounded(p.power.achievedPower)}</span>)
+            <span className="num">{p.power.nPerGroup}</span> per group for{" "}
+            <span className="num">f = {formatStat(p.power.effectF)}</span> at a target power of{" "}
+            <span className="num">{formatBounded(p.power.targetPower)}</span> (achieved{" "}
+            <span className="num">{formatBounded(p.power.achievedPower)}</span>)
           </span>
         ) : (
           <span className="text-ink-soft">No power calculation was stored with the plan.</span>
@@ -77,7 +79,8 @@ export function DataFacts({ study, analysis }: { study: ReviewStudy; analysis: R
       </Row>
       {olderVersion && (
         <Row term="Analysed version">
-          <AttentionMarker>{`Version ${analysis.datasetVersion}`}</AttentionMarker> The analysis in review used an earlier upload than the latest one.
+          <AttentionMarker>{`Version ${analysis.datasetVersion}`}</AttentionMarker> The analysis in review
+          used an earlier upload than the latest one.
         </Row>
       )}
     </dl>

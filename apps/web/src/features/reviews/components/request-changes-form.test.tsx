@@ -17,13 +17,19 @@ describe("RequestChangesForm", () => {
   });
 
   it("sends the comment, the step and only the step comments that were filled in", async () => {
-    const fetchMock = vi.fn(async () => new Response(JSON.stringify({ study: { id: 3, status: "draft" } }), { status: 200 }));
+    const fetchMock = vi.fn(
+      async () => new Response(JSON.stringify({ study: { id: 3, status: "draft" } }), { status: 200 }),
+    );
     vi.stubGlobal("fetch", fetchMock);
     const onSent = vi.fn();
     renderWithProviders(<RequestChangesForm studyId={3} onSent={onSent} />);
-    fireEvent.input(screen.getByLabelText("What needs to change"), { target: { value: "Explain the override." } });
+    fireEvent.input(screen.getByLabelText("What needs to change"), {
+      target: { value: "Explain the override." },
+    });
     fireEvent.change(screen.getByLabelText("Mainly about"), { target: { value: "choice" } });
-    fireEvent.input(screen.getByLabelText("Checks step"), { target: { value: "Two outliers in group B are not discussed." } });
+    fireEvent.input(screen.getByLabelText("Checks step"), {
+      target: { value: "Two outliers in group B are not discussed." },
+    });
     fireEvent.click(screen.getByRole("button", { name: "Send back to the analyst" }));
     await waitFor(() => expect(onSent).toHaveBeenCalledTimes(1));
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];

@@ -10,7 +10,11 @@ import { STEP_LABELS } from "../labels";
 import { REVIEW_STEPS, type ReviewStep } from "../types";
 
 const schema = z.object({
-  comment: z.string().trim().min(1, "Say what needs to change").max(4000, "Keep the comment to 4,000 characters or fewer"),
+  comment: z
+    .string()
+    .trim()
+    .min(1, "Say what needs to change")
+    .max(4000, "Keep the comment to 4,000 characters or fewer"),
   step: z.enum(["", ...REVIEW_STEPS] as [string, ...string[]]),
   design: z.string().max(4000),
   plan: z.string().max(4000),
@@ -21,10 +25,15 @@ const schema = z.object({
 });
 type Values = z.infer<typeof schema>;
 
-const STEP_OPTIONS = [{ value: "", label: "The study as a whole" }, ...REVIEW_STEPS.map((s) => ({ value: s, label: STEP_LABELS[s] }))];
+const STEP_OPTIONS = [
+  { value: "", label: "The study as a whole" },
+  ...REVIEW_STEPS.map((s) => ({ value: s, label: STEP_LABELS[s] })),
+];
 
 export function toRequestBody(v: Values): RequestChangesInput {
-  const stepComments = REVIEW_STEPS.map((step) => ({ step, body: v[step].trim() })).filter((c) => c.body.length > 0);
+  const stepComments = REVIEW_STEPS.map((step) => ({ step, body: v[step].trim() })).filter(
+    (c) => c.body.length > 0,
+  );
   return {
     comment: v.comment.trim(),
     step: v.step ? (v.step as ReviewStep) : null,
@@ -39,7 +48,16 @@ export function RequestChangesForm({ studyId, onSent }: { studyId: number; onSen
   return (
     <Form<Values>
       schema={schema}
-      defaultValues={{ comment: "", step: "", design: "", plan: "", data: "", checks: "", choice: "", results: "" }}
+      defaultValues={{
+        comment: "",
+        step: "",
+        design: "",
+        plan: "",
+        data: "",
+        checks: "",
+        choice: "",
+        results: "",
+      }}
       aria-label="Request changes"
       className="flex flex-col gap-4"
       onSubmit={async (values) => {
@@ -54,14 +72,29 @@ export function RequestChangesForm({ studyId, onSent }: { studyId: number; onSen
     >
       {(form) => (
         <>
-          <p className="text-sm">The study goes back to its analyst as a draft. Your comments stay in the study's history.</p>
-          <TextArea label="What needs to change" rows={4} error={form.formState.errors.comment?.message} {...form.register("comment")} />
+          <p className="text-sm">
+            The study goes back to its analyst as a draft. Your comments stay in the study's history.
+          </p>
+          <TextArea
+            label="What needs to change"
+            rows={4}
+            error={form.formState.errors.comment?.message}
+            {...form.register("comment")}
+          />
           <SelectField label="Mainly about" options={STEP_OPTIONS} {...form.register("step")} />
           <details className="rounded-md border border-ink/15 p-3">
-            <summary className="cursor-pointer text-sm font-medium">Add a comment on a particular step (optional)</summary>
+            <summary className="cursor-pointer text-sm font-medium">
+              Add a comment on a particular step (optional)
+            </summary>
             <div className="mt-3 flex flex-col gap-3">
               {REVIEW_STEPS.map((s) => (
-                <TextArea key={s} label={`${STEP_LABELS[s]} step`} rows={2} error={form.formState.errors[s]?.message} {...form.register(s)} />
+                <TextArea
+                  key={s}
+                  label={`${STEP_LABELS[s]} step`}
+                  rows={2}
+                  error={form.formState.errors[s]?.message}
+                  {...form.register(s)}
+                />
               ))}
             </div>
           </details>

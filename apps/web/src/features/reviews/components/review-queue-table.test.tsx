@@ -16,7 +16,11 @@ const item = (studyId: number, title: string, daysWaiting: number, override = fa
   daysWaiting,
 });
 
-const QUEUE = [item(1, "Fertiliser trial", 2), item(2, "Cooling rates", 9, true), item(3, "Reading scores", 0)];
+const QUEUE = [
+  item(1, "Fertiliser trial", 2),
+  item(2, "Cooling rates", 9, true),
+  item(3, "Reading scores", 0),
+];
 
 function titles(): string[] {
   const rows = within(screen.getByTestId("review-queue")).getAllByRole("row").slice(1);

@@ -17,7 +17,9 @@ const columns = h.columns([
         <Link to={reviewPath(c.row.original.studyId)} className="font-medium">
           {c.row.original.title}
         </Link>
-        {c.row.original.round > 1 && <span className="text-xs text-ink-soft">Round {c.row.original.round}</span>}
+        {c.row.original.round > 1 && (
+          <span className="text-xs text-ink-soft">Round {c.row.original.round}</span>
+        )}
       </span>
     ),
   }),
@@ -39,7 +41,8 @@ const columns = h.columns([
         </span>
       ) : (
         <span>
-          <span className="text-ink-soft">{testLabel(r.recommendedTest)}</span> → <span className="font-medium">{testLabel(r.chosenTest)}</span>
+          <span className="text-ink-soft">{testLabel(r.recommendedTest)}</span> →{" "}
+          <span className="font-medium">{testLabel(r.chosenTest)}</span>
         </span>
       );
     },
@@ -64,7 +67,10 @@ const SEARCH = ["title", "analyst"] as const;
 export function ReviewQueueTable({ queue }: { queue: QueueItem[] }) {
   const [filter, setFilter] = useState("");
   const [overridesOnly, setOverridesOnly] = useState(false);
-  const data = useMemo(() => (overridesOnly ? queue.filter((q) => q.override) : queue), [queue, overridesOnly]);
+  const data = useMemo(
+    () => (overridesOnly ? queue.filter((q) => q.override) : queue),
+    [queue, overridesOnly],
+  );
   const overrides = queue.filter((q) => q.override).length;
   return (
     <div className="flex flex-col gap-3">
@@ -82,7 +88,12 @@ export function ReviewQueueTable({ queue }: { queue: QueueItem[] }) {
           />
         </div>
         <label className="flex items-center gap-2 pb-2 text-sm">
-          <input type="checkbox" checked={overridesOnly} onChange={(e) => setOverridesOnly(e.target.checked)} className="h-4 w-4 accent-spruce" />
+          <input
+            type="checkbox"
+            checked={overridesOnly}
+            onChange={(e) => setOverridesOnly(e.target.checked)}
+            className="h-4 w-4 accent-spruce"
+          />
           Only studies with an override ({overrides})
         </label>
       </div>

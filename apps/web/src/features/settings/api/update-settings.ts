@@ -5,7 +5,9 @@ import { settingsKey, type OrganizationSettings } from "./get-settings";
 export type SettingsInput = Omit<OrganizationSettings, "updatedAt">;
 
 export function updateSettings(input: SettingsInput): Promise<OrganizationSettings> {
-  return api.put<{ settings: OrganizationSettings }>("/organization/settings", { ...input }).then((r) => r.settings);
+  return api
+    .put<{ settings: OrganizationSettings }>("/organization/settings", { ...input })
+    .then((r) => r.settings);
 }
 
 export function useUpdateSettings() {

@@ -5,11 +5,19 @@ import { SettingsForm } from "./settings-form";
 
 afterEach(() => vi.unstubAllGlobals());
 
-const SETTINGS = { policy: "welch-first", defaultAlpha: 0.05, defaultAdjust: "holm", paperSize: "A4" } as const;
+const SETTINGS = {
+  policy: "welch-first",
+  defaultAlpha: 0.05,
+  defaultAdjust: "holm",
+  paperSize: "A4",
+} as const;
 
 describe("SettingsForm", () => {
   it("explains each policy in one line and saves the changed values", async () => {
-    const fetchMock = vi.fn(async (_url: string, init?: RequestInit) => new Response(JSON.stringify({ settings: JSON.parse(String(init?.body)) }), { status: 200 }));
+    const fetchMock = vi.fn(
+      async (_url: string, init?: RequestInit) =>
+        new Response(JSON.stringify({ settings: JSON.parse(String(init?.body)) }), { status: 200 }),
+    );
     vi.stubGlobal("fetch", fetchMock);
     renderWithProviders(<SettingsForm settings={SETTINGS} />);
     expect(screen.getByText(/unless the groups' spreads differ; then Welch's ANOVA/)).toBeTruthy();
@@ -22,7 +30,12 @@ describe("SettingsForm", () => {
     const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
     expect(url).toBe("/api/organization/settings");
     expect(init.method).toBe("PUT");
-    expect(JSON.parse(String(init.body))).toEqual({ policy: "classic-first", defaultAlpha: 0.01, defaultAdjust: "bh", paperSize: "A4" });
+    expect(JSON.parse(String(init.body))).toEqual({
+      policy: "classic-first",
+      defaultAlpha: 0.01,
+      defaultAdjust: "bh",
+      paperSize: "A4",
+    });
   });
 
   it("refuses an α that is not a usual significance level", async () => {

@@ -21,9 +21,21 @@ const POLICIES = [
 ] as const;
 
 const ADJUSTMENTS = [
-  { value: "holm", title: "Holm", line: "Controls the family-wise error rate; never less powerful than Bonferroni." },
-  { value: "bonferroni", title: "Bonferroni", line: "Controls the family-wise error rate; the simplest and most conservative." },
-  { value: "bh", title: "Benjamini–Hochberg", line: "Controls the false discovery rate instead; for many comparisons in exploratory work." },
+  {
+    value: "holm",
+    title: "Holm",
+    line: "Controls the family-wise error rate; never less powerful than Bonferroni.",
+  },
+  {
+    value: "bonferroni",
+    title: "Bonferroni",
+    line: "Controls the family-wise error rate; the simplest and most conservative.",
+  },
+  {
+    value: "bh",
+    title: "Benjamini–Hochberg",
+    line: "Controls the false discovery rate instead; for many comparisons in exploratory work.",
+  },
 ] as const;
 
 const PAPER = [
@@ -44,7 +56,19 @@ const schema = z.object({
 });
 type Values = z.infer<typeof schema>;
 
-function Choice({ name, value, title, line, register }: { name: string; value: string; title: string; line: string; register: object }) {
+function Choice({
+  name,
+  value,
+  title,
+  line,
+  register,
+}: {
+  name: string;
+  value: string;
+  title: string;
+  line: string;
+  register: object;
+}) {
   return (
     <label className="flex cursor-pointer gap-3 rounded-md border border-ink/15 bg-paper p-3 has-[:checked]:border-spruce has-[:checked]:bg-spruce-100/50">
       <input type="radio" value={value} name={name} className="mt-1 h-4 w-4 accent-spruce" {...register} />
@@ -64,14 +88,24 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
   return (
     <Form<Values>
       schema={schema}
-      defaultValues={{ policy: settings.policy, defaultAlpha: String(settings.defaultAlpha), defaultAdjust: settings.defaultAdjust, paperSize: settings.paperSize }}
+      defaultValues={{
+        policy: settings.policy,
+        defaultAlpha: String(settings.defaultAlpha),
+        defaultAdjust: settings.defaultAdjust,
+        paperSize: settings.paperSize,
+      }}
       aria-label="Organization settings"
       className="flex max-w-3xl flex-col gap-6"
       onSubmit={async (v) => {
         setSaved(false);
         setRefusal(null);
         try {
-          await save.mutateAsync({ policy: v.policy, defaultAlpha: Number(v.defaultAlpha), defaultAdjust: v.defaultAdjust, paperSize: v.paperSize });
+          await save.mutateAsync({
+            policy: v.policy,
+            defaultAlpha: Number(v.defaultAlpha),
+            defaultAdjust: v.defaultAdjust,
+            paperSize: v.paperSize,
+          });
           setSaved(true);
         } catch (e) {
           setRefusal(e instanceof Error ? e.message : "The settings were not saved.");
@@ -82,9 +116,19 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
         <>
           <fieldset className="flex flex-col gap-2">
             <legend className="mb-1 font-semibold">Test policy</legend>
-            <p className="text-sm text-ink-soft">Which omnibus test a new study's plan starts from. The analyst sees the reason for every recommendation.</p>
+            <p className="text-sm text-ink-soft">
+              Which omnibus test a new study's plan starts from. The analyst sees the reason for every
+              recommendation.
+            </p>
             {POLICIES.map((p) => (
-              <Choice key={p.value} name="policy" value={p.value} title={p.title} line={p.line} register={form.register("policy")} />
+              <Choice
+                key={p.value}
+                name="policy"
+                value={p.value}
+                title={p.title}
+                line={p.line}
+                register={form.register("policy")}
+              />
             ))}
           </fieldset>
 
@@ -96,7 +140,9 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
               id="default-alpha"
               inputMode="decimal"
               aria-invalid={form.formState.errors.defaultAlpha ? true : undefined}
-              aria-describedby={form.formState.errors.defaultAlpha ? "default-alpha-error" : "default-alpha-hint"}
+              aria-describedby={
+                form.formState.errors.defaultAlpha ? "default-alpha-error" : "default-alpha-hint"
+              }
               className={`num rounded-md border bg-paper px-3 py-2 outline-none focus:border-spruce focus:ring-2 focus:ring-spruce/30 ${form.formState.errors.defaultAlpha ? "border-brick" : "border-ink/25"}`}
               {...form.register("defaultAlpha")}
             />
@@ -114,7 +160,14 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
           <fieldset className="flex flex-col gap-2">
             <legend className="mb-1 font-semibold">Default adjustment for multiple comparisons</legend>
             {ADJUSTMENTS.map((a) => (
-              <Choice key={a.value} name="defaultAdjust" value={a.value} title={a.title} line={a.line} register={form.register("defaultAdjust")} />
+              <Choice
+                key={a.value}
+                name="defaultAdjust"
+                value={a.value}
+                title={a.title}
+                line={a.line}
+                register={form.register("defaultAdjust")}
+              />
             ))}
           </fieldset>
 
@@ -122,13 +175,22 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
             <legend className="mb-1 font-semibold">Paper size of reports</legend>
             <div className="grid gap-2 sm:grid-cols-2">
               {PAPER.map((p) => (
-                <Choice key={p.value} name="paperSize" value={p.value} title={p.title} line={p.line} register={form.register("paperSize")} />
+                <Choice
+                  key={p.value}
+                  name="paperSize"
+                  value={p.value}
+                  title={p.title}
+                  line={p.line}
+                  register={form.register("paperSize")}
+                />
               ))}
             </div>
           </fieldset>
 
           <div className="flex flex-col gap-2">
-            <p className="text-sm text-ink-soft">New studies start from these settings; studies already created keep their own plan.</p>
+            <p className="text-sm text-ink-soft">
+              New studies start from these settings; studies already created keep their own plan.
+            </p>
             {refusal && <ErrorPanel title="The settings were not saved" message={refusal} />}
             {saved && (
               <p role="status" className="rounded-md bg-spruce-100 p-2 text-sm text-spruce">

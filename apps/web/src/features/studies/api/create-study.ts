@@ -5,11 +5,7 @@ import type { Study } from "../types";
 import { storeStudy } from "./get-study";
 
 const text = (what: string, max = 200) =>
-  z
-    .string()
-    .trim()
-    .min(1, `Enter ${what}`)
-    .max(max, `Keep ${what} under ${max} characters`);
+  z.string().trim().min(1, `Enter ${what}`).max(max, `Keep ${what} under ${max} characters`);
 
 export const createStudyInputSchema = z
   .object({
@@ -21,16 +17,26 @@ export const createStudyInputSchema = z
     levels: z.array(z.object({ name: z.string().trim() })),
     hasControl: z.boolean(),
     controlLevel: z.string(),
-    alpha: z.number({ error: "Enter α as a number, for example 0.05" }).gt(0, "α must be above 0").max(0.2, "α must be at most 0.2"),
+    alpha: z
+      .number({ error: "Enter α as a number, for example 0.05" })
+      .gt(0, "α must be above 0")
+      .max(0.2, "α must be at most 0.2"),
     context: z.enum(["general", "clinical", "safety-critical"]),
   })
   .superRefine((v, ctx) => {
     const names = v.levels.map((l) => l.name).filter((n) => n.length > 0);
-    if (names.length < 2) ctx.addIssue({ code: "custom", path: ["levels"], message: "Name at least two groups" });
+    if (names.length < 2)
+      ctx.addIssue({ code: "custom", path: ["levels"], message: "Name at least two groups" });
     if (names.length > 20) ctx.addIssue({ code: "custom", path: ["levels"], message: "At most 20 groups" });
     const dup = names.find((n, i) => names.indexOf(n) !== i);
-    if (dup) ctx.addIssue({ code: "custom", path: ["levels"], message: `“${dup}” is listed twice; each group needs its own name` });
-    if (v.hasControl && !names.includes(v.controlLevel)) ctx.addIssue({ code: "custom", path: ["controlLevel"], message: "Pick which group is the control" });
+    if (dup)
+      ctx.addIssue({
+        code: "custom",
+        path: ["levels"],
+        message: `“${dup}” is listed twice; each group needs its own name`,
+      });
+    if (v.hasControl && !names.includes(v.controlLevel))
+      ctx.addIssue({ code: "custom", path: ["controlLevel"], message: "Pick which group is the control" });
   });
 export type CreateStudyForm = z.infer<typeof createStudyInputSchema>;
 

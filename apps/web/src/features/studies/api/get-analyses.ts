@@ -7,7 +7,8 @@ export function getAnalyses(id: number): Promise<Analysis[]> {
   return api.get<{ analyses: Analysis[] }>(`/studies/${id}/analyses`).then((r) => r.analyses);
 }
 
-export const analysesQueryOptions = (id: number) => queryOptions({ queryKey: studyKeys.analyses(id), queryFn: () => getAnalyses(id) });
+export const analysesQueryOptions = (id: number) =>
+  queryOptions({ queryKey: studyKeys.analyses(id), queryFn: () => getAnalyses(id) });
 
 export function useAnalyses(id: number) {
   return useQuery(analysesQueryOptions(id));

@@ -8,7 +8,11 @@ export function getAnalysis(id: number, analysisId: number): Promise<Analysis> {
 }
 
 export const analysisQueryOptions = (id: number, analysisId: number) =>
-  queryOptions({ queryKey: studyKeys.analysis(id, analysisId), queryFn: () => getAnalysis(id, analysisId), staleTime: Infinity });
+  queryOptions({
+    queryKey: studyKeys.analysis(id, analysisId),
+    queryFn: () => getAnalysis(id, analysisId),
+    staleTime: Infinity,
+  });
 
 export function useAnalysis(id: number, analysisId: number | null | undefined) {
   return useQuery({ ...analysisQueryOptions(id, analysisId ?? 0), enabled: !!analysisId });

@@ -8,7 +8,11 @@ export function getChecks(id: number, datasetId: number): Promise<ChecksResponse
 }
 
 export const checksQueryOptions = (id: number, datasetId: number) =>
-  queryOptions({ queryKey: studyKeys.checks(id, datasetId), queryFn: () => getChecks(id, datasetId), staleTime: Infinity });
+  queryOptions({
+    queryKey: studyKeys.checks(id, datasetId),
+    queryFn: () => getChecks(id, datasetId),
+    staleTime: Infinity,
+  });
 
 export function useChecks(id: number, datasetId: number | null | undefined) {
   return useQuery({ ...checksQueryOptions(id, datasetId ?? 0), enabled: !!datasetId });

@@ -7,7 +7,8 @@ export function getDatasets(id: number): Promise<Dataset[]> {
   return api.get<{ datasets: Dataset[] }>(`/studies/${id}/datasets`).then((r) => r.datasets);
 }
 
-export const datasetsQueryOptions = (id: number) => queryOptions({ queryKey: studyKeys.datasets(id), queryFn: () => getDatasets(id) });
+export const datasetsQueryOptions = (id: number) =>
+  queryOptions({ queryKey: studyKeys.datasets(id), queryFn: () => getDatasets(id) });
 
 export function useDatasets(id: number) {
   return useQuery(datasetsQueryOptions(id));

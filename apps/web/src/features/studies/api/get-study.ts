@@ -7,7 +7,8 @@ export function getStudy(id: number): Promise<Study> {
   return api.get<{ study: Study }>(`/studies/${id}`).then((r) => r.study);
 }
 
-export const studyQueryOptions = (id: number) => queryOptions({ queryKey: studyKeys.detail(id), queryFn: () => getStudy(id) });
+export const studyQueryOptions = (id: number) =>
+  queryOptions({ queryKey: studyKeys.detail(id), queryFn: () => getStudy(id) });
 
 export function useStudy(id: number) {
   return useQuery(studyQueryOptions(id));

@@ -3,7 +3,11 @@ import { uploadWithProgress } from "@/lib/api-client";
 import type { DatasetPreview } from "../types";
 
 /** Reads the first rows of a file and guesses its layout; nothing is stored. */
-export function previewDataset(id: number, file: File, onProgress?: (f: number) => void): Promise<DatasetPreview> {
+export function previewDataset(
+  id: number,
+  file: File,
+  onProgress?: (f: number) => void,
+): Promise<DatasetPreview> {
   const form = new FormData();
   form.append("file", file);
   return uploadWithProgress<DatasetPreview>(`/studies/${id}/datasets/preview`, form, onProgress);

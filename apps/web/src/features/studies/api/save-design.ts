@@ -10,5 +10,8 @@ export function saveDesign(id: number, answers: DesignAnswers): Promise<Study> {
 
 export function useSaveDesign(id: number) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (answers: DesignAnswers) => saveDesign(id, answers), onSuccess: (study) => storeStudy(qc, study) });
+  return useMutation({
+    mutationFn: (answers: DesignAnswers) => saveDesign(id, answers),
+    onSuccess: (study) => storeStudy(qc, study),
+  });
 }

@@ -16,5 +16,8 @@ export function savePlan(id: number, body: SavePlanBody): Promise<Study> {
 
 export function useSavePlan(id: number) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (body: SavePlanBody) => savePlan(id, body), onSuccess: (study) => storeStudy(qc, study) });
+  return useMutation({
+    mutationFn: (body: SavePlanBody) => savePlan(id, body),
+    onSuccess: (study) => storeStudy(qc, study),
+  });
 }

@@ -12,5 +12,8 @@ export function updateStudy(id: number, body: UpdateStudyBody): Promise<Study> {
 
 export function useUpdateStudy(id: number) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (body: UpdateStudyBody) => updateStudy(id, body), onSuccess: (study) => storeStudy(qc, study) });
+  return useMutation({
+    mutationFn: (body: UpdateStudyBody) => updateStudy(id, body),
+    onSuccess: (study) => storeStudy(qc, study),
+  });
 }

@@ -10,7 +10,11 @@ export interface UploadDatasetInput {
   outcomeColumn?: string;
 }
 
-export function uploadDataset(id: number, input: UploadDatasetInput, onProgress?: (f: number) => void): Promise<Dataset> {
+export function uploadDataset(
+  id: number,
+  input: UploadDatasetInput,
+  onProgress?: (f: number) => void,
+): Promise<Dataset> {
   const form = new FormData();
   form.append("file", input.file);
   form.append("layout", input.layout);
@@ -18,7 +22,9 @@ export function uploadDataset(id: number, input: UploadDatasetInput, onProgress?
     if (input.groupColumn) form.append("groupColumn", input.groupColumn);
     if (input.outcomeColumn) form.append("outcomeColumn", input.outcomeColumn);
   }
-  return uploadWithProgress<{ dataset: Dataset }>(`/studies/${id}/datasets`, form, onProgress).then((r) => r.dataset);
+  return uploadWithProgress<{ dataset: Dataset }>(`/studies/${id}/datasets`, form, onProgress).then(
+    (r) => r.dataset,
+  );
 }
 
 /** The validation report a 422 carries: the file was read but not stored. */

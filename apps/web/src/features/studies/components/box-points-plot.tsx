@@ -37,11 +37,23 @@ function jitter(j: number): number {
  * and each value is a jittered point for small groups. Colour, shape and the axis label tell the
  * groups apart.
  */
-export function BoxPointsPlot({ groups, outliers, outcomeLabel }: { groups: GroupDescription[]; outliers?: Maybe<OutlierPart>; outcomeLabel: string }) {
+export function BoxPointsPlot({
+  groups,
+  outliers,
+  outcomeLabel,
+}: {
+  groups: GroupDescription[];
+  outliers?: Maybe<OutlierPart>;
+  outcomeLabel: string;
+}) {
   const { boxes, points, showsAll } = useMemo(() => {
     const flagged = new Map<string, { value: number; row: number }[]>();
     if (isAvailable(outliers))
-      for (const g of outliers.groups ?? []) flagged.set(g.group, [...(g.mild ?? []), ...(g.extreme ?? [])].filter((f) => num(f.value) !== null));
+      for (const g of outliers.groups ?? [])
+        flagged.set(
+          g.group,
+          [...(g.mild ?? []), ...(g.extreme ?? [])].filter((f) => num(f.value) !== null),
+        );
     const boxes: Box[] = [];
     const points: Point[] = [];
     let showsAll = true;
@@ -59,10 +71,14 @@ export function BoxPointsPlot({ groups, outliers, outcomeLabel }: { groups: Grou
       const marks = flagged.get(g.name) ?? [];
       const flaggedValues = new Set(marks.map((m) => m.value));
       if (values && values.length <= ALL_POINTS_UP_TO) {
-        values.forEach((v, j) => points.push({ i, name: g.name, x: i + jitter(j + 1), value: v, flagged: flaggedValues.has(v) }));
+        values.forEach((v, j) =>
+          points.push({ i, name: g.name, x: i + jitter(j + 1), value: v, flagged: flaggedValues.has(v) }),
+        );
       } else {
         showsAll = false;
-        marks.forEach((m, j) => points.push({ i, name: g.name, x: i + jitter(j + 1), value: m.value, flagged: true, row: m.row }));
+        marks.forEach((m, j) =>
+          points.push({ i, name: g.name, x: i + jitter(j + 1), value: m.value, flagged: true, row: m.row }),
+        );
       }
     });
     return { boxes, points, showsAll };
@@ -75,12 +91,32 @@ export function BoxPointsPlot({ groups, outliers, outcomeLabel }: { groups: Grou
       height: 320,
       marginLeft: 56,
       marginBottom: 44,
-      x: { domain: [-0.6, names.length - 0.4], ticks: names.map((_, i) => i), tickFormat: (i: number) => names[i] ?? "", label: null, tickSize: 0 },
+      x: {
+        domain: [-0.6, names.length - 0.4],
+        ticks: names.map((_, i) => i),
+        tickFormat: (i: number) => names[i] ?? "",
+        label: null,
+        tickSize: 0,
+      },
       y: { label: outcomeLabel, grid: true, nice: true },
       marks: [
         Plot.ruleX(boxes, { x: "i", y1: "low", y2: "high", stroke: "#1E2A32", strokeOpacity: 0.6 }),
-        Plot.rect(boxes, { x1: (d: Box) => d.i - 0.26, x2: (d: Box) => d.i + 0.26, y1: "q1", y2: "q3", fill: (d: Box) => groupColour(d.i), fillOpacity: 0.16, stroke: (d: Box) => groupColour(d.i) }),
-        Plot.ruleY(boxes, { y: "median", x1: (d: Box) => d.i - 0.26, x2: (d: Box) => d.i + 0.26, stroke: "#1E2A32", strokeWidth: 2.5 }),
+        Plot.rect(boxes, {
+          x1: (d: Box) => d.i - 0.26,
+          x2: (d: Box) => d.i + 0.26,
+          y1: "q1",
+          y2: "q3",
+          fill: (d: Box) => groupColour(d.i),
+          fillOpacity: 0.16,
+          stroke: (d: Box) => groupColour(d.i),
+        }),
+        Plot.ruleY(boxes, {
+          y: "median",
+          x1: (d: Box) => d.i - 0.26,
+          x2: (d: Box) => d.i + 0.26,
+          stroke: "#1E2A32",
+          strokeWidth: 2.5,
+        }),
         Plot.dot(points, {
           x: "x",
           y: "value",
@@ -89,13 +125,15 @@ export function BoxPointsPlot({ groups, outliers, outcomeLabel }: { groups: Grou
           fill: (d: Point) => groupColour(d.i),
           stroke: (d: Point) => (d.flagged ? "#D9961A" : "#FBF9F5"),
           strokeWidth: (d: Point) => (d.flagged ? 2 : 0.8),
-          title: (d: Point) => `${d.name}: ${formatValue(d.value)}${d.row ? ` (row ${d.row})` : ""}${d.flagged ? ", flagged as an outlier" : ""}`,
+          title: (d: Point) =>
+            `${d.name}: ${formatValue(d.value)}${d.row ? ` (row ${d.row})` : ""}${d.flagged ? ", flagged as an outlier" : ""}`,
         }),
       ],
     }),
     [boxes, points, names, outcomeLabel],
   );
-  if (boxes.length === 0) return <p className="text-sm text-ink-soft">The box plot needs quartiles for at least one group.</p>;
+  if (boxes.length === 0)
+    return <p className="text-sm text-ink-soft">The box plot needs quartiles for at least one group.</p>;
   return (
     <PlotFigure
       options={options}

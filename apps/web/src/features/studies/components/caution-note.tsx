@@ -7,7 +7,11 @@ export const CAUTION_TEXT =
 export function CautionNote({ context }: { context: StudyContext }) {
   if (context !== "clinical" && context !== "safety-critical") return null;
   return (
-    <aside aria-label="Caution" className="rounded-md border-l-4 border-brick bg-paper p-4 text-sm" data-testid="caution-note">
+    <aside
+      aria-label="Caution"
+      className="rounded-md border-l-4 border-brick bg-paper p-4 text-sm"
+      data-testid="caution-note"
+    >
       {CAUTION_TEXT}
     </aside>
   );

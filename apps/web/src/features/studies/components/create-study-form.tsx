@@ -2,7 +2,12 @@ import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
 import { Form } from "@/components/ui/form";
 import { TextField } from "@/components/ui/text-field";
-import { createStudyInputSchema, toCreateStudyBody, useCreateStudy, type CreateStudyForm } from "../api/create-study";
+import {
+  createStudyInputSchema,
+  toCreateStudyBody,
+  useCreateStudy,
+  type CreateStudyForm,
+} from "../api/create-study";
 import { CONTEXT_LABELS } from "../labels";
 import type { Study, StudyContext } from "../types";
 import { LevelsEditor } from "./levels-editor";
@@ -58,7 +63,9 @@ export function CreateStudyForm({ onCreated }: { onCreated: (study: Study) => vo
                 className={`rounded-md border bg-paper px-3 py-2 outline-none focus:border-spruce focus:ring-2 focus:ring-spruce/30 ${e.objective ? "border-brick" : "border-ink/25"}`}
                 {...register("objective")}
               />
-              <p className="text-xs text-ink-soft">The question the comparison should answer, in one or two sentences.</p>
+              <p className="text-xs text-ink-soft">
+                The question the comparison should answer, in one or two sentences.
+              </p>
               {e.objective && (
                 <p role="alert" className="text-sm text-brick">
                   {e.objective.message}
@@ -66,22 +73,42 @@ export function CreateStudyForm({ onCreated }: { onCreated: (study: Study) => vo
               )}
             </div>
             <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
-              <TextField label="Outcome" hint="What is measured on each unit" error={e.outcomeName?.message} {...register("outcomeName")} />
-              <TextField label="Unit" hint="e.g. MPa, mg/L; leave empty for scores" error={e.outcomeUnit?.message} {...register("outcomeUnit")} />
+              <TextField
+                label="Outcome"
+                hint="What is measured on each unit"
+                error={e.outcomeName?.message}
+                {...register("outcomeName")}
+              />
+              <TextField
+                label="Unit"
+                hint="e.g. MPa, mg/L; leave empty for scores"
+                error={e.outcomeUnit?.message}
+                {...register("outcomeUnit")}
+              />
             </div>
-            <TextField label="Grouping factor" hint="What makes the groups differ, e.g. curing method" error={e.factorName?.message} {...register("factorName")} />
+            <TextField
+              label="Grouping factor"
+              hint="What makes the groups differ, e.g. curing method"
+              error={e.factorName?.message}
+              {...register("factorName")}
+            />
             <LevelsEditor form={form} />
             <fieldset className="flex flex-col gap-2">
               <legend className="text-sm font-medium">Control group</legend>
               <label className="flex items-center gap-2 text-sm">
-                <input type="checkbox" {...register("hasControl")} /> One of the levels is a control or reference group
+                <input type="checkbox" {...register("hasControl")} /> One of the levels is a control or
+                reference group
               </label>
               {hasControl && (
                 <div className="flex flex-col gap-1">
                   <label htmlFor="controlLevel" className="text-sm">
                     Which level is the control?
                   </label>
-                  <select id="controlLevel" className="w-64 rounded-md border border-ink/25 bg-paper px-3 py-2" {...register("controlLevel")}>
+                  <select
+                    id="controlLevel"
+                    className="w-64 rounded-md border border-ink/25 bg-paper px-3 py-2"
+                    {...register("controlLevel")}
+                  >
                     <option value="">Choose a level…</option>
                     {levelNames.map((n) => (
                       <option key={n} value={n}>
@@ -98,14 +125,14 @@ export function CreateStudyForm({ onCreated }: { onCreated: (study: Study) => vo
               )}
             </fieldset>
             <div className="max-w-xs">
-            <TextField
-              label="Significance level α"
-              type="number"
-              step="0.001"
-              hint="The chance of a false alarm you accept per test; .05 is common."
-              error={e.alpha?.message}
-              {...register("alpha", { valueAsNumber: true })}
-            />
+              <TextField
+                label="Significance level α"
+                type="number"
+                step="0.001"
+                hint="The chance of a false alarm you accept per test; .05 is common."
+                error={e.alpha?.message}
+                {...register("alpha", { valueAsNumber: true })}
+              />
             </div>
             <fieldset className="flex flex-col gap-2">
               <legend className="text-sm font-medium">Setting</legend>
@@ -113,7 +140,8 @@ export function CreateStudyForm({ onCreated }: { onCreated: (study: Study) => vo
                 <label key={c} className="flex items-start gap-2 text-sm">
                   <input type="radio" value={c} className="mt-1" {...register("context")} />
                   <span>
-                    <span className="font-medium">{CONTEXT_LABELS[c]}</span> <span className="text-ink-soft">— {CONTEXT_HINTS[c]}</span>
+                    <span className="font-medium">{CONTEXT_LABELS[c]}</span>{" "}
+                    <span className="text-ink-soft">— {CONTEXT_HINTS[c]}</span>
                   </span>
                 </label>
               ))}

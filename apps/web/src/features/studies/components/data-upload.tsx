@@ -30,8 +30,15 @@ export function DataUpload({ study, onUploaded }: { study: Study; onUploaded?: (
 
   return (
     <div className="flex flex-col gap-4">
-      {(!file || preview.isError) && !upload.isPending && <FilePicker onFile={pick} disabled={preview.isPending} />}
-      {(preview.isPending || upload.isPending) && <ProgressBar fraction={progress} label={upload.isPending ? "Uploading the file" : "Reading the file"} />}
+      {(!file || preview.isError) && !upload.isPending && (
+        <FilePicker onFile={pick} disabled={preview.isPending} />
+      )}
+      {(preview.isPending || upload.isPending) && (
+        <ProgressBar
+          fraction={progress}
+          label={upload.isPending ? "Uploading the file" : "Reading the file"}
+        />
+      )}
       {preview.error && <ErrorPanel title="The file could not be read" message={preview.error.message} />}
       {file && preview.data && !upload.isSuccess && (
         <ColumnMapping
@@ -47,7 +54,9 @@ export function DataUpload({ study, onUploaded }: { study: Study; onUploaded?: (
         />
       )}
       {rejected && <ValidationReport report={rejected} levels={study.levels} stored={false} />}
-      {upload.error && !rejected && <ErrorPanel title="The file was not stored" message={upload.error.message} />}
+      {upload.error && !rejected && (
+        <ErrorPanel title="The file was not stored" message={upload.error.message} />
+      )}
       {upload.data && (
         <div className="flex flex-col gap-3">
           <p role="status" className="font-medium text-spruce">

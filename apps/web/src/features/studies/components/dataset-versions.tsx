@@ -34,9 +34,13 @@ export function DatasetVersions({ datasets }: { datasets: Dataset[] }) {
               <td className="num p-2">{formatDateTime(d.uploadedAt)}</td>
               <td className="p-2">
                 {d.afterPlanLock ? (
-                  <span className="rounded-sm bg-spruce-100 px-1.5 py-0.5 text-xs font-semibold text-spruce">after plan lock</span>
+                  <span className="rounded-sm bg-spruce-100 px-1.5 py-0.5 text-xs font-semibold text-spruce">
+                    after plan lock
+                  </span>
                 ) : (
-                  <span className="rounded-sm bg-amber-100 px-1.5 py-0.5 text-xs font-semibold text-amber-800">before plan lock</span>
+                  <span className="rounded-sm bg-amber-100 px-1.5 py-0.5 text-xs font-semibold text-amber-800">
+                    before plan lock
+                  </span>
                 )}
               </td>
             </tr>

@@ -12,7 +12,9 @@ export function DescriptivesTable({ groups, unit }: { groups: GroupDescription[]
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-sm">
-        <caption className="mb-1 text-left text-xs text-ink-soft">{unit ? `Values in ${unit}. ` : ""}CI: 95% confidence interval of the mean. — : not computable.</caption>
+        <caption className="mb-1 text-left text-xs text-ink-soft">
+          {unit ? `Values in ${unit}. ` : ""}CI: 95% confidence interval of the mean. — : not computable.
+        </caption>
         <thead className="border-b border-ink/15 text-right text-ink-soft">
           <tr>
             <th className="p-1.5 text-left font-medium">Group</th>
@@ -37,14 +39,22 @@ export function DescriptivesTable({ groups, unit }: { groups: GroupDescription[]
               </th>
               <td className="p-1.5">
                 {g.n}
-                {num(g.missing) ? <span className="text-xs text-ink-soft"> (+{g.missing} missing)</span> : null}
+                {num(g.missing) ? (
+                  <span className="text-xs text-ink-soft"> (+{g.missing} missing)</span>
+                ) : null}
               </td>
               <td className="p-1.5">{cell(g.mean)}</td>
               <td className="p-1.5">{cell(g.sd)}</td>
               <td className="p-1.5">{cell(g.se)}</td>
-              <td className="p-1.5">{num(g.ciLower) !== null && num(g.ciUpper) !== null ? `[${cell(g.ciLower)}, ${cell(g.ciUpper)}]` : "—"}</td>
+              <td className="p-1.5">
+                {num(g.ciLower) !== null && num(g.ciUpper) !== null
+                  ? `[${cell(g.ciLower)}, ${cell(g.ciUpper)}]`
+                  : "—"}
+              </td>
               <td className="p-1.5">{cell(g.median)}</td>
-              <td className="p-1.5">{num(g.q1) !== null && num(g.q3) !== null ? `${cell(g.q1)} – ${cell(g.q3)}` : "—"}</td>
+              <td className="p-1.5">
+                {num(g.q1) !== null && num(g.q3) !== null ? `${cell(g.q1)} – ${cell(g.q3)}` : "—"}
+              </td>
               <td className="p-1.5">{`${cell(g.min)} – ${cell(g.max)}`}</td>
             </tr>
           ))}

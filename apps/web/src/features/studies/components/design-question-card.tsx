@@ -27,7 +27,15 @@ export function DesignQuestionCard({ question, value, onAnswer, disabledValues =
               key={o.value}
               className={`flex cursor-pointer items-start gap-3 rounded-md border p-3 ${checked ? "border-spruce bg-spruce-100" : "border-ink/20 bg-paper hover:border-ink/40"} ${blocked ? "cursor-not-allowed opacity-60" : ""}`}
             >
-              <input type="radio" name={name} value={o.value} checked={checked} disabled={!!blocked} onChange={() => onAnswer(o.value)} className="mt-1 accent-spruce" />
+              <input
+                type="radio"
+                name={name}
+                value={o.value}
+                checked={checked}
+                disabled={!!blocked}
+                onChange={() => onAnswer(o.value)}
+                className="mt-1 accent-spruce"
+              />
               <span>
                 <span className="block font-medium">{o.label}</span>
                 <span className="block text-sm text-ink-soft">{blocked ?? o.detail}</span>

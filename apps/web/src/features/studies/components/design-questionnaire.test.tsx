@@ -17,7 +17,8 @@ function fakeServer(start: Study) {
       if (method === "PUT" && path === `/studies/${study.id}/design`) {
         calls.push(body as DesignAnswers);
         const design = { ...study.design, ...(body as DesignAnswers) };
-        const outOfScope = design.independence === "paired" ? "The same units are measured in more than one group." : null;
+        const outOfScope =
+          design.independence === "paired" ? "The same units are measured in more than one group." : null;
         const complete = Object.keys(design).length === 5 && !outOfScope && design.independence !== "unsure";
         study = { ...study, design, outOfScope, designComplete: complete };
         return { body: { study } };
@@ -61,7 +62,11 @@ describe("DesignQuestionnaire", () => {
     expect(screen.getByText("What Waymark will assume.")).toBeTruthy();
     expect(screen.getByText(DESIGN_QUESTIONS[1]!.notSure.assume)).toBeTruthy();
     // "not sure" is an answer: the analyst may go on
-    await waitFor(() => expect((screen.getByRole("button", { name: "Next question" }) as HTMLButtonElement).disabled).toBe(false));
+    await waitFor(() =>
+      expect((screen.getByRole("button", { name: "Next question" }) as HTMLButtonElement).disabled).toBe(
+        false,
+      ),
+    );
   });
 
   it("matched units stop the path and name the methods that apply", async () => {
@@ -78,7 +83,9 @@ describe("DesignQuestionnaire", () => {
 
   it("comparisons against a control need a control group", () => {
     fakeServer(makeStudy());
-    const start = makeStudy({ design: { independence: "independent", scale: "continuous", hasControl: "no" } });
+    const start = makeStudy({
+      design: { independence: "independent", scale: "continuous", hasControl: "no" },
+    });
     renderWithStudy(start, (s) => <DesignQuestionnaire study={s} />);
     expect(legend()).toBe(DESIGN_QUESTIONS[3]!.question);
     expect((screen.getByLabelText(/Each group against the control/) as HTMLInputElement).disabled).toBe(true);
@@ -87,7 +94,13 @@ describe("DesignQuestionnaire", () => {
 
   it("after the plan is locked the answers are shown, not editable", () => {
     const study = makeStudy({
-      design: { independence: "independent", scale: "continuous", hasControl: "no", comparisons: "all-pairs", assignment: "randomized" },
+      design: {
+        independence: "independent",
+        scale: "continuous",
+        hasControl: "no",
+        comparisons: "all-pairs",
+        assignment: "randomized",
+      },
       designComplete: true,
       plan: { ...makeStudy().plan, lockedAt: "2025-12-03T14:05:00.000Z" },
     });

@@ -29,18 +29,27 @@ export function DesignQuestionnaire({ study, readOnly = false }: { study: Study;
   if (!editable || index >= total) {
     return (
       <div className="flex flex-col gap-4">
-        {study.outOfScope ? <OutOfScopeStop reason={study.outOfScope} onRevise={editable ? () => setIndex(0) : undefined} /> : null}
+        {study.outOfScope ? (
+          <OutOfScopeStop reason={study.outOfScope} onRevise={editable ? () => setIndex(0) : undefined} />
+        ) : null}
         <DesignSummary study={study} onEdit={editable ? setIndex : undefined} />
-        {locked && <p className="text-sm text-ink-soft">The answers are fixed: the plan built on them is locked.</p>}
+        {locked && (
+          <p className="text-sm text-ink-soft">The answers are fixed: the plan built on them is locked.</p>
+        )}
         {editable && !study.outOfScope && study.designComplete && (
           <p>
-            <Link to={studyPath(study.id, "plan")} className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline">
+            <Link
+              to={studyPath(study.id, "plan")}
+              className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline"
+            >
               Go on to the plan
             </Link>
           </p>
         )}
         {editable && !study.designComplete && !study.outOfScope && (
-          <p className="text-sm text-amber-800">{study.designBlocker ?? "Some questions still need an answer before the plan can be made."}</p>
+          <p className="text-sm text-amber-800">
+            {study.designBlocker ?? "Some questions still need an answer before the plan can be made."}
+          </p>
         )}
       </div>
     );
@@ -48,19 +57,28 @@ export function DesignQuestionnaire({ study, readOnly = false }: { study: Study;
 
   const q = DESIGN_QUESTIONS[index]!;
   // The choice shows at once; if saving fails it falls back to the stored answer.
-  const value = (picked?.key === q.key ? picked.value : undefined) ?? (study.design[q.key] as string | undefined);
+  const value =
+    (picked?.key === q.key ? picked.value : undefined) ?? (study.design[q.key] as string | undefined);
   const stop = q.key === "independence" && (value === "paired" || !!study.outOfScope);
   const controlReady = study.design.hasControl === "yes" && !!study.controlLevel;
   const disabledValues: Record<string, string> =
-    q.key === "comparisons" && !controlReady ? { "vs-control": "Needs a control group: answer “yes” to the previous question and name the control." } : {};
+    q.key === "comparisons" && !controlReady
+      ? { "vs-control": "Needs a control group: answer “yes” to the previous question and name the control." }
+      : {};
 
   const answer = (v: string) => {
     const body: DesignAnswers = { [q.key]: v };
-    if (q.key === "hasControl" && v !== "yes" && study.design.comparisons === "vs-control") body.comparisons = "all-pairs";
+    if (q.key === "hasControl" && v !== "yes" && study.design.comparisons === "vs-control")
+      body.comparisons = "all-pairs";
     setPicked({ key: q.key, value: v });
     save.mutate(body, { onError: () => setPicked(null) });
   };
-  const canGoOn = !save.isPending && !save.isError && value !== undefined && !stop && !(q.key === "hasControl" && value === "yes" && !study.controlLevel);
+  const canGoOn =
+    !save.isPending &&
+    !save.isError &&
+    value !== undefined &&
+    !stop &&
+    !(q.key === "hasControl" && value === "yes" && !study.controlLevel);
 
   return (
     <div className="max-w-2xl">
@@ -69,14 +87,33 @@ export function DesignQuestionnaire({ study, readOnly = false }: { study: Study;
         {save.isPending ? " · saving…" : save.isSuccess ? " · answer saved" : ""}
       </p>
       <div className="mt-2 rounded-lg bg-paper p-5 shadow-sm ring-1 ring-ink/5">
-        <DesignQuestionCard key={q.key} question={q} value={value} onAnswer={answer} disabledValues={disabledValues} />
+        <DesignQuestionCard
+          key={q.key}
+          question={q}
+          value={value}
+          onAnswer={answer}
+          disabledValues={disabledValues}
+        />
         {q.key === "hasControl" && value === "yes" && (
-          <ControlPicker levels={study.levels} value={study.controlLevel} disabled={update.isPending} onChange={(level) => update.mutate({ controlLevel: level })} />
+          <ControlPicker
+            levels={study.levels}
+            value={study.controlLevel}
+            disabled={update.isPending}
+            onChange={(level) => update.mutate({ controlLevel: level })}
+          />
         )}
         {value === "unsure" && <NotSurePanel question={q} />}
       </div>
-      {save.error && <div className="mt-3"><ErrorPanel title="The answer was not saved" message={save.error.message} /></div>}
-      {update.error && <div className="mt-3"><ErrorPanel title="The control was not saved" message={update.error.message} /></div>}
+      {save.error && (
+        <div className="mt-3">
+          <ErrorPanel title="The answer was not saved" message={save.error.message} />
+        </div>
+      )}
+      {update.error && (
+        <div className="mt-3">
+          <ErrorPanel title="The control was not saved" message={update.error.message} />
+        </div>
+      )}
       {stop && (
         <div className="mt-4">
           <OutOfScopeStop reason={study.outOfScope} />

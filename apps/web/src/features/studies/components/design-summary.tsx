@@ -13,11 +13,16 @@ export function DesignSummary({ study, onEdit }: { study: Study; onEdit?: (index
             <dt className="min-w-0 flex-1 text-sm">{q.question}</dt>
             <dd className="flex items-center gap-3 text-sm font-semibold">
               <span className={a === "unsure" ? "text-amber-800" : undefined}>
-                {a ? q.short[a] ?? a : "Not answered"}
+                {a ? (q.short[a] ?? a) : "Not answered"}
                 {q.key === "hasControl" && a === "yes" && study.controlLevel ? `: ${study.controlLevel}` : ""}
               </span>
               {onEdit && (
-                <Button variant="quiet" className="!px-2 !py-1 font-normal text-lake" onClick={() => onEdit(i)} aria-label={`Change the answer to: ${q.question}`}>
+                <Button
+                  variant="quiet"
+                  className="!px-2 !py-1 font-normal text-lake"
+                  onClick={() => onEdit(i)}
+                  aria-label={`Change the answer to: ${q.question}`}
+                >
                   Change
                 </Button>
               )}

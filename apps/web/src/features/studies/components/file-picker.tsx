@@ -36,10 +36,24 @@ export function FilePicker({ onFile, disabled }: { onFile: (file: File) => void;
       >
         <Upload aria-hidden="true" className="h-6 w-6 text-spruce" />
         <span className="font-medium">Choose a data file, or drop it here</span>
-        <span className="text-sm text-ink-soft">CSV or XLSX; one row per measured unit, or one column per group</span>
+        <span className="text-sm text-ink-soft">
+          CSV or XLSX; one row per measured unit, or one column per group
+        </span>
       </label>
-      <input id={id} type="file" accept={ACCEPT} className="sr-only" disabled={disabled} aria-label="Data file" onChange={(e) => take(e.target.files?.[0] ?? undefined)} />
-      {wrong && <p role="alert" className="mt-2 text-sm text-brick">{wrong}</p>}
+      <input
+        id={id}
+        type="file"
+        accept={ACCEPT}
+        className="sr-only"
+        disabled={disabled}
+        aria-label="Data file"
+        onChange={(e) => take(e.target.files?.[0] ?? undefined)}
+      />
+      {wrong && (
+        <p role="alert" className="mt-2 text-sm text-brick">
+          {wrong}
+        </p>
+      )}
     </div>
   );
 }

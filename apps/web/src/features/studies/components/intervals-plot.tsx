@@ -18,7 +18,13 @@ export function IntervalsPlot({ rows, unit, level }: { rows: PairView[]; unit: s
     () =>
       rows
         .filter((r) => r.diff !== null && r.lower !== null && r.upper !== null)
-        .map((r) => ({ label: `${r.a} \u2212 ${r.b}`, diff: r.diff as number, lower: r.lower as number, upper: r.upper as number, clear: (r.lower as number) > 0 || (r.upper as number) < 0 })),
+        .map((r) => ({
+          label: `${r.a} \u2212 ${r.b}`,
+          diff: r.diff as number,
+          lower: r.lower as number,
+          upper: r.upper as number,
+          clear: (r.lower as number) > 0 || (r.upper as number) < 0,
+        })),
     [rows],
   );
   const options = useMemo<Plot.PlotOptions>(
@@ -30,8 +36,24 @@ export function IntervalsPlot({ rows, unit, level }: { rows: PairView[]; unit: s
       y: { label: null, domain: bars.map((b) => b.label) },
       marks: [
         Plot.ruleX([0], { stroke: "#A8432F", strokeWidth: 1.5 }),
-        Plot.ruleY(bars, { y: "label", x1: "lower", x2: "upper", stroke: (d: Bar) => (d.clear ? "#1F4D45" : "#4A5862"), strokeWidth: 2.5 }),
-        Plot.dot(bars, { y: "label", x: "diff", r: 5, symbol: (d: Bar) => (d.clear ? "circle" : "diamond"), fill: (d: Bar) => (d.clear ? "#1F4D45" : "#FBF9F5"), stroke: (d: Bar) => (d.clear ? "#1F4D45" : "#4A5862"), strokeWidth: 1.5, title: (d: Bar) => `${d.label}: ${formatStat(d.diff)} [${formatStat(d.lower)}, ${formatStat(d.upper)}]` }),
+        Plot.ruleY(bars, {
+          y: "label",
+          x1: "lower",
+          x2: "upper",
+          stroke: (d: Bar) => (d.clear ? "#1F4D45" : "#4A5862"),
+          strokeWidth: 2.5,
+        }),
+        Plot.dot(bars, {
+          y: "label",
+          x: "diff",
+          r: 5,
+          symbol: (d: Bar) => (d.clear ? "circle" : "diamond"),
+          fill: (d: Bar) => (d.clear ? "#1F4D45" : "#FBF9F5"),
+          stroke: (d: Bar) => (d.clear ? "#1F4D45" : "#4A5862"),
+          strokeWidth: 1.5,
+          title: (d: Bar) =>
+            `${d.label}: ${formatStat(d.diff)} [${formatStat(d.lower)}, ${formatStat(d.upper)}]`,
+        }),
       ],
     }),
     [bars, unit],

@@ -21,7 +21,13 @@ export function LevelsEditor({ form }: { form: UseFormReturn<CreateStudyForm> })
               className="flex-1 rounded-md border border-ink/25 bg-paper px-3 py-1.5 outline-none focus:border-spruce focus:ring-2 focus:ring-spruce/30"
               {...form.register(`levels.${i}.name` as const)}
             />
-            <Button variant="quiet" aria-label={`Remove level ${i + 1}`} disabled={fields.length <= 2} onClick={() => remove(i)} className="!px-2">
+            <Button
+              variant="quiet"
+              aria-label={`Remove level ${i + 1}`}
+              disabled={fields.length <= 2}
+              onClick={() => remove(i)}
+              className="!px-2"
+            >
               <X aria-hidden="true" className="h-4 w-4" />
             </Button>
           </li>

@@ -10,7 +10,9 @@ const STYLES: Record<StudyStatus, string> = {
 /** Where the study is in its life: draft, in review or approved. Text, not colour alone. */
 export function LifecycleBadge({ status }: { status: StudyStatus }) {
   return (
-    <span className={`inline-flex items-center gap-1 rounded-full px-2.5 py-0.5 text-xs font-semibold ring-1 ${STYLES[status] ?? STYLES.draft}`}>
+    <span
+      className={`inline-flex items-center gap-1 rounded-full px-2.5 py-0.5 text-xs font-semibold ring-1 ${STYLES[status] ?? STYLES.draft}`}
+    >
       {STATUS_LABELS[status] ?? status}
     </span>
   );

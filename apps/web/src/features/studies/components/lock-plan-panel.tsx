@@ -11,14 +11,18 @@ export function LockPlanPanel({ study }: { study: Study }) {
   const blocked = !study.designComplete || !!study.outOfScope;
   return (
     <section aria-labelledby="lock-title" className="rounded-lg border border-spruce/30 bg-paper p-5">
-      <h3 id="lock-title" className="font-semibold">Lock the plan</h3>
+      <h3 id="lock-title" className="font-semibold">
+        Lock the plan
+      </h3>
       <p className="mt-1 max-w-prose text-sm">
-        Locking records the test policy, the post-hoc method, the adjustment, α and the sample size with the date and time, before any data are uploaded.
-        The reviewer sees when it happened.
+        Locking records the test policy, the post-hoc method, the adjustment, α and the sample size with the
+        date and time, before any data are uploaded. The reviewer sees when it happened.
       </p>
       {blocked && (
         <p className="mt-2 text-sm text-amber-800">
-          {study.outOfScope ? "This study is out of scope, so there is no plan to lock." : study.designBlocker ?? "Answer all design questions first."}
+          {study.outOfScope
+            ? "This study is out of scope, so there is no plan to lock."
+            : (study.designBlocker ?? "Answer all design questions first.")}
         </p>
       )}
       {!confirming ? (
@@ -26,14 +30,25 @@ export function LockPlanPanel({ study }: { study: Study }) {
           Lock the plan…
         </Button>
       ) : (
-        <div role="alertdialog" aria-labelledby="lock-confirm-title" aria-describedby="lock-confirm-text" className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-4">
-          <p id="lock-confirm-title" className="font-semibold">Lock the plan now?</p>
+        <div
+          role="alertdialog"
+          aria-labelledby="lock-confirm-title"
+          aria-describedby="lock-confirm-text"
+          className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-4"
+        >
+          <p id="lock-confirm-title" className="font-semibold">
+            Lock the plan now?
+          </p>
           <p id="lock-confirm-text" className="mt-1 max-w-prose text-sm">
-            This cannot be undone. The design answers, the test policy, the post-hoc method, the adjustment, α and the sample size stay as they are now. A
-            different test can still be chosen later, but only with a written reason that the reviewer sees.
+            This cannot be undone. The design answers, the test policy, the post-hoc method, the adjustment, α
+            and the sample size stay as they are now. A different test can still be chosen later, but only
+            with a written reason that the reviewer sees.
           </p>
           <div className="mt-3 flex gap-2">
-            <Button disabled={lock.isPending} onClick={() => lock.mutate(undefined, { onSuccess: () => setConfirming(false) })}>
+            <Button
+              disabled={lock.isPending}
+              onClick={() => lock.mutate(undefined, { onSuccess: () => setConfirming(false) })}
+            >
               {lock.isPending ? "Locking…" : "Yes, lock the plan"}
             </Button>
             <Button variant="secondary" onClick={() => setConfirming(false)}>
@@ -42,7 +57,11 @@ export function LockPlanPanel({ study }: { study: Study }) {
           </div>
         </div>
       )}
-      {lock.error && <div className="mt-3"><ErrorPanel title="The plan was not locked" message={lock.error.message} /></div>}
+      {lock.error && (
+        <div className="mt-3">
+          <ErrorPanel title="The plan was not locked" message={lock.error.message} />
+        </div>
+      )}
     </section>
   );
 }

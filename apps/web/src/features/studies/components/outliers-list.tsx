@@ -9,7 +9,10 @@ function Flagged({ items, kind }: { items: FlaggedValue[]; kind: string }) {
         <li key={`${kind}-${f.row}`} className="num">
           row {f.row}: {formatValue(f.value)}
           {typeof f.studentizedResidual === "number" && Number.isFinite(f.studentizedResidual) && (
-            <span className="font-sans text-ink-soft"> (studentized residual {formatStat(f.studentizedResidual)})</span>
+            <span className="font-sans text-ink-soft">
+              {" "}
+              (studentized residual {formatStat(f.studentizedResidual)})
+            </span>
           )}{" "}
           <AttentionMark label={kind} />
         </li>
@@ -21,14 +24,23 @@ function Flagged({ items, kind }: { items: FlaggedValue[]; kind: string }) {
 /** Values flagged by Tukey's fences or by large studentized residuals, with their row numbers. */
 export function OutliersList({ outliers }: { outliers: Maybe<OutlierPart> }) {
   if (!isAvailable(outliers)) return <p className="text-sm text-ink-soft">{reasonOf(outliers)}</p>;
-  const groups = (outliers.groups ?? []).filter((g) => (g.mild?.length ?? 0) + (g.extreme?.length ?? 0) + (g.largeResidual?.length ?? 0) > 0);
-  if (groups.length === 0) return <p className="text-sm">No value lies beyond 1.5 IQR from its group's quartiles, and no studentized residual exceeds ±3.</p>;
+  const groups = (outliers.groups ?? []).filter(
+    (g) => (g.mild?.length ?? 0) + (g.extreme?.length ?? 0) + (g.largeResidual?.length ?? 0) > 0,
+  );
+  if (groups.length === 0)
+    return (
+      <p className="text-sm">
+        No value lies beyond 1.5 IQR from its group's quartiles, and no studentized residual exceeds ±3.
+      </p>
+    );
   return (
     <ul className="flex flex-col gap-3 text-sm">
       {groups.map((g) => {
         const extremeRows = new Set((g.extreme ?? []).map((f) => f.row));
         const mildRows = new Set((g.mild ?? []).map((f) => f.row));
-        const residualOnly = (g.largeResidual ?? []).filter((f) => !extremeRows.has(f.row) && !mildRows.has(f.row));
+        const residualOnly = (g.largeResidual ?? []).filter(
+          (f) => !extremeRows.has(f.row) && !mildRows.has(f.row),
+        );
         return (
           <li key={g.group}>
             <p className="font-medium">{g.group}</p>

@@ -7,7 +7,16 @@ import { PowerCalculator } from "./power-calculator";
 
 afterEach(() => vi.unstubAllGlobals());
 
-const designed = makeStudy({ designComplete: true, design: { independence: "independent", scale: "continuous", hasControl: "no", comparisons: "all-pairs", assignment: "randomized" } });
+const designed = makeStudy({
+  designComplete: true,
+  design: {
+    independence: "independent",
+    scale: "continuous",
+    hasControl: "no",
+    comparisons: "all-pairs",
+    assignment: "randomized",
+  },
+});
 
 describe("PlanForm", () => {
   it.each([
@@ -28,7 +37,13 @@ describe("PlanForm", () => {
     let sent: unknown;
     vi.stubGlobal(
       "fetch",
-      vi.fn(routeFetch((method, path, body) => (method === "PUT" && path === "/studies/7/plan" ? ((sent = body), { body: { study: designed } }) : undefined))),
+      vi.fn(
+        routeFetch((method, path, body) =>
+          method === "PUT" && path === "/studies/7/plan"
+            ? ((sent = body), { body: { study: designed } })
+            : undefined,
+        ),
+      ),
     );
     renderWithStudy(designed, (s) => <PlanForm study={s} />);
     fireEvent.click(screen.getByLabelText(/Welch's ANOVA first/));
@@ -64,8 +79,25 @@ describe("PowerCalculator", () => {
   });
 
   it("shows n per group from the server's answer", async () => {
-    const answer = { k: 3, effectF: 0.25, alpha: 0.05, nPerGroup: 53, totalN: 159, power: 0.8049, curve: [{ n: 2, power: 0.06 }, { n: 53, power: 0.8049 }, { n: 106, power: 0.99 }] };
-    vi.stubGlobal("fetch", vi.fn(routeFetch((method, path) => (method === "POST" && path === "/power" ? { body: answer } : undefined))));
+    const answer = {
+      k: 3,
+      effectF: 0.25,
+      alpha: 0.05,
+      nPerGroup: 53,
+      totalN: 159,
+      power: 0.8049,
+      curve: [
+        { n: 2, power: 0.06 },
+        { n: 53, power: 0.8049 },
+        { n: 106, power: 0.99 },
+      ],
+    };
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(
+        routeFetch((method, path) => (method === "POST" && path === "/power" ? { body: answer } : undefined)),
+      ),
+    );
     renderWithStudy(designed, (s) => <PowerCalculator study={s} editable />);
     fireEvent.click(screen.getByRole("button", { name: "Calculate" }));
     const text = (await screen.findByTestId("power-answer")).textContent ?? "";

@@ -42,12 +42,20 @@ export function PlanForm({ study }: { study: Study }) {
               <label key={p} className="flex items-start gap-2 text-sm">
                 <input type="radio" value={p} className="mt-1 accent-spruce" {...register("policy")} />
                 <span>
-                  <span className="font-medium">{POLICY_TEXT[p].title}.</span> <span className="text-ink-soft">{POLICY_TEXT[p].line}</span>
+                  <span className="font-medium">{POLICY_TEXT[p].title}.</span>{" "}
+                  <span className="text-ink-soft">{POLICY_TEXT[p].line}</span>
                 </span>
               </label>
             ))}
-            <p className="text-xs text-ink-soft">Either way, a rank-based test (Kruskal–Wallis) is used when the outcome is a rating or the checks find extreme values.</p>
-            {formState.errors.policy && <p role="alert" className="text-sm text-brick">{formState.errors.policy.message}</p>}
+            <p className="text-xs text-ink-soft">
+              Either way, a rank-based test (Kruskal–Wallis) is used when the outcome is a rating or the
+              checks find extreme values.
+            </p>
+            {formState.errors.policy && (
+              <p role="alert" className="text-sm text-brick">
+                {formState.errors.policy.message}
+              </p>
+            )}
           </fieldset>
           <fieldset className="flex flex-col gap-2">
             <legend className="text-sm font-semibold">p-value adjustment</legend>
@@ -55,15 +63,21 @@ export function PlanForm({ study }: { study: Study }) {
               <label key={a} className="flex items-start gap-2 text-sm">
                 <input type="radio" value={a} className="mt-1 accent-spruce" {...register("adjust")} />
                 <span>
-                  <span className="font-medium">{ADJUST_NAMES[a]}.</span> <span className="text-ink-soft">{ADJUST_LINES[a]}</span>
+                  <span className="font-medium">{ADJUST_NAMES[a]}.</span>{" "}
+                  <span className="text-ink-soft">{ADJUST_LINES[a]}</span>
                 </span>
               </label>
             ))}
             <p className="text-xs text-ink-soft">
-              Applies to comparisons built from separate p-values (Dunn's test, Welch t-tests against a control). Tukey–Kramer, Games–Howell and Dunnett hold the
-              family-wise error through their own reference distributions.
+              Applies to comparisons built from separate p-values (Dunn's test, Welch t-tests against a
+              control). Tukey–Kramer, Games–Howell and Dunnett hold the family-wise error through their own
+              reference distributions.
             </p>
-            {formState.errors.adjust && <p role="alert" className="text-sm text-brick">{formState.errors.adjust.message}</p>}
+            {formState.errors.adjust && (
+              <p role="alert" className="text-sm text-brick">
+                {formState.errors.adjust.message}
+              </p>
+            )}
           </fieldset>
           <div className="max-w-xs">
             <TextField
@@ -80,7 +94,11 @@ export function PlanForm({ study }: { study: Study }) {
             <Button type="submit" disabled={save.isPending}>
               {save.isPending ? "Saving…" : "Save the plan"}
             </Button>
-            {save.isSuccess && !formState.isDirty && <span className="text-sm text-spruce" role="status">Plan saved.</span>}
+            {save.isSuccess && !formState.isDirty && (
+              <span className="text-sm text-spruce" role="status">
+                Plan saved.
+              </span>
+            )}
           </div>
         </>
       )}

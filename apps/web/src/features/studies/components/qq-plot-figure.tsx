@@ -14,7 +14,9 @@ function quantile(sorted: number[], q: number): number {
 export function QqPlotFigure({ qq, unit }: { qq: QqPart; unit: string }) {
   const points = useMemo(() => {
     const ys = qq.residuals ?? qq.sample ?? [];
-    return qq.theoretical.map((x, i) => ({ x, y: ys[i] as number })).filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
+    return qq.theoretical
+      .map((x, i) => ({ x, y: ys[i] as number }))
+      .filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
   }, [qq]);
   const options = useMemo<Plot.PlotOptions>(() => {
     const xs = points.map((p) => p.x).sort((a, b) => a - b);
@@ -33,7 +35,10 @@ export function QqPlotFigure({ qq, unit }: { qq: QqPart; unit: string }) {
       marginLeft: 56,
       x: { label: "Normal quantile", grid: true },
       y: { label: `Residual${unit ? ` (${unit})` : ""}`, grid: true },
-      marks: [Plot.line(line, { x: "x", y: "y", stroke: "#2F6E91", strokeDasharray: "5 3" }), Plot.dot(points, { x: "x", y: "y", r: 3, fill: "#1F4D45", fillOpacity: 0.8 })],
+      marks: [
+        Plot.line(line, { x: "x", y: "y", stroke: "#2F6E91", strokeDasharray: "5 3" }),
+        Plot.dot(points, { x: "x", y: "y", r: 3, fill: "#1F4D45", fillOpacity: 0.8 }),
+      ],
     };
   }, [points, unit]);
   if (points.length < 2) return <p className="text-sm text-ink-soft">Too few residuals for a Q–Q plot.</p>;

@@ -15,7 +15,10 @@ import { UnavailableNote } from "./unavailable-note";
 /** A sentence only when it carries no missing number. */
 function clean(lines: unknown): string[] {
   if (!Array.isArray(lines)) return [];
-  return lines.filter((l): l is string => typeof l === "string" && l.trim().length > 0 && !/\b(NaN|undefined|Infinity|null)\b/.test(l));
+  return lines.filter(
+    (l): l is string =>
+      typeof l === "string" && l.trim().length > 0 && !/\b(NaN|undefined|Infinity|null)\b/.test(l),
+  );
 }
 
 /**
@@ -45,39 +48,60 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
   return (
     <div className="flex flex-col gap-5" data-testid="results-panel">
       <p className="text-sm text-ink-soft">
-        {analysis.datasetVersion !== null ? `Data version ${analysis.datasetVersion} · ` : ""}run {formatDateTime(analysis.createdAt)}
+        {analysis.datasetVersion !== null ? `Data version ${analysis.datasetVersion} · ` : ""}run{" "}
+        {formatDateTime(analysis.createdAt)}
         {analysis.createdBy ? ` by ${analysis.createdBy.displayName}` : ""} · engine {analysis.engineVersion}
       </p>
       {analysis.override && (
         <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm">
-          <span className="font-semibold text-amber-800">Override, flagged for the reviewer.</span> {testTitle(analysis.chosenTest)} was used instead of the recommended{" "}
+          <span className="font-semibold text-amber-800">Override, flagged for the reviewer.</span>{" "}
+          {testTitle(analysis.chosenTest)} was used instead of the recommended{" "}
           {testName(analysis.recommendedTest)}. Reason given: “{analysis.override.justification}”
         </p>
       )}
 
       <section aria-labelledby="summary-title" className="rounded-lg bg-paper p-5 shadow-sm">
-        <h3 id="summary-title" className="font-semibold">In plain words</h3>
+        <h3 id="summary-title" className="font-semibold">
+          In plain words
+        </h3>
         <div className="mt-2 max-w-prose space-y-2" data-testid="plain-summary">
-          {(summary.length > 0 ? summary : [fallback]).map((s) => <p key={s}>{s}</p>)}
+          {(summary.length > 0 ? summary : [fallback]).map((s) => (
+            <p key={s}>{s}</p>
+          ))}
         </div>
       </section>
 
       <section aria-labelledby="omnibus-title" className="rounded-lg bg-paper p-5 shadow-sm">
-        <h3 id="omnibus-title" className="font-semibold">{testTitle(analysis.chosenTest)}</h3>
+        <h3 id="omnibus-title" className="font-semibold">
+          {testTitle(analysis.chosenTest)}
+        </h3>
         {"unavailable" in o ? (
-          <div className="mt-2"><UnavailableNote what={testTitle(analysis.chosenTest)} value={{ available: false, reason: o.unavailable }} /></div>
+          <div className="mt-2">
+            <UnavailableNote
+              what={testTitle(analysis.chosenTest)}
+              value={{ available: false, reason: o.unavailable }}
+            />
+          </div>
         ) : (
           <>
             <p className="mt-2 text-lg">
               <OmnibusLine o={o} />
-              {significant ? <span className="ml-2 text-sm font-medium text-spruce">below α = {formatAlpha(alpha)}</span> : <span className="ml-2 text-sm text-ink-soft">not below α = {formatAlpha(alpha)}</span>}
+              {significant ? (
+                <span className="ml-2 text-sm font-medium text-spruce">below α = {formatAlpha(alpha)}</span>
+              ) : (
+                <span className="ml-2 text-sm text-ink-soft">not below α = {formatAlpha(alpha)}</span>
+              )}
             </p>
             <ul className="mt-3 space-y-1 text-sm">
               {o.effect ? (
                 <li>
-                  Effect size: <S>{o.effect.symbol.charAt(0)}</S>{o.effect.symbol.slice(1)} = <span className="tabular-nums">{formatBounded(o.effect.value)}</span>
-                  {o.effect.note ? ` (${o.effect.note})` : ""} — the share of the variation in {outcome} that goes with the grouping
-                  {o.effect.symbol === "ε²" ? ", on ranks" : ""}. As a rough guide, .01 is small, .06 medium and .14 large.
+                  Effect size: <S>{o.effect.symbol.charAt(0)}</S>
+                  {o.effect.symbol.slice(1)} ={" "}
+                  <span className="tabular-nums">{formatBounded(o.effect.value)}</span>
+                  {o.effect.note ? ` (${o.effect.note})` : ""} — the share of the variation in {outcome} that
+                  goes with the grouping
+                  {o.effect.symbol === "ε²" ? ", on ranks" : ""}. As a rough guide, .01 is small, .06 medium
+                  and .14 large.
                   {o.effect.value < 0 && " A value below zero means no detectable effect."}
                 </li>
               ) : (
@@ -85,14 +109,22 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
               )}
               {eta && (
                 <li>
-                  <S>η</S>² = <span className="tabular-nums">{formatBounded(eta.value)}</span>, {Math.round((eta.level ?? 0.95) * 100)}% CI{" "}
-                  <span className="tabular-nums">[{formatBounded(eta.lower)}, {formatBounded(eta.upper)}]</span>
+                  <S>η</S>² = <span className="tabular-nums">{formatBounded(eta.value)}</span>,{" "}
+                  {Math.round((eta.level ?? 0.95) * 100)}% CI{" "}
+                  <span className="tabular-nums">
+                    [{formatBounded(eta.lower)}, {formatBounded(eta.upper)}]
+                  </span>
                 </li>
               )}
               {"cohensF" in o && o.cohensF !== undefined && analysis.chosenTest !== "kruskal-wallis" && (
                 <li>
                   Cohen's <S>f</S> = <span className="tabular-nums">{formatStat(o.cohensF)}</span>
-                  {study.plan.power ? <span className="text-ink-soft"> (the plan was sized for f = {formatStat(study.plan.power.effectF)})</span> : null}
+                  {study.plan.power ? (
+                    <span className="text-ink-soft">
+                      {" "}
+                      (the plan was sized for f = {formatStat(study.plan.power.effectF)})
+                    </span>
+                  ) : null}
                 </li>
               )}
             </ul>
@@ -101,20 +133,40 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
       </section>
 
       <section aria-labelledby="posthoc-title" className="rounded-lg bg-paper p-5 shadow-sm">
-        <h3 id="posthoc-title" className="font-semibold">Which groups differ</h3>
+        <h3 id="posthoc-title" className="font-semibold">
+          Which groups differ
+        </h3>
         <p className="mt-1 text-sm text-ink-soft">
-          {posthocName(analysis.posthocMethod)}, holding the chance of any false alarm over the family at α = {formatAlpha(alpha)}.
+          {posthocName(analysis.posthocMethod)}, holding the chance of any false alarm over the family at α ={" "}
+          {formatAlpha(alpha)}.
           {fwe && num(fwe.m) !== null && num(fwe.fwerIndependent) !== null && (
-            <> Without that protection, {fwe.m} comparisons would carry a {formatPercent(fwe.fwerIndependent)} chance of at least one.</>
+            <>
+              {" "}
+              Without that protection, {fwe.m} comparisons would carry a {formatPercent(fwe.fwerIndependent)}{" "}
+              chance of at least one.
+            </>
           )}
         </p>
-        {significant === false && <p className="mt-2 text-sm">The omnibus test found no difference, so these comparisons are shown for completeness and should not be read as findings.</p>}
+        {significant === false && (
+          <p className="mt-2 text-sm">
+            The omnibus test found no difference, so these comparisons are shown for completeness and should
+            not be read as findings.
+          </p>
+        )}
         <div className="mt-3 flex flex-col gap-4">
           {"unavailable" in ph ? (
-            <UnavailableNote what="The post-hoc comparisons" value={{ available: false, reason: ph.unavailable }} />
+            <UnavailableNote
+              what="The post-hoc comparisons"
+              value={{ available: false, reason: ph.unavailable }}
+            />
           ) : (
             <>
-              <PosthocTable view={ph} methodName={posthocName(analysis.posthocMethod)} alpha={alpha} unit={study.outcomeUnit} />
+              <PosthocTable
+                view={ph}
+                methodName={posthocName(analysis.posthocMethod)}
+                alpha={alpha}
+                unit={study.outcomeUnit}
+              />
               <IntervalsPlot rows={ph.rows} unit={study.outcomeUnit} level={1 - alpha} />
             </>
           )}

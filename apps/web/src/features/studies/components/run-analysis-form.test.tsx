@@ -11,10 +11,18 @@ function setup() {
   const sent: unknown[] = [];
   vi.stubGlobal(
     "fetch",
-    vi.fn(routeFetch((method, path, body) => (method === "POST" && path === "/studies/7/analyses" ? (sent.push(body), { status: 201, body: { analysis: makeAnalysis() } }) : undefined))),
+    vi.fn(
+      routeFetch((method, path, body) =>
+        method === "POST" && path === "/studies/7/analyses"
+          ? (sent.push(body), { status: 201, body: { analysis: makeAnalysis() } })
+          : undefined,
+      ),
+    ),
   );
   const onDone = vi.fn();
-  renderWithProviders(<RunAnalysisForm studyId={7} datasetId={11} datasetVersion={1} recommended="welch" onDone={onDone} />);
+  renderWithProviders(
+    <RunAnalysisForm studyId={7} datasetId={11} datasetVersion={1} recommended="welch" onDone={onDone} />,
+  );
   return { sent, onDone };
 }
 
@@ -33,7 +41,11 @@ describe("RunAnalysisForm", () => {
     fireEvent.change(screen.getByLabelText("Test to use"), { target: { value: "kruskal-wallis" } });
     fireEvent.input(screen.getByLabelText("Why this test instead"), { target: { value: "Too short." } });
     fireEvent.click(screen.getByRole("button", { name: "Run the analysis" }));
-    expect(await screen.findByText("Write at least 20 characters on why you depart from the recommendation (10 so far)")).toBeTruthy();
+    expect(
+      await screen.findByText(
+        "Write at least 20 characters on why you depart from the recommendation (10 so far)",
+      ),
+    ).toBeTruthy();
     expect(sent).toEqual([]);
 
     const why = "The outcome is a 1–7 rating recorded by eye, so ranks suit it better.";
@@ -46,7 +58,9 @@ describe("RunAnalysisForm", () => {
   it("an override must name a test", async () => {
     const { sent } = setup();
     fireEvent.click(screen.getByLabelText(/Another test, with a written reason/));
-    fireEvent.input(await screen.findByLabelText("Why this test instead"), { target: { value: "A long enough reason for the reviewer to read." } });
+    fireEvent.input(await screen.findByLabelText("Why this test instead"), {
+      target: { value: "A long enough reason for the reviewer to read." },
+    });
     fireEvent.click(screen.getByRole("button", { name: "Run the analysis" }));
     expect(await screen.findByText("Choose the test you want to use instead")).toBeTruthy();
     expect(sent).toEqual([]);

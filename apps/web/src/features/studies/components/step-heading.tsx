@@ -1,7 +1,15 @@
 import type { ReactNode } from "react";
 
 /** The heading of one step on the study page, with a one-line intro. */
-export function StepHeading({ title, intro, aside }: { title: string; intro?: ReactNode; aside?: ReactNode }) {
+export function StepHeading({
+  title,
+  intro,
+  aside,
+}: {
+  title: string;
+  intro?: ReactNode;
+  aside?: ReactNode;
+}) {
   return (
     <header className="mb-5 flex flex-wrap items-start justify-between gap-3">
       <div>

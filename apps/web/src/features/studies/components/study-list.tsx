@@ -24,16 +24,22 @@ export function StudyList({ studies }: { studies: Study[] }) {
                 {s.title}
               </Link>
               <LifecycleBadge status={s.status} />
-              {s.context !== "general" && <span className="text-xs font-medium uppercase tracking-wide text-ink-soft">{CONTEXT_LABELS[s.context]}</span>}
+              {s.context !== "general" && (
+                <span className="text-xs font-medium uppercase tracking-wide text-ink-soft">
+                  {CONTEXT_LABELS[s.context]}
+                </span>
+              )}
             </div>
             <p className="mt-1 text-sm text-ink-soft">
               {s.outcomeName}
-              {s.outcomeUnit ? ` (${s.outcomeUnit})` : ""} across {s.levels.length} levels of {s.factorName} · {s.owner.displayName} · updated {formatDate(s.updatedAt)}
+              {s.outcomeUnit ? ` (${s.outcomeUnit})` : ""} across {s.levels.length} levels of {s.factorName} ·{" "}
+              {s.owner.displayName} · updated {formatDate(s.updatedAt)}
             </p>
             <p className="mt-2 text-sm">
               {next ? (
                 <>
-                  <span className="font-medium">Next: {next.label}</span> <span className="text-ink-soft">— {next.fact}</span>
+                  <span className="font-medium">Next: {next.label}</span>{" "}
+                  <span className="text-ink-soft">— {next.fact}</span>
                 </>
               ) : (
                 <span className="text-ink-soft">Every analysis step is done.</span>

@@ -34,7 +34,9 @@ export function StudyOverview({ study, steps }: { study: Study; steps: StepStatu
             {study.levels.map((l) => (
               <li key={l} className="rounded bg-panel px-2 py-0.5 text-sm">
                 {l}
-                {l === study.controlLevel && <span className="ml-1 text-xs font-semibold text-spruce">control</span>}
+                {l === study.controlLevel && (
+                  <span className="ml-1 text-xs font-semibold text-spruce">control</span>
+                )}
               </li>
             ))}
           </ul>
@@ -47,7 +49,10 @@ export function StudyOverview({ study, steps }: { study: Study; steps: StepStatu
         <Row label="Created">{formatDateTime(study.createdAt)}</Row>
       </dl>
       <p className="mt-6">
-        <Link to={studyPath(study.id, next)} className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline">
+        <Link
+          to={studyPath(study.id, next)}
+          className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline"
+        >
           Continue: {STEP_LABELS[next]}
         </Link>
       </p>

@@ -15,7 +15,9 @@ function Marker({ state, attention }: { state: StepState; attention?: boolean })
     );
   if (state === "open")
     return (
-      <span className={`${base} bg-paper ring-2 ${attention ? "text-amber-800 ring-amber" : "text-spruce ring-spruce"}`}>
+      <span
+        className={`${base} bg-paper ring-2 ${attention ? "text-amber-800 ring-amber" : "text-spruce ring-spruce"}`}
+      >
         <Circle aria-hidden="true" className="h-2.5 w-2.5 fill-current" />
       </span>
     );
@@ -34,12 +36,20 @@ export function StudyTrail({ studyId, steps }: { studyId: number; steps: StepSta
         {steps.map((s, i) => {
           const content = (
             <>
-              {i < steps.length - 1 && <span aria-hidden="true" className="absolute left-[13px] top-8 h-[calc(100%-1.25rem)] w-0.5 bg-ink/15" />}
+              {i < steps.length - 1 && (
+                <span
+                  aria-hidden="true"
+                  className="absolute left-[13px] top-8 h-[calc(100%-1.25rem)] w-0.5 bg-ink/15"
+                />
+              )}
               <Marker state={s.state} attention={s.attention} />
               <span className="min-w-0">
                 <span className="block text-sm font-semibold">{s.label}</span>
                 <span className="block text-xs text-ink-soft">
-                  <span className={s.attention ? "font-semibold text-amber-800" : "font-medium"}>{STATE_WORD[s.state]}</span> · {s.fact}
+                  <span className={s.attention ? "font-semibold text-amber-800" : "font-medium"}>
+                    {STATE_WORD[s.state]}
+                  </span>{" "}
+                  · {s.fact}
                 </span>
               </span>
             </>

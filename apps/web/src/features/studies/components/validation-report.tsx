@@ -13,19 +13,31 @@ const MAX_LISTED = 100;
  * What was read from a file: rows read and used, each excluded row with its number and reason,
  * the groups found against the plan's levels (unknown and missing ones flagged) and n per group.
  */
-export function ValidationReport({ report, levels, stored }: { report: Report; levels: string[]; stored: boolean }) {
+export function ValidationReport({
+  report,
+  levels,
+  stored,
+}: {
+  report: Report;
+  levels: string[];
+  stored: boolean;
+}) {
   const unknown = new Set(report.unknownLevels);
   const missing = report.missingLevels.filter((l) => !report.groupsFound.some((g) => g.name === l));
   const excluded = Math.max(report.excludedCount ?? 0, report.excluded.length);
   const total = report.groupsFound.reduce((s, g) => s + g.n, 0);
   return (
-    <section aria-labelledby="report-title" className={`rounded-lg p-5 shadow-sm ${stored ? "bg-paper" : "border-l-4 border-brick bg-brick-100"}`}>
+    <section
+      aria-labelledby="report-title"
+      className={`rounded-lg p-5 shadow-sm ${stored ? "bg-paper" : "border-l-4 border-brick bg-brick-100"}`}
+    >
       <h3 id="report-title" className="font-semibold">
         {stored ? "What was read" : "The file was read but not stored"}
       </h3>
       <p className="mt-1 max-w-prose">
         {report.rowsRead} row{report.rowsRead === 1 ? "" : "s"} read, {report.rowsUsed} used
-        {excluded > 0 ? `, ${excluded} excluded` : ", none excluded"}. {total} value{total === 1 ? "" : "s"} in {report.groupsFound.length} group
+        {excluded > 0 ? `, ${excluded} excluded` : ", none excluded"}. {total} value{total === 1 ? "" : "s"}{" "}
+        in {report.groupsFound.length} group
         {report.groupsFound.length === 1 ? "" : "s"}.
         {!stored && " Fix the problems below and upload the file again; nothing was saved."}
       </p>
@@ -52,7 +64,13 @@ export function ValidationReport({ report, levels, stored }: { report: Report; l
                 <tr key={g.name} className="border-t border-ink/10">
                   <td className="py-1 pr-3">{g.name}</td>
                   <td className="num py-1 pr-3 text-right">{g.n}</td>
-                  <td className="py-1">{unknown.has(g.name) || !levels.includes(g.name) ? <AttentionMark label="not a planned level" /> : "yes"}</td>
+                  <td className="py-1">
+                    {unknown.has(g.name) || !levels.includes(g.name) ? (
+                      <AttentionMark label="not a planned level" />
+                    ) : (
+                      "yes"
+                    )}
+                  </td>
                 </tr>
               ))}
               {missing.map((l) => (
@@ -68,8 +86,9 @@ export function ValidationReport({ report, levels, stored }: { report: Report; l
           </table>
           {report.unknownLevels.length > 0 && (
             <p className="mt-2 text-sm">
-              Unknown level{report.unknownLevels.length === 1 ? "" : "s"}: {report.unknownLevels.map((l) => `“${l}”`).join(", ")}. Check the spelling against the
-              plan's levels ({levels.join(", ")}).
+              Unknown level{report.unknownLevels.length === 1 ? "" : "s"}:{" "}
+              {report.unknownLevels.map((l) => `“${l}”`).join(", ")}. Check the spelling against the plan's
+              levels ({levels.join(", ")}).
             </p>
           )}
         </div>
@@ -92,7 +111,11 @@ export function ValidationReport({ report, levels, stored }: { report: Report; l
                   <tr key={`${x.row}-${x.column ?? ""}-${i}`} className="border-t border-ink/10">
                     <td className="num py-1 pr-3 text-right">row {x.row}</td>
                     <td className="py-1 pr-3">{x.column ?? "—"}</td>
-                    <td className="num py-1 pr-3">{x.value === null || x.value === undefined || x.value === "" ? "(empty)" : String(x.value)}</td>
+                    <td className="num py-1 pr-3">
+                      {x.value === null || x.value === undefined || x.value === ""
+                        ? "(empty)"
+                        : String(x.value)}
+                    </td>
                     <td className="py-1">{REASONS[x.reason] ?? x.reason}</td>
                   </tr>
                 ))}
@@ -100,7 +123,9 @@ export function ValidationReport({ report, levels, stored }: { report: Report; l
             </table>
           )}
           {excluded > Math.min(MAX_LISTED, report.excluded.length) && (
-            <p className="mt-1 text-xs text-ink-soft">The first {Math.min(MAX_LISTED, report.excluded.length)} of {excluded} are listed.</p>
+            <p className="mt-1 text-xs text-ink-soft">
+              The first {Math.min(MAX_LISTED, report.excluded.length)} of {excluded} are listed.
+            </p>
           )}
         </div>
       </div>

@@ -1,7 +1,13 @@
 import type { ReactNode } from "react";
 
 /** A short explanation a reader opens when they want it. */
-export function WhatThisMeans({ children, title = "What this means" }: { children: ReactNode; title?: string }) {
+export function WhatThisMeans({
+  children,
+  title = "What this means",
+}: {
+  children: ReactNode;
+  title?: string;
+}) {
   return (
     <details className="group mt-2 text-sm">
       <summary className="cursor-pointer select-none text-lake hover:underline">{title}</summary>

@@ -52,7 +52,19 @@ export function makeDataset(over: Partial<Dataset> = {}): Dataset {
     outcomeColumn: "Strength",
     layout: "long",
     afterPlanLock: true,
-    report: { rowsRead: 30, rowsUsed: 30, excluded: [], groupsFound: [{ name: "Epoxy", n: 10 }, { name: "Acrylic", n: 10 }, { name: "Urethane", n: 10 }], unknownLevels: [], missingLevels: [], messages: [] },
+    report: {
+      rowsRead: 30,
+      rowsUsed: 30,
+      excluded: [],
+      groupsFound: [
+        { name: "Epoxy", n: 10 },
+        { name: "Acrylic", n: 10 },
+        { name: "Urethane", n: 10 },
+      ],
+      unknownLevels: [],
+      missingLevels: [],
+      messages: [],
+    },
     ...over,
   };
 }

@@ -29,13 +29,19 @@ export function renderWithStudy(study: Study, children: (s: Study) => ReactEleme
 }
 
 /** A fetch stand-in that answers by route; unknown routes fail loudly. */
-export function routeFetch(handler: (method: string, path: string, body: unknown) => { status?: number; body: unknown } | undefined) {
+export function routeFetch(
+  handler: (method: string, path: string, body: unknown) => { status?: number; body: unknown } | undefined,
+) {
   return async (input: RequestInfo | URL, init?: RequestInit) => {
     const url = typeof input === "string" ? input : input.toString();
     const method = init?.method ?? "GET";
     const body = typeof init?.body === "string" ? (JSON.parse(init.body) as unknown) : undefined;
     const res = handler(method, url.replace(/^\/api/, ""), body);
-    if (!res) return new Response(JSON.stringify({ error: { code: "not_found", message: `No mock for ${method} ${url}` } }), { status: 404 });
+    if (!res)
+      return new Response(
+        JSON.stringify({ error: { code: "not_found", message: `No mock for ${method} ${url}` } }),
+        { status: 404 },
+      );
     return new Response(JSON.stringify(res.body), { status: res.status ?? 200 });
   };
 }
