@@ -1,5 +1,6 @@
 import { StatsInputError } from "./errors.js";
 import { DEFAULT_ALPHA } from "./choice/thresholds.js";
+import type { OutcomeQuestion, PlannedSizes, TestPlan } from "./choice/plan-test.js";
 
 export type Adjustment = "holm" | "bonferroni" | "bh";
 export type Policy = "classic-first" | "welch-first";
@@ -19,6 +20,14 @@ export interface AnalyzeOptions {
   comparisons?: Comparisons;
   /** false or "paired" when the same units are measured in every group (out of scope). */
   independent?: boolean | "paired";
+  /** For a continuous outcome: a question about means (default) or about which group tends to have larger values. */
+  question?: OutcomeQuestion;
+  /** Whether the plan puts about the same number of units in every group (default "unequal", the cautious reading). */
+  plannedSizes?: PlannedSizes;
+  /** A locked plan's test decision; when given it is used as it stands instead of being derived from the answers above. */
+  plan?: TestPlan;
+  /** The seeded error-rate simulation for the data at hand; false skips it (default: run with seed 1). */
+  errorRateCheck?: false | { seed?: number; runs?: number };
 }
 
 export interface ResolvedOptions {
@@ -29,6 +38,10 @@ export interface ResolvedOptions {
   scale: Scale;
   comparisons: Comparisons;
   independent: boolean | "paired";
+  question: OutcomeQuestion;
+  plannedSizes: PlannedSizes;
+  plan: TestPlan | undefined;
+  errorRateCheck: false | { seed: number; runs: number | undefined };
 }
 
 function oneOf<T extends string>(name: string, value: unknown, allowed: readonly T[], fallback: T): T {
@@ -79,5 +92,24 @@ export function resolveOptions(options: AnalyzeOptions, groupNames: readonly str
     scale: oneOf("scale", options.scale, ["continuous", "ordinal"], "continuous"),
     comparisons,
     independent,
+    question: oneOf("question", options.question, ["means", "larger-values"], "means"),
+    plannedSizes: oneOf("plannedSizes", options.plannedSizes, ["equal", "unequal"], "unequal"),
+    plan: options.plan,
+    errorRateCheck: resolveErrorRateCheck(options.errorRateCheck),
   };
+}
+
+function resolveErrorRateCheck(o: AnalyzeOptions["errorRateCheck"]): ResolvedOptions["errorRateCheck"] {
+  if (o === false) return false;
+  const seed = o?.seed ?? 1;
+  if (!Number.isSafeInteger(seed) || seed < 0) {
+    throw new StatsInputError(`The errorRateCheck seed must be a non-negative integer; got ${String(seed)}`);
+  }
+  const runs = o?.runs;
+  if (runs !== undefined && !(Number.isSafeInteger(runs) && runs >= 100 && runs <= 100_000)) {
+    throw new StatsInputError(
+      `The errorRateCheck runs must be an integer from 100 to 100000; got ${String(runs)}`,
+    );
+  }
+  return { seed, runs };
 }

@@ -36,6 +36,7 @@ describe("analyze", () => {
       "posthoc",
       "familyWiseError",
       "recommendation",
+      "sensitivity",
       "warnings",
     ]) {
       expect(r, key).toHaveProperty(key);
@@ -147,7 +148,7 @@ describe("analyze", () => {
 
   it("works for two groups, with the two-sample caveat", () => {
     const r = analyze({ groups: orchard.slice(0, 2) });
-    expect(r.recommendation.caveats.join(" ")).toContain("two-sample");
+    expect(r.recommendation.caveats.map((c) => c.text).join(" ")).toContain("two-sample");
   });
 
   it("runs the post-hoc families, with comparisons against a named control", () => {
@@ -160,7 +161,8 @@ describe("analyze", () => {
     expect(control.dunnett).toHaveLength(2);
     expect(control.welchHolm).toHaveLength(2);
     expect(control.dunn).toHaveLength(2);
-    expect(r.recommendation.posthoc).toBe("dunnett");
+    // No planned sizes given: the cautious reading (unequal) puts a means question on Welch's ANOVA.
+    expect(r.recommendation.posthoc).toBe("welch-vs-control-holm");
     expect(r.familyWiseError).toMatchObject({ m: 3 });
     assertClean(r);
   });

@@ -5,7 +5,9 @@ import { outliers } from "./assumptions/outliers.js";
 import { qqPlot } from "./assumptions/qq-plot.js";
 import { sdRatio as sdRatioOf } from "./assumptions/sd-ratio.js";
 import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./assumptions/shapiro-wilk.js";
-import { recommendTest, type Recommendation } from "./choice/recommend-test.js";
+import { decideTest, type TestDecision } from "./choice/decide-test.js";
+import { planTest, type OmnibusTest } from "./choice/plan-test.js";
+import { sensitivityAnalyses, type SensitivityAnalyses } from "./choice/sensitivity.js";
 import { describeGroups, type GroupDescription } from "./descriptives/describe.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupInput } from "./numeric/centred-sample.js";
@@ -45,7 +47,10 @@ export interface AnalysisResult {
   qq: object;
   posthoc: object;
   familyWiseError: object;
-  recommendation: Recommendation;
+  /** The test of record under the plan (key kept for the command line's JSON contract). */
+  recommendation: TestDecision;
+  /** The other omnibus tests beside the primary one, with a sentence where they disagree. */
+  sensitivity: SensitivityAnalyses | Unavailable;
   warnings: string[];
 }
 
@@ -105,7 +110,7 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
     );
   } else if (constantGroups.length > 0) {
     warnings.push(
-      `Zero variance in group${constantGroups.length > 1 ? "s" : ""} ${constantGroups.join(", ")}: Welch's ANOVA, Games–Howell and Bartlett's test cannot run (they divide by or take the log of each group's variance); the other results are reported.`,
+      `Zero variance in group${constantGroups.length > 1 ? "s" : ""} ${constantGroups.join(", ")}: Welch's ANOVA and Bartlett's test cannot run (they divide by or take the log of each group's variance), and Games–Howell compares a pair only when at least one of its two groups varies; the other results are reported.`,
     );
   }
 
@@ -144,28 +149,45 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
 
   const posthoc = runPosthoc(sample, groups, anova, options);
 
-  const recommendation = recommendTest(
-    {
+  const plan =
+    options.plan ??
+    planTest({
       independent: options.independent,
       scale: options.scale,
-      k: sample.groups.length,
-      ...(options.control !== undefined ? { control: options.control } : {}),
+      question: options.question,
       comparisons: options.comparisons,
-      alpha: options.alpha,
       policy: options.policy,
+      plannedSizes: options.plannedSizes,
+    });
+  const reasonIfUnavailable = (x: object): string | null =>
+    "available" in x && x.available === false ? String((x as Unavailable).reason) : null;
+  const recommendation = decideTest(plan, {
+    groups: groups.map((g) => ({ name: g.name, n: g.n, sd: typeof g.sd === "number" ? g.sd : 0 })),
+    comparisons: options.comparisons,
+    unavailable: {
+      anova: reasonIfUnavailable(anova),
+      welch: reasonIfUnavailable(welch),
+      "kruskal-wallis": reasonIfUnavailable(kw),
     },
-    {
-      groupSizes: groups.map((g) => g.n),
-      shapiroWilkResiduals: swResiduals.available ? { p: swResiduals.p, W: swResiduals.W } : swResiduals,
-      brownForsythe: bf.available ? { p: bf.p, F: bf.F } : bf,
-      sdRatio,
-      extremeOutliers: outlierReport.available ? outlierReport.totalExtreme : 0,
-    },
-  );
+  });
   if (allIdentical)
-    recommendation.caveats.unshift(
-      "All values are identical, so none of the tests can be computed; the recommendation describes the design only.",
-    );
+    recommendation.caveats.unshift({
+      code: "caveat.all-identical",
+      params: {},
+      text: "All values are identical, so none of the tests can be computed.",
+    });
+  const pOf = (x: object) =>
+    "p" in x && typeof x.p === "number"
+      ? { available: true as const, p: x.p }
+      : { available: false as const, reason: reasonIfUnavailable(x) ?? "not computed" };
+  const sensitivity: SensitivityAnalyses | Unavailable =
+    recommendation.test === "out-of-scope"
+      ? { available: false, reason: "The design is outside what these tests cover." }
+      : sensitivityAnalyses(recommendation.test as OmnibusTest, options.alpha, {
+          anova: pOf(anova),
+          welch: pOf(welch),
+          "kruskal-wallis": pOf(kw),
+        });
 
   return finite(
     {
@@ -195,6 +217,7 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       posthoc: posthoc.posthoc,
       familyWiseError: posthoc.familyWiseError,
       recommendation,
+      sensitivity,
       warnings,
     },
     warnings,

@@ -64,13 +64,27 @@ export { sdRatio, type SdRatio } from "./assumptions/sd-ratio.js";
 // Choosing the test.
 export * from "./choice/thresholds.js";
 export {
-  recommendTest,
-  type DesignAnswers,
-  type CheckResults,
-  type Recommendation,
+  planTest,
+  posthocFor,
+  CLASSIC_TO_WELCH_RULE,
+  type TestPlan,
+  type TestPlanDesign,
+  type OutOfScopePlan,
+  type SwitchRule,
+  type OutcomeQuestion,
+  type PlannedSizes,
   type OmnibusTest,
   type PosthocMethod,
-} from "./choice/recommend-test.js";
+} from "./choice/plan-test.js";
+export { decideTest, TEST_LABELS, type TestDecision, type DecisionEvidence } from "./choice/decide-test.js";
+export {
+  sensitivityAnalyses,
+  SENSITIVITY_LABELS,
+  type SensitivityAnalyses,
+  type SensitivityEntry,
+  type SensitivityTest,
+} from "./choice/sensitivity.js";
+export type { Note } from "./choice/note.js";
 
 // Distributions.
 export * from "./distributions/index.js";

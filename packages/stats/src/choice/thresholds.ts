@@ -24,3 +24,15 @@ export const EXTREME_OUTLIER_IQR = 3;
 
 /** Largest/smallest group size above this counts as unbalanced for the caveats. Common practice. */
 export const UNBALANCED_N_RATIO = 1.5;
+
+/**
+ * A classic-first plan keeps classic ANOVA while the largest SD is at most this many times the
+ * smallest. With equal group sizes classic ANOVA holds α near its level up to about this
+ * ratio and not beyond (Box 1954, Annals of Mathematical Statistics 25, 290–302, from memory).
+ * The rule-then-test procedure's realised error rate is measured by the test-choice benchmark
+ * (packages/stats/bench, figures in the README).
+ */
+export const PLAN_SWITCH_MAX_SD_RATIO = 1.5;
+
+/** …and while the largest group has at most this many times the values of the smallest. Common practice. */
+export const PLAN_SWITCH_MAX_SIZE_RATIO = 1.25;

@@ -37,7 +37,7 @@ describe("waymark-stats analyze", () => {
   it("prints a text report without --json", async () => {
     const r = await run("analyze", good, "--group", "Orchard row", "--outcome", "Fruit mass (kg)");
     expect(r.code).toBe(0);
-    expect(r.out).toContain("Suggested test:");
+    expect(r.out).toContain("Primary test, from the design answers:");
     expect(r.out).toContain("Is there a difference?");
   });
 

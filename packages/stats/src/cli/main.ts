@@ -89,6 +89,9 @@ function run(argv: readonly string[], io: CliIo): number {
         control: { type: "string" },
         policy: { type: "string" },
         scale: { type: "string" },
+        question: { type: "string" },
+        "planned-sizes": { type: "string" },
+        seed: { type: "string" },
         json: { type: "boolean", default: false },
         help: { type: "boolean", default: false },
       },
@@ -119,6 +122,16 @@ function run(argv: readonly string[], io: CliIo): number {
     if (policy) options.policy = policy;
     const scale = choice("scale", values.scale, ["continuous", "ordinal"] as const);
     if (scale) options.scale = scale;
+    const question = choice("question", values.question, ["means", "larger-values"] as const);
+    if (question) options.question = question;
+    const plannedSizes = choice("planned-sizes", values["planned-sizes"], ["equal", "unequal"] as const);
+    if (plannedSizes) options.plannedSizes = plannedSizes;
+    if (values.seed !== undefined) {
+      const seed = Number(values.seed);
+      if (!Number.isSafeInteger(seed) || seed < 0)
+        throw new CliError(`--seed must be a non-negative integer; got '${values.seed}'`, 2);
+      options.errorRateCheck = { seed };
+    }
     if (values.control !== undefined) options.control = values.control;
     const out = analyzeCommand({
       file: positionals[0] as string,

@@ -74,12 +74,16 @@ export function textReport(
 
   const rec = result.recommendation;
   out.push(
-    `Suggested test: ${TEST_NAMES[rec.test] ?? rec.test}${rec.posthoc !== "none" ? `, followed by ${POSTHOC_NAMES[rec.posthoc] ?? rec.posthoc}` : ""}`,
+    `Primary test, from the design answers: ${TEST_NAMES[rec.test] ?? rec.test}${rec.posthoc !== "none" ? `, followed by ${POSTHOC_NAMES[rec.posthoc] ?? rec.posthoc}` : ""}${rec.computable || rec.test === "out-of-scope" ? "" : " (cannot be computed on these data)"}`,
   );
-  for (const r of rec.reasons) out.push(`  - ${r}`);
+  for (const r of rec.reasons) out.push(`  - ${r.text}`);
   if (rec.caveats.length) {
     out.push("  Keep in mind:");
-    for (const c of rec.caveats) out.push(`  - ${c}`);
+    for (const c of rec.caveats) out.push(`  - ${c.text}`);
+  }
+  if ("entries" in result.sensitivity) {
+    out.push("  Sensitivity analyses:");
+    for (const n of result.sensitivity.notes) out.push(`  - ${n.text}`);
   }
   out.push("");
 

@@ -12,8 +12,14 @@ analyze options:
   --alpha A            significance level, default 0.05
   --adjust METHOD      holm (default), bonferroni or bh, for rank comparisons
   --control LEVEL      the control group, for comparisons against it
-  --policy POLICY      classic-first (default) or welch-first
+  --policy POLICY      classic-first (default) or welch-first; the primary test
+                       follows from these answers before the data are read
   --scale SCALE        continuous (default) or ordinal
+  --question Q         means (default): are the group averages equal?
+                       larger-values: does some group tend to have larger values?
+  --planned-sizes S    equal or unequal (default): did the plan put the same
+                       number of units in every group?
+  --seed N             seed of the error-rate simulation, default 1
   --json               print the full result as one JSON object
 
 power options:
