@@ -106,6 +106,8 @@ beforeAll(async () => {
     {
       independence: "independent",
       scale: "continuous",
+      question: "means",
+      groupSizes: "equal",
       hasControl: "no",
       comparisons: "all-pairs",
       assignment: "randomized",

@@ -24,6 +24,8 @@ export async function lockedStudy(analyst: Agent, overrides: Record<string, unkn
     .send({
       independence: "independent",
       scale: "continuous",
+      question: "means",
+      groupSizes: "equal",
       hasControl: "no",
       comparisons: "all-pairs",
       assignment: "randomized",

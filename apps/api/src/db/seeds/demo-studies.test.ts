@@ -18,7 +18,13 @@ describe("demo scenarios", () => {
     (_t, s) => {
       const r = analyze({
         groups: groupsOf(s.csv),
-        options: { policy: "classic-first", scale: s.design.scale === "ordinal" ? "ordinal" : "continuous" },
+        options: {
+          policy: "classic-first",
+          scale: s.design.scale === "ordinal" ? "ordinal" : "continuous",
+          question: s.design.question === "larger-values" ? "larger-values" : "means",
+          plannedSizes: s.design.groupSizes === "equal" ? "equal" : "unequal",
+          ...(s.design.comparisons === "vs-control" && s.controlLevel ? { control: s.controlLevel } : {}),
+        },
       });
       expect(r.recommendation.test).toBe(s.expectedTest);
       expect(groupsOf(s.csv).map((g) => g.name)).toEqual(s.levels);

@@ -1,4 +1,11 @@
-import { checkReadings, ENGINE_VERSION, resultSummary, TEST_NAMES, type ResultView } from "@waymark/stats";
+import {
+  checkReadings,
+  ENGINE_VERSION,
+  posthocFor,
+  resultSummary,
+  TEST_NAMES,
+  type ResultView,
+} from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";
@@ -6,7 +13,7 @@ import { runTask } from "../../workers/task-pool.js";
 import { recordAudit } from "../audit/audit.service.js";
 import type { Dataset } from "../datasets/dataset.entity.js";
 import { loadDatasetForAnalysis } from "../datasets/dataset.service.js";
-import { comparisonsOf, matchedPosthoc, type OmnibusTest } from "../studies/plan.js";
+import type { OmnibusTest } from "../studies/plan.js";
 import { loadEditableStudy, loadReadableStudy } from "../studies/study.access.js";
 import type { Study } from "../studies/study.entity.js";
 import { Analysis } from "./analysis.entity.js";
@@ -44,8 +51,9 @@ export async function runChecks(study: Study, dataset: Dataset) {
 }
 
 /**
- * Runs the locked plan on one dataset version and stores the result. Choosing a test other than
- * the recommended one needs a written justification, stored and flagged for the reviewer.
+ * Runs the locked plan on one dataset version and stores the result. The plan's primary test is
+ * the test of record; running another is a deviation from the plan that needs a written
+ * justification, stored and shown to the reviewer. A test that cannot be computed never runs.
  */
 export async function runAnalysis(
   ds: DataSource,
@@ -59,20 +67,37 @@ export async function runAnalysis(
     throw new HttpError(409, "plan_not_locked", "Lock the analysis plan before running the analysis.");
   const dataset = await loadDatasetForAnalysis(ds, study.id, input.datasetId);
   const { result } = await runEngine(study, dataset);
-  const recommended = result.recommendation.test;
-  if (recommended === "out-of-scope")
+  const decision = result.recommendation;
+  if (decision.test === "out-of-scope")
     throw new HttpError(
       422,
       "out_of_scope",
-      result.recommendation.reasons[0] ?? "This design is outside what Waymark analyses.",
+      decision.reasons[0]?.text ?? "This design is outside what Waymark analyses.",
     );
-  const chosen = input.test ?? recommended;
-  const isOverride = chosen !== recommended;
-  if (isOverride && (input.justification ?? "").length < MIN_JUSTIFICATION) {
+  const planned = decision.test;
+  const chosen = input.test ?? planned;
+  const isDeviation = chosen !== planned;
+  if (!isDeviation && !decision.computable) {
+    throw new HttpError(
+      422,
+      "planned_test_unavailable",
+      decision.reasons.find((r) => r.code === "decision.not-computable")?.text ??
+        `${TEST_NAMES[planned]} cannot be computed on these data.`,
+    );
+  }
+  const part = chosen === "anova" ? result.anova : chosen === "welch" ? result.welch : result.kruskalWallis;
+  if ("available" in part && part.available === false && "reason" in part) {
+    throw new HttpError(
+      422,
+      "test_unavailable",
+      `${TEST_NAMES[chosen]} cannot be computed on these data: ${String(part.reason)}.`,
+    );
+  }
+  if (isDeviation && (input.justification ?? "").length < MIN_JUSTIFICATION) {
     throw new HttpError(
       400,
       "justification_required",
-      `Choosing ${chosen} instead of the recommended ${recommended} needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
+      `Running ${TEST_NAMES[chosen]} instead of the plan's primary test, ${TEST_NAMES[planned]}, is a deviation from the locked plan and needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
     );
   }
   const id = await inTransaction(ds, async (tx) => {
@@ -82,10 +107,11 @@ export async function runAnalysis(
         studyId: study.id,
         datasetId: dataset.id,
         engineVersion: ENGINE_VERSION,
-        recommendedTest: recommended,
+        // The column keeps its first name; it holds the test of record under the locked plan.
+        recommendedTest: planned,
         chosenTest: chosen,
-        posthocMethod: matchedPosthoc(chosen, comparisonsOf(study.design)),
-        overrideJustification: isOverride ? input.justification!.trim() : null,
+        posthocMethod: posthocFor(chosen, result.options.comparisons),
+        overrideJustification: isDeviation ? input.justification!.trim() : null,
         planSnapshot: {
           ...study.plan,
           lockedAt: study.planLockedAt,
@@ -101,20 +127,20 @@ export async function runAnalysis(
     await recordAudit(tx, actor, {
       action: "analysis.run",
       studyId: study.id,
-      summary: `Ran ${TEST_NAMES[chosen] ?? chosen} on dataset version ${dataset.version}`,
+      summary: `Ran ${TEST_NAMES[chosen]} on dataset version ${dataset.version}`,
       after: {
         analysisId: saved.id,
         datasetId: dataset.id,
         chosenTest: chosen,
-        recommendedTest: recommended,
+        plannedTest: planned,
         engineVersion: ENGINE_VERSION,
       },
     });
-    if (isOverride) {
+    if (isDeviation) {
       await recordAudit(tx, actor, {
         action: "analysis.override",
         studyId: study.id,
-        summary: `Chose ${TEST_NAMES[chosen] ?? chosen} instead of the recommended ${TEST_NAMES[recommended] ?? recommended}`,
+        summary: `Deviated from the plan: ran ${TEST_NAMES[chosen]} instead of the primary test, ${TEST_NAMES[planned]}`,
         after: { analysisId: saved.id, justification: saved.overrideJustification },
       });
     }
@@ -144,10 +170,10 @@ export function presentAnalysis(a: Analysis, datasetVersion?: number) {
     engineVersion: a.engineVersion,
     createdAt: a.createdAt,
     createdBy: a.createdBy ? { id: a.createdBy.id, displayName: a.createdBy.displayName } : null,
-    recommendedTest: a.recommendedTest,
+    plannedTest: a.recommendedTest,
     chosenTest: a.chosenTest,
     posthocMethod: a.posthocMethod,
-    override: a.overrideJustification ? { justification: a.overrideJustification } : null,
+    deviation: a.overrideJustification ? { justification: a.overrideJustification } : null,
     planSnapshot: a.planSnapshot,
     result: a.result,
     summary: a.summary,

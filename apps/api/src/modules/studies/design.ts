@@ -5,9 +5,21 @@ export interface DesignAnswers {
   hasControl?: "yes" | "no" | "unsure";
   comparisons?: "all-pairs" | "vs-control" | "unsure";
   assignment?: "randomized" | "convenience" | "observational" | "unsure";
+  /** For a continuous outcome: a question about averages, or about which group tends to have larger values. */
+  question?: "means" | "larger-values" | "unsure";
+  /** Whether the plan puts about the same number of units in every group. */
+  groupSizes?: "equal" | "unequal" | "unsure";
 }
 
-export const DESIGN_QUESTIONS = ["independence", "scale", "hasControl", "comparisons", "assignment"] as const;
+export const DESIGN_QUESTIONS = [
+  "independence",
+  "scale",
+  "question",
+  "groupSizes",
+  "hasControl",
+  "comparisons",
+  "assignment",
+] as const;
 
 /** Why a design falls outside what Waymark analyses, or null when it is in scope. */
 export function outOfScopeReason(d: DesignAnswers): string | null {
@@ -27,6 +39,9 @@ export function missingDesignAnswer(d: DesignAnswers, hasControlLevel: boolean):
   if (d.independence === "unsure")
     return "Find out whether each unit appears in only one group: the methods here need independent groups.";
   if (!d.scale) return "Answer whether the outcome is continuous or ordinal.";
+  if (d.scale !== "ordinal" && !d.question)
+    return "Answer whether the study asks about average amounts or about which group tends to have larger values.";
+  if (!d.groupSizes) return "Answer whether the plan puts the same number of units in every group.";
   if (!d.hasControl) return "Answer whether one group is a control.";
   if (d.hasControl === "yes" && !hasControlLevel) return "Name the control level in the study details.";
   if (!d.comparisons) return "Answer which comparisons you plan.";

@@ -1,3 +1,4 @@
+import { planTest, type OutOfScopePlan, type PowerMethod, type TestPlan } from "@waymark/stats";
 import type { DesignAnswers } from "./design.js";
 
 export type TestPolicy = "classic-first" | "welch-first";
@@ -9,7 +10,19 @@ export interface PlanSettings {
   policy: TestPolicy;
   adjust: Adjustment;
   alpha: number;
-  power: { effectF: number; targetPower: number; nPerGroup: number; achievedPower: number } | null;
+  power: PlanPower | null;
+  /** The primary test decided from the design, stored when the plan is locked. */
+  testPlan?: TestPlan;
+}
+
+export interface PlanPower {
+  effectF: number;
+  targetPower: number;
+  nPerGroup: number;
+  achievedPower: number;
+  /** How the power of the primary test was computed (noncentral F, its Welch approximation, or simulation). */
+  method?: PowerMethod;
+  note?: string;
 }
 
 export const DEFAULT_PLAN: PlanSettings = {
@@ -20,26 +33,22 @@ export const DEFAULT_PLAN: PlanSettings = {
 };
 
 /**
- * The test the plan expects before any data are seen: ordinal outcomes go to Kruskal–Wallis;
- * otherwise the policy's first choice. The data's checks may still move it (the recommendation).
+ * The primary test and its post-hoc family as the plan decides them before any data are seen.
+ * A locked plan keeps the decision it stored at lock time; before that it follows the answers.
+ * "Not sure" takes the cautious reading: a question about means, unequal planned sizes.
  */
-export function plannedTest(plan: PlanSettings, design: DesignAnswers): OmnibusTest {
-  if (design.scale === "ordinal") return "kruskal-wallis";
-  return plan.policy === "welch-first" ? "welch" : "anova";
+export function testPlanOf(plan: PlanSettings, design: DesignAnswers): TestPlan | OutOfScopePlan {
+  if (plan.testPlan) return plan.testPlan;
+  return planTest({
+    independent: design.independence === "paired" ? "paired" : true,
+    scale: design.scale === "ordinal" ? "ordinal" : "continuous",
+    question: design.question === "larger-values" ? "larger-values" : "means",
+    comparisons: comparisonsOf(design),
+    policy: plan.policy,
+    plannedSizes: design.groupSizes === "equal" ? "equal" : "unequal",
+  });
 }
 
 export function comparisonsOf(design: DesignAnswers): "all-pairs" | "vs-control" {
   return design.comparisons === "vs-control" ? "vs-control" : "all-pairs";
-}
-
-/** The post-hoc method matched to an omnibus test and the planned comparisons. */
-export function matchedPosthoc(test: OmnibusTest, comparisons: "all-pairs" | "vs-control"): string {
-  if (comparisons === "vs-control") {
-    return test === "anova"
-      ? "Dunnett"
-      : test === "welch"
-        ? "Welch t-tests against the control, Holm-adjusted"
-        : "Dunn against the control";
-  }
-  return test === "anova" ? "Tukey–Kramer HSD" : test === "welch" ? "Games–Howell" : "Dunn";
 }

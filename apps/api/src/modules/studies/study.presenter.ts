@@ -1,7 +1,7 @@
 import type { Dataset } from "../datasets/dataset.entity.js";
 import { presentDataset } from "../datasets/dataset.presenter.js";
 import { missingDesignAnswer, outOfScopeReason } from "./design.js";
-import { comparisonsOf, matchedPosthoc, plannedTest } from "./plan.js";
+import { comparisonsOf, testPlanOf } from "./plan.js";
 import type { Study } from "./study.entity.js";
 
 const person = (u: { id: number; displayName: string } | null | undefined) =>
@@ -12,7 +12,7 @@ export function presentStudy(
   s: Study,
   extras: { datasetCount: number; latestDataset: Dataset | null; latestAnalysisId: number | null },
 ) {
-  const test = plannedTest(s.plan, s.design);
+  const testPlan = testPlanOf(s.plan, s.design);
   const comparisons = comparisonsOf(s.design);
   return {
     id: s.id,
@@ -35,8 +35,10 @@ export function presentStudy(
     outOfScope: outOfScopeReason(s.design),
     plan: {
       ...s.plan,
-      plannedTest: test,
-      plannedPosthoc: matchedPosthoc(test, comparisons),
+      // Locked: the decision stored at lock time; before that, what the current answers lead to.
+      testPlan,
+      plannedTest: testPlan.test,
+      plannedPosthoc: testPlan.posthoc,
       comparisons,
       lockedAt: s.planLockedAt,
       lockedBy: person(s.planLockedBy),

@@ -44,7 +44,8 @@ describe("studies", () => {
       policy: "classic-first",
       adjust: "holm",
       lockedAt: null,
-      plannedTest: "anova",
+      // No design answers yet: the cautious reading (a means question, unequal sizes) gives Welch's ANOVA.
+      plannedTest: "welch",
     });
   });
 
@@ -80,6 +81,8 @@ describe("studies", () => {
     for (const answer of [
       { independence: "independent" },
       { scale: "continuous" },
+      { question: "means" },
+      { groupSizes: "unequal" },
       { hasControl: "yes" },
       { comparisons: "all-pairs" },
       { assignment: "randomized" },
@@ -95,11 +98,21 @@ describe("studies", () => {
     expect(plan.body.study.plan).toMatchObject({
       policy: "welch-first",
       plannedTest: "welch",
-      plannedPosthoc: "Games–Howell",
+      plannedPosthoc: "games-howell",
     });
-    expect(plan.body.study.plan.power.nPerGroup).toBe(53);
+    // Welch's ANOVA is the primary test, so the figure is flagged as the noncentral-F approximation.
+    expect(plan.body.study.plan.power).toMatchObject({
+      nPerGroup: 53,
+      method: "noncentral-f-welch-approximation",
+    });
     const lock = await analyst.post(`/api/studies/${id}/plan/lock`).expect(200);
     expect(Date.parse(lock.body.study.plan.lockedAt)).toBeGreaterThan(Date.now() - 60_000);
+    // The primary test is stored with the locked plan, decided before any data.
+    expect(lock.body.study.plan.testPlan).toMatchObject({
+      test: "welch",
+      posthoc: "games-howell",
+      rule: null,
+    });
     await analyst.post(`/api/studies/${id}/plan/lock`).expect(409);
     await analyst.put(`/api/studies/${id}/design`).send({ scale: "ordinal" }).expect(409);
     await analyst.patch(`/api/studies/${id}`).send({ alpha: 0.01 }).expect(409);

@@ -43,6 +43,8 @@ export const designSchema = z
   .object({
     independence: z.enum(["independent", "paired", unsure]),
     scale: z.enum(["continuous", "ordinal", unsure]),
+    question: z.enum(["means", "larger-values", unsure]),
+    groupSizes: z.enum(["equal", "unequal", unsure]),
     hasControl: z.enum(["yes", "no", unsure]),
     comparisons: z.enum(["all-pairs", "vs-control", unsure]),
     assignment: z.enum(["randomized", "convenience", "observational", unsure]),

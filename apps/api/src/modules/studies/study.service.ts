@@ -1,4 +1,4 @@
-import { anovaSampleSize } from "@waymark/stats";
+import { planPower, TEST_NAMES } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { z } from "zod";
 import type { Actor } from "../../http/actor.js";
@@ -7,7 +7,7 @@ import { Analysis } from "../analyses/analysis.entity.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { Dataset } from "../datasets/dataset.entity.js";
 import { missingDesignAnswer, outOfScopeReason, type DesignAnswers } from "./design.js";
-import { DEFAULT_PLAN, type PlanSettings } from "./plan.js";
+import { DEFAULT_PLAN, testPlanOf, type PlanSettings } from "./plan.js";
 import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
 import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
@@ -17,6 +17,8 @@ import { inTransaction } from "../../db/in-transaction.js";
 const QUESTION_LABELS: Record<string, string> = {
   independence: "independent groups",
   scale: "outcome scale",
+  question: "question asked of the outcome",
+  groupSizes: "planned group sizes",
   hasControl: "control group",
   comparisons: "planned comparisons",
   assignment: "how units were assigned",
@@ -142,7 +144,10 @@ export async function savePlan(
     const next: PlanSettings = { ...study.plan, ...input, power: study.plan.power };
     if (input.power === null) next.power = null;
     else if (input.power) {
-      const size = anovaSampleSize({
+      // Power follows the primary test the design leads to (simulated for Kruskal–Wallis).
+      const primary = testPlanOf(next, study.design);
+      const size = planPower({
+        test: primary.test === "out-of-scope" ? "anova" : primary.test,
         k: study.levels.length,
         f: input.power.effectF,
         alpha: next.alpha,
@@ -153,6 +158,8 @@ export async function savePlan(
         targetPower: input.power.targetPower,
         nPerGroup: size.nPerGroup,
         achievedPower: size.achievedPower,
+        method: size.method,
+        note: size.note,
       };
     }
     study.plan = next;
@@ -179,13 +186,17 @@ export async function lockPlan(ds: DataSource, actor: Actor, id: number): Promis
     if (outOfScope) throw new HttpError(422, "out_of_scope", outOfScope);
     const missing = missingDesignAnswer(study.design, !!study.controlLevel);
     if (missing) throw new HttpError(422, "design_incomplete", `The plan cannot be locked yet: ${missing}`);
+    const testPlan = testPlanOf(study.plan, study.design);
+    if (testPlan.test === "out-of-scope") throw new HttpError(422, "out_of_scope", testPlan.reasons[0]!.text);
+    // The primary test is decided now, before any data, and stored with the locked plan.
+    study.plan = { ...study.plan, testPlan };
     study.planLockedAt = new Date();
     study.planLockedById = actor.user.id;
     await tx.getRepository(Study).save(study);
     await recordAudit(tx, actor, {
       action: "study.plan-locked",
       studyId: id,
-      summary: "Locked the analysis plan",
+      summary: `Locked the analysis plan; primary test: ${TEST_NAMES[testPlan.test]}`,
       after: { ...study.plan, design: study.design },
     });
   });

@@ -27,7 +27,7 @@ function toCsv(header: [string, string], rows: [string, number][], decimals: num
   );
 }
 
-/** Materials lab: four curing methods, similar spread, near-normal strengths → classic ANOVA. */
+/** Materials lab: four curing methods, equal planned sizes, similar spread → classic ANOVA under a classic-first plan. */
 function curing(): DemoScenario {
   const r = seededRandom(4101);
   const methods: [string, number][] = [
@@ -51,6 +51,8 @@ function curing(): DemoScenario {
     design: {
       independence: "independent",
       scale: "continuous",
+      question: "means",
+      groupSizes: "equal",
       hasControl: "yes",
       comparisons: "all-pairs",
       assignment: "randomized",
@@ -62,7 +64,7 @@ function curing(): DemoScenario {
   };
 }
 
-/** Contact centre: three routing rules with very different spread and unequal n → Welch. */
+/** Contact centre: a question about average times, unequal group sizes by design → Welch's ANOVA from the plan. */
 function routing(): DemoScenario {
   const r = seededRandom(7310);
   const rules: [string, number, number, number][] = [
@@ -86,6 +88,8 @@ function routing(): DemoScenario {
     design: {
       independence: "independent",
       scale: "continuous",
+      question: "means",
+      groupSizes: "unequal",
       hasControl: "no",
       comparisons: "all-pairs",
       assignment: "convenience",
@@ -97,7 +101,7 @@ function routing(): DemoScenario {
   };
 }
 
-/** Greenhouse: three light schedules, right-skewed heights with a few extreme plants → Kruskal–Wallis. */
+/** Greenhouse: the question is whether longer light tends to give taller seedlings (skewed, a few extreme plants) → Kruskal–Wallis from the plan. */
 function seedlings(): DemoScenario {
   const r = seededRandom(2207);
   const schedules: [string, number][] = [
@@ -114,7 +118,7 @@ function seedlings(): DemoScenario {
   return {
     title: "Seedling height under three light schedules",
     objective:
-      "Check whether a longer daily light schedule changes the height of tomato seedlings at transplant, to set the schedule for the spring batch.",
+      "Check whether tomato seedlings grown under a longer daily light schedule tend to be taller at transplant, to set the schedule for the spring batch.",
     outcomeName: "Seedling height",
     outcomeUnit: "mm",
     factorName: "Light schedule",
@@ -124,6 +128,8 @@ function seedlings(): DemoScenario {
     design: {
       independence: "independent",
       scale: "continuous",
+      question: "larger-values",
+      groupSizes: "equal",
       hasControl: "yes",
       comparisons: "vs-control",
       assignment: "randomized",
