@@ -37,6 +37,7 @@ describe("analyze", () => {
       "familyWiseError",
       "recommendation",
       "sensitivity",
+      "checkWarnings",
       "warnings",
     ]) {
       expect(r, key).toHaveProperty(key);

@@ -5,7 +5,9 @@ import { outliers } from "./assumptions/outliers.js";
 import { qqPlot } from "./assumptions/qq-plot.js";
 import { sdRatio as sdRatioOf } from "./assumptions/sd-ratio.js";
 import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./assumptions/shapiro-wilk.js";
+import { checkWarnings } from "./choice/check-warnings.js";
 import { decideTest, type TestDecision } from "./choice/decide-test.js";
+import type { Note } from "./choice/note.js";
 import { planTest, type OmnibusTest } from "./choice/plan-test.js";
 import { sensitivityAnalyses, type SensitivityAnalyses } from "./choice/sensitivity.js";
 import { describeGroups, type GroupDescription } from "./descriptives/describe.js";
@@ -51,6 +53,8 @@ export interface AnalysisResult {
   recommendation: TestDecision;
   /** The other omnibus tests beside the primary one, with a sentence where they disagree. */
   sensitivity: SensitivityAnalyses | Unavailable;
+  /** Where a check speaks against the plan's test: what it means and which sensitivity analysis answers it. */
+  checkWarnings: Note[];
   warnings: string[];
 }
 
@@ -176,6 +180,17 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       params: {},
       text: "All values are identical, so none of the tests can be computed.",
     });
+  const groupSpreads = groups.map((g) => ({ name: g.name, n: g.n, sd: typeof g.sd === "number" ? g.sd : 0 }));
+  const checkNotes = checkWarnings(recommendation, {
+    alpha: options.alpha,
+    groups: groupSpreads,
+    normality: shapiro.map((x) =>
+      typeof x.p === "number" ? { group: x.group, p: x.p } : { group: x.group, available: false as const },
+    ),
+    outliers: outlierReport.available
+      ? outlierReport.groups.map((g) => ({ group: g.group, count: g.extreme.length }))
+      : [],
+  });
   const pOf = (x: object) =>
     "p" in x && typeof x.p === "number"
       ? { available: true as const, p: x.p }
@@ -218,6 +233,7 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       familyWiseError: posthoc.familyWiseError,
       recommendation,
       sensitivity,
+      checkWarnings: checkNotes,
       warnings,
     },
     warnings,

@@ -80,3 +80,37 @@ describe("decideTest: only the plan's named rule moves the test", () => {
     expect(r.recommendation.test).toBe("welch");
   });
 });
+
+describe("checkWarnings: the checks inform, beside the plan's test", () => {
+  it("warns about a far value under a means test and points to the trimmed-means analysis, without moving the test", () => {
+    const r = analyze({
+      groups: [
+        { name: "A", values: [1.1, 1.3, 0.9, 1.0, 1.2, 1.1, 30] },
+        { name: "B", values: [2.1, 2.3, 1.9, 2.0, 2.2, 2.1, 2.4] },
+        { name: "C", values: [1.5, 1.4, 1.6, 1.3, 1.7, 1.5, 1.6] },
+      ],
+      options: { policy: "welch-first" },
+    });
+    expect(r.recommendation.test).toBe("welch");
+    const codes = r.checkWarnings.map((w) => w.code);
+    expect(codes).toContain("check.outliers-against-means");
+    expect(r.checkWarnings.find((w) => w.code === "check.outliers-against-means")!.text).toMatch(
+      /trimmed means/,
+    );
+  });
+
+  it("tells a rank plan with unequal spreads what a significant result does and does not mean", () => {
+    // Fagerland & Sandvik 2009 (Statistics in Medicine 28, 1487–1497): with unequal spreads the
+    // Kruskal–Wallis test is not a test of medians.
+    const r = analyze({
+      groups: [
+        { name: "A", values: [10, 11, 9, 10.5, 9.5, 10.2] },
+        { name: "B", values: [4, 16, 8, 13, 2, 19] },
+        { name: "C", values: [10.1, 10.3, 9.8, 10.0, 10.4, 9.9] },
+      ],
+      options: { question: "larger-values" },
+    });
+    expect(r.recommendation.test).toBe("kruskal-wallis");
+    expect(r.checkWarnings.map((w) => w.code)).toEqual(["check.spread-against-ranks"]);
+  });
+});
