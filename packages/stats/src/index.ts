@@ -7,16 +7,9 @@ export { StatsInputError } from "./errors.js";
 export type { GroupSummary, GroupValues, Unavailable } from "./types/group-summary.js";
 
 // The one-call analysis and its options.
-export { analyze, type AnalysisResult, type AnalyzeInput } from "./analyze.js";
-export {
-  resolveOptions,
-  type AnalyzeOptions,
-  type ResolvedOptions,
-  type Adjustment,
-  type Policy,
-  type Scale,
-  type Comparisons,
-} from "./analyze-options.js";
+export { analyze, type AnalyzeInput } from "./analyze.js";
+export * from "./types/analysis-result.js";
+export { resolveOptions, type AnalyzeOptions, type ResolvedOptions } from "./analyze-options.js";
 
 // Exact decimal input and shared numerics.
 export { prepareSample } from "./numeric/prepare-sample.js";
@@ -68,7 +61,6 @@ export {
   type DesignAnswers,
   type CheckResults,
   type Recommendation,
-  type OmnibusTest,
   type PosthocMethod,
 } from "./choice/recommend-test.js";
 
@@ -82,10 +74,14 @@ export {
   midSentence,
   omnibusSentence,
   resultSummary,
-  TEST_NAMES,
   type Reading,
+  type ResultView,
 } from "./reporting/readings.js";
-export type { ResultView } from "./reporting/result-view.js";
+
+export { comparisonRows, type ComparisonRow } from "./reporting/comparison-rows.js";
+
+// One vocabulary: ids and the words users see for them (also @waymark/stats/vocabulary).
+export * from "./vocabulary/index.js";
 
 // Effect sizes (η² interval, Hedges' g, rank-biserial r).
 export * from "./effect-sizes/index.js";

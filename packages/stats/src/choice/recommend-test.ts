@@ -8,20 +8,23 @@ import {
   VERY_SMALL_GROUP_N,
 } from "./thresholds.js";
 
-export type OmnibusTest = "anova" | "welch" | "kruskal-wallis";
-export type PosthocMethod =
-  "tukey-kramer" | "games-howell" | "dunn" | "dunnett" | "welch-vs-control-holm" | "dunn-vs-control";
+import type { Comparisons, OmnibusTest, Policy, PosthocFamily, Scale } from "../vocabulary/ids.js";
+import { posthocFamilyFor } from "../vocabulary/posthoc-family.js";
+
+export type { OmnibusTest };
+/** The post-hoc family (see vocabulary/ids.ts). */
+export type PosthocMethod = PosthocFamily;
 
 /** The study design, as answered in the plan. */
 export interface DesignAnswers {
   /** true for independent groups; false or "paired" for repeated measures / matched data. */
   independent: boolean | "paired";
-  scale: "continuous" | "ordinal";
+  scale: Scale;
   k: number;
   control?: string;
-  comparisons: "all-pairs" | "vs-control";
+  comparisons: Comparisons;
   alpha?: number;
-  policy?: "classic-first" | "welch-first";
+  policy?: Policy;
 }
 
 /** The assumption checks the choice looks at; anything unavailable is passed as such. */
@@ -190,19 +193,7 @@ export function recommendTest(design: DesignAnswers, checks: CheckResults): Reco
   if (!isAvailable(bf) && bf !== undefined)
     caveats.push(`Equality of variances could not be tested: ${bf.reason}.`);
 
-  const vsControl = design.comparisons === "vs-control";
-  const posthoc: PosthocMethod =
-    test === "anova"
-      ? vsControl
-        ? "dunnett"
-        : "tukey-kramer"
-      : test === "welch"
-        ? vsControl
-          ? "welch-vs-control-holm"
-          : "games-howell"
-        : vsControl
-          ? "dunn-vs-control"
-          : "dunn";
+  const posthoc: PosthocMethod = posthocFamilyFor(test, design.comparisons);
 
   const alternatives: { test: OmnibusTest; whyNot: string }[] = [];
   for (const other of ["anova", "welch", "kruskal-wallis"] as const) {

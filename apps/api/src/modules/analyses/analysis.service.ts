@@ -1,4 +1,4 @@
-import { checkReadings, ENGINE_VERSION, resultSummary, TEST_NAMES, type ResultView } from "@waymark/stats";
+import { checkReadings, ENGINE_VERSION, resultSummary, testName } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";
@@ -40,7 +40,7 @@ export async function runChecks(study: Study, dataset: Dataset) {
           })),
         }
       : null;
-  return { checks: result, readings: checkReadings(result as unknown as ResultView), observations };
+  return { checks: result, readings: checkReadings(result), observations };
 }
 
 /**
@@ -94,14 +94,14 @@ export async function runAnalysis(
           controlLevel: study.controlLevel,
         },
         result,
-        summary: resultSummary(result as unknown as ResultView, chosen, study.outcomeName),
+        summary: resultSummary(result, chosen, study.outcomeName),
         createdById: user.id,
       }),
     );
     await recordAudit(tx, actor, {
       action: "analysis.run",
       studyId: study.id,
-      summary: `Ran ${TEST_NAMES[chosen] ?? chosen} on dataset version ${dataset.version}`,
+      summary: `Ran ${testName(chosen)} on dataset version ${dataset.version}`,
       after: {
         analysisId: saved.id,
         datasetId: dataset.id,
@@ -114,7 +114,7 @@ export async function runAnalysis(
       await recordAudit(tx, actor, {
         action: "analysis.override",
         studyId: study.id,
-        summary: `Chose ${TEST_NAMES[chosen] ?? chosen} instead of the recommended ${TEST_NAMES[recommended] ?? recommended}`,
+        summary: `Chose ${testName(chosen)} instead of the recommended ${testName(recommended)}`,
         after: { analysisId: saved.id, justification: saved.overrideJustification },
       });
     }

@@ -1,13 +1,8 @@
-/** The analyst's answers to the design questions; each may still be open or "unsure". */
-export interface DesignAnswers {
-  independence?: "independent" | "paired" | "unsure";
-  scale?: "continuous" | "ordinal" | "unsure";
-  hasControl?: "yes" | "no" | "unsure";
-  comparisons?: "all-pairs" | "vs-control" | "unsure";
-  assignment?: "randomized" | "convenience" | "observational" | "unsure";
-}
+import type { DesignAnswers } from "@waymark/contract";
 
-export const DESIGN_QUESTIONS = ["independence", "scale", "hasControl", "comparisons", "assignment"] as const;
+/** The analyst's answers to the design questions; each may still be open or "unsure". */
+export type { DesignAnswers };
+export { DESIGN_QUESTIONS } from "@waymark/contract";
 
 /** Why a design falls outside what Waymark analyses, or null when it is in scope. */
 export function outOfScopeReason(d: DesignAnswers): string | null {

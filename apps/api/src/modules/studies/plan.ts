@@ -1,16 +1,9 @@
+import type { PlanSettings } from "@waymark/contract";
+import { posthocFamilyFor, type Comparisons, type OmnibusTest, type PosthocFamily } from "@waymark/stats";
 import type { DesignAnswers } from "./design.js";
 
-export type TestPolicy = "classic-first" | "welch-first";
-export type Adjustment = "holm" | "bonferroni" | "bh";
-export type OmnibusTest = "anova" | "welch" | "kruskal-wallis";
-
-/** The analysis plan; frozen once `planLockedAt` is set on the study. */
-export interface PlanSettings {
-  policy: TestPolicy;
-  adjust: Adjustment;
-  alpha: number;
-  power: { effectF: number; targetPower: number; nPerGroup: number; achievedPower: number } | null;
-}
+/** The analysis plan (ids only); frozen once `planLockedAt` is set on the study. */
+export type { OmnibusTest, PlanSettings };
 
 export const DEFAULT_PLAN: PlanSettings = {
   policy: "classic-first",
@@ -28,18 +21,11 @@ export function plannedTest(plan: PlanSettings, design: DesignAnswers): OmnibusT
   return plan.policy === "welch-first" ? "welch" : "anova";
 }
 
-export function comparisonsOf(design: DesignAnswers): "all-pairs" | "vs-control" {
+export function comparisonsOf(design: DesignAnswers): Comparisons {
   return design.comparisons === "vs-control" ? "vs-control" : "all-pairs";
 }
 
-/** The post-hoc method matched to an omnibus test and the planned comparisons. */
-export function matchedPosthoc(test: OmnibusTest, comparisons: "all-pairs" | "vs-control"): string {
-  if (comparisons === "vs-control") {
-    return test === "anova"
-      ? "Dunnett"
-      : test === "welch"
-        ? "Welch t-tests against the control, Holm-adjusted"
-        : "Dunn against the control";
-  }
-  return test === "anova" ? "Tukey–Kramer HSD" : test === "welch" ? "Games–Howell" : "Dunn";
+/** The post-hoc family (an id) matched to an omnibus test and the planned comparisons. */
+export function matchedPosthoc(test: OmnibusTest, comparisons: Comparisons): PosthocFamily {
+  return posthocFamilyFor(test, comparisons);
 }

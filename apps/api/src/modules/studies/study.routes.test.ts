@@ -95,7 +95,7 @@ describe("studies", () => {
     expect(plan.body.study.plan).toMatchObject({
       policy: "welch-first",
       plannedTest: "welch",
-      plannedPosthoc: "Games–Howell",
+      plannedPosthoc: "games-howell",
     });
     expect(plan.body.study.plan.power.nPerGroup).toBe(53);
     const lock = await analyst.post(`/api/studies/${id}/plan/lock`).expect(200);
