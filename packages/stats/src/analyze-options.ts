@@ -2,10 +2,18 @@ import { StatsInputError } from "./errors.js";
 import { DEFAULT_ALPHA } from "./choice/thresholds.js";
 import type { OutcomeQuestion, PlannedSizes, TestPlan } from "./choice/plan-test.js";
 
-export type Adjustment = "holm" | "bonferroni" | "bh";
-export type Policy = "classic-first" | "welch-first";
-export type Scale = "continuous" | "ordinal";
-export type Comparisons = "all-pairs" | "vs-control";
+import {
+  ADJUSTMENTS,
+  COMPARISONS,
+  POLICIES,
+  SCALES,
+  type Adjustment,
+  type Comparisons,
+  type Policy,
+  type Scale,
+} from "./vocabulary/ids.js";
+
+export type { Adjustment, Comparisons, Policy, Scale };
 
 export interface AnalyzeOptions {
   /** Significance level for tests, intervals of differences and the checks (default 0.05). */
@@ -70,7 +78,7 @@ export function resolveOptions(options: AnalyzeOptions, groupNames: readonly str
   const comparisons = oneOf(
     "comparisons",
     options.comparisons,
-    ["all-pairs", "vs-control"],
+    COMPARISONS,
     control !== undefined ? "vs-control" : "all-pairs",
   );
   if (comparisons === "vs-control" && control === undefined) {
@@ -86,10 +94,10 @@ export function resolveOptions(options: AnalyzeOptions, groupNames: readonly str
   }
   return {
     alpha,
-    adjust: oneOf("adjust", options.adjust, ["holm", "bonferroni", "bh"], "holm"),
+    adjust: oneOf("adjust", options.adjust, ADJUSTMENTS, "holm"),
     control,
-    policy: oneOf("policy", options.policy, ["classic-first", "welch-first"], "classic-first"),
-    scale: oneOf("scale", options.scale, ["continuous", "ordinal"], "continuous"),
+    policy: oneOf("policy", options.policy, POLICIES, "classic-first"),
+    scale: oneOf("scale", options.scale, SCALES, "continuous"),
     comparisons,
     independent,
     question: oneOf("question", options.question, ["means", "larger-values"], "means"),

@@ -154,11 +154,11 @@ describe("analyze", () => {
 
   it("runs the post-hoc families, with comparisons against a named control", () => {
     const r = analyze({ groups: orchard, options: { control: "Row A" } });
-    const ph = r.posthoc as Record<string, unknown>;
+    const ph = r.posthoc;
     expect(ph.tukey).toHaveLength(3);
     expect(ph.gamesHowell).toHaveLength(3);
     expect(ph.dunn).toHaveLength(3);
-    const control = ph.control as Record<string, unknown[]>;
+    const control = ph.control!;
     expect(control.dunnett).toHaveLength(2);
     expect(control.welchHolm).toHaveLength(2);
     expect(control.dunn).toHaveLength(2);

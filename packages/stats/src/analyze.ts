@@ -1,4 +1,4 @@
-import { resolveOptions, type AnalyzeOptions, type ResolvedOptions } from "./analyze-options.js";
+import { resolveOptions, type AnalyzeOptions } from "./analyze-options.js";
 import { bartlett } from "./assumptions/bartlett.js";
 import { levene } from "./assumptions/levene.js";
 import { outliers } from "./assumptions/outliers.js";
@@ -6,11 +6,10 @@ import { qqPlot } from "./assumptions/qq-plot.js";
 import { sdRatio as sdRatioOf } from "./assumptions/sd-ratio.js";
 import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./assumptions/shapiro-wilk.js";
 import { checkWarnings } from "./choice/check-warnings.js";
-import { decideTest, type TestDecision } from "./choice/decide-test.js";
-import type { Note } from "./choice/note.js";
-import { planTest, type OmnibusTest } from "./choice/plan-test.js";
+import { decideTest } from "./choice/decide-test.js";
+import { planTest } from "./choice/plan-test.js";
 import { sensitivityAnalyses, type SensitivityAnalyses } from "./choice/sensitivity.js";
-import { describeGroups, type GroupDescription } from "./descriptives/describe.js";
+import { describeGroups } from "./descriptives/describe.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupInput } from "./numeric/centred-sample.js";
 import { pooledResiduals } from "./numeric/pooled-residuals.js";
@@ -24,39 +23,15 @@ import { ENGINE_VERSION } from "./version.js";
 import { etaSquaredCi } from "./effect-sizes/eta-squared-ci.js";
 import type { Unavailable } from "./types/group-summary.js";
 import { runPosthoc } from "./posthoc-plan.js";
+import type { AnalysisResult, ShapiroWilkResidualsPart } from "./types/analysis-result.js";
 
 export interface AnalyzeInput {
   groups: readonly GroupInput[];
   options?: AnalyzeOptions;
 }
 
-/** The one JSON-serializable result of `analyze`. Parts that cannot be computed hold Unavailable. */
-export interface AnalysisResult {
-  engineVersion: string;
-  options: ResolvedOptions;
-  data: { k: number; totalN: number; totalMissing: number; centring: string; offset: number };
-  groups: GroupDescription[];
-  anova: object;
-  welch: object;
-  kruskalWallis: object;
-  levene: object;
-  brownForsythe: object;
-  bartlett: object;
-  shapiroWilk: object[];
-  shapiroWilkResiduals: object;
-  sdRatio: number | Unavailable;
-  outliers: object;
-  qq: object;
-  posthoc: object;
-  familyWiseError: object;
-  /** The test of record under the plan (key kept for the command line's JSON contract). */
-  recommendation: TestDecision;
-  /** The other omnibus tests beside the primary one, with a sentence where they disagree. */
-  sensitivity: SensitivityAnalyses | Unavailable;
-  /** Where a check speaks against the plan's test: what it means and which sensitivity analysis answers it. */
-  checkWarnings: Note[];
-  warnings: string[];
-}
+/** The result's precise type lives in types/analysis-result.ts (re-exported here for callers). */
+export type { AnalysisResult } from "./types/analysis-result.js";
 
 /** Runs one part; an input problem specific to that part becomes its Unavailable reason. */
 function part<T>(run: () => T): T | Unavailable {
@@ -134,8 +109,8 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const shapiro = sample.groups.map((g) => {
     const r = shapiroWilk(sortedValues(g));
     return r.available
-      ? { group: g.name, n: r.n, W: r.W, p: r.p }
-      : { group: g.name, n: g.centred.length, available: false as const, reason: r.reason };
+      ? { available: true as const, group: g.name, n: r.n, W: r.W, p: r.p }
+      : { available: false as const, group: g.name, n: g.centred.length, reason: r.reason };
   });
   // The full sorted residuals are needed only where Shapiro–Wilk applies (N ≤ 5000).
   const swResiduals =
@@ -198,13 +173,13 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const sensitivity: SensitivityAnalyses | Unavailable =
     recommendation.test === "out-of-scope"
       ? { available: false, reason: "The design is outside what these tests cover." }
-      : sensitivityAnalyses(recommendation.test as OmnibusTest, options.alpha, {
+      : sensitivityAnalyses(recommendation.test, options.alpha, {
           anova: pOf(anova),
           welch: pOf(welch),
           "kruskal-wallis": pOf(kw),
         });
 
-  return finite(
+  return finite<AnalysisResult>(
     {
       engineVersion: ENGINE_VERSION,
       options,
@@ -223,9 +198,9 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       brownForsythe: bf,
       bartlett: bart,
       shapiroWilk: shapiro,
-      shapiroWilkResiduals: swResiduals.available
-        ? { n: swResiduals.n, W: swResiduals.W, p: swResiduals.p }
-        : swResiduals,
+      shapiroWilkResiduals: (swResiduals.available
+        ? { available: true, n: swResiduals.n, W: swResiduals.W, p: swResiduals.p }
+        : swResiduals) satisfies ShapiroWilkResidualsPart,
       sdRatio,
       outliers: outlierReport,
       qq,

@@ -7,16 +7,9 @@ export { StatsInputError } from "./errors.js";
 export type { GroupSummary, GroupValues, Unavailable } from "./types/group-summary.js";
 
 // The one-call analysis and its options.
-export { analyze, type AnalysisResult, type AnalyzeInput } from "./analyze.js";
-export {
-  resolveOptions,
-  type AnalyzeOptions,
-  type ResolvedOptions,
-  type Adjustment,
-  type Policy,
-  type Scale,
-  type Comparisons,
-} from "./analyze-options.js";
+export { analyze, type AnalyzeInput } from "./analyze.js";
+export * from "./types/analysis-result.js";
+export { resolveOptions, type AnalyzeOptions, type ResolvedOptions } from "./analyze-options.js";
 
 // Exact decimal input and shared numerics.
 export { prepareSample } from "./numeric/prepare-sample.js";
@@ -65,7 +58,6 @@ export { sdRatio, type SdRatio } from "./assumptions/sd-ratio.js";
 export * from "./choice/thresholds.js";
 export {
   planTest,
-  posthocFor,
   CLASSIC_TO_WELCH_RULE,
   type TestPlan,
   type TestPlanDesign,
@@ -73,18 +65,14 @@ export {
   type SwitchRule,
   type OutcomeQuestion,
   type PlannedSizes,
-  type OmnibusTest,
-  type PosthocMethod,
 } from "./choice/plan-test.js";
-export { decideTest, TEST_LABELS, type TestDecision, type DecisionEvidence } from "./choice/decide-test.js";
+export { decideTest, type TestDecision, type DecisionEvidence } from "./choice/decide-test.js";
+export { checkWarnings, type CheckEvidence } from "./choice/check-warnings.js";
 export {
   sensitivityAnalyses,
-  SENSITIVITY_LABELS,
   type SensitivityAnalyses,
   type SensitivityEntry,
-  type SensitivityTest,
 } from "./choice/sensitivity.js";
-export type { Note } from "./choice/note.js";
 
 // Distributions.
 export * from "./distributions/index.js";
@@ -96,10 +84,14 @@ export {
   midSentence,
   omnibusSentence,
   resultSummary,
-  TEST_NAMES,
   type Reading,
+  type ResultView,
 } from "./reporting/readings.js";
-export type { ResultView } from "./reporting/result-view.js";
+
+export { comparisonRows, type ComparisonRow } from "./reporting/comparison-rows.js";
+
+// One vocabulary: ids and the words users see for them (also @waymark/stats/vocabulary).
+export * from "./vocabulary/index.js";
 
 // Effect sizes (η² interval, Hedges' g, rank-biserial r).
 export * from "./effect-sizes/index.js";

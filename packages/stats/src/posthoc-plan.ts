@@ -13,6 +13,12 @@ import { tukeyKramer } from "./posthoc/tukey-kramer.js";
 import { welchVsControlHolm } from "./posthoc/welch-vs-control-holm.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupSummary, Unavailable } from "./types/group-summary.js";
+import type {
+  AnovaPart,
+  ControlFamilies,
+  FamilyWiseErrorPart,
+  PosthocPart,
+} from "./types/analysis-result.js";
 
 function attempt<T>(run: () => T): T | Unavailable {
   try {
@@ -24,11 +30,9 @@ function attempt<T>(run: () => T): T | Unavailable {
 }
 
 /** An Unavailable result stays as it is; a family keeps only its pairs (the contract shape). */
-function pairsOf(
-  result: Unavailable | { available?: boolean; pairs: readonly object[] },
-): object[] | Unavailable {
-  if ("available" in result && result.available === false) return result as Unavailable;
-  return [...(result as { pairs: readonly object[] }).pairs];
+function pairsOf<P>(result: Unavailable | { pairs: readonly P[] }): P[] | Unavailable {
+  if ("available" in result && result.available === false) return result;
+  return [...(result as { pairs: readonly P[] }).pairs];
 }
 
 /**
@@ -43,22 +47,21 @@ function pairsOf(
 export function runPosthoc(
   sample: CentredSample,
   groups: GroupDescription[],
-  anova: object,
+  anova: AnovaPart,
   options: ResolvedOptions,
-): { posthoc: object; familyWiseError: object } {
+): { posthoc: PosthocPart; familyWiseError: FamilyWiseErrorPart } {
   const alpha = options.alpha;
   const summaries: GroupSummary[] = sample.groups.map((g) => {
     const m = groupMoments(g);
     return { name: g.name, n: m.n, mean: m.mean, variance: m.n > 1 ? m.ss / (m.n - 1) : 0 };
   });
-  const a = anova as { available?: boolean; msWithin?: number; df2?: number; reason?: string };
-  const tukey: object[] | Unavailable =
-    a.available && a.msWithin !== undefined && a.df2 !== undefined
-      ? pairsOf(attempt(() => tukeyKramer(summaries, a.msWithin as number, a.df2 as number, alpha)))
-      : {
-          available: false,
-          reason: `Tukey–Kramer needs the classic ANOVA's error variance, which is unavailable: ${a.reason ?? "unknown reason"}`,
-        };
+  const a = anova;
+  const tukey: PosthocPart["tukey"] = a.available
+    ? pairsOf(attempt(() => tukeyKramer(summaries, a.msWithin, a.df2, alpha)))
+    : {
+        available: false,
+        reason: `Tukey–Kramer needs the classic ANOVA's error variance, which is unavailable: ${a.reason}`,
+      };
   const gh = attempt(() => gamesHowell(summaries, alpha));
   const gamesHowellPairs = "pairs" in gh ? [...gh.pairs] : gh;
 
@@ -73,7 +76,7 @@ export function runPosthoc(
   );
   const dunnPairs = pairsOf(dunnResult);
 
-  const posthoc: Record<string, unknown> = {
+  const posthoc: PosthocPart = {
     tukey,
     gamesHowell: gamesHowellPairs,
     dunn: dunnPairs,
@@ -82,16 +85,14 @@ export function runPosthoc(
   };
   const control = options.control;
   if (control !== undefined) {
-    let dunnVsControl: object[] | Unavailable;
+    let dunnVsControl: ControlFamilies["dunn"];
     if (Array.isArray(dunnPairs)) {
-      const withControl = (dunnPairs as { a: string; b: string; p: number }[]).filter(
-        (x) => x.a === control || x.b === control,
-      );
+      const withControl = dunnPairs.filter((x) => x.a === control || x.b === control);
       const adjusted = adjustPValues(
         withControl.map((x) => x.p),
         options.adjust,
       );
-      dunnVsControl = withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] }));
+      dunnVsControl = withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] as number }));
     } else dunnVsControl = dunnPairs;
     posthoc.control = {
       control,
@@ -100,6 +101,9 @@ export function runPosthoc(
       dunn: dunnVsControl,
     };
   }
-  const fwe = attempt(() => familyWiseError({ k: sample.groups.length, alpha }));
+  const fwe = attempt(() => ({
+    available: true as const,
+    ...familyWiseError({ k: sample.groups.length, alpha }),
+  }));
   return { posthoc, familyWiseError: fwe };
 }

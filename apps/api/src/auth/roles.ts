@@ -1,3 +1,2 @@
 /** The four roles of a Waymark organization. */
-export const ROLES = ["analyst", "reviewer", "writer", "admin"] as const;
-export type Role = (typeof ROLES)[number];
+export { ROLES, type Role } from "@waymark/contract";

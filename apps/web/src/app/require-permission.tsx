@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { Outlet } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 import { can, type Permission } from "@/lib/authorization";
 import { ROLE_LABELS } from "@/lib/roles";
 

@@ -1,8 +1,8 @@
 import { Navigate, useLocation } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
-import { AppShell } from "@/components/layouts/app-shell";
+import { AppShell } from "./app-shell";
 import { paths } from "@/config/paths";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 
 /** Signed-in area: sends signed-out visitors to sign in and back afterwards. */
 export function RequireUser() {

@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "./current-user";
 import type { Role } from "./roles";
 
 /** What each role may see in the web app; the API enforces the same rules on its side. */

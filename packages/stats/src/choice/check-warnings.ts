@@ -1,6 +1,7 @@
 import { formatP, formatStat } from "../reporting/format.js";
 import type { TestDecision } from "./decide-test.js";
-import { note, type Note } from "./note.js";
+import type { CodedText } from "../vocabulary/coded-text.js";
+import { note } from "./note.js";
 import { LARGE_GROUP_N, SD_RATIO_LIMIT } from "./thresholds.js";
 
 /** The check results that can speak against the plan's test. */
@@ -20,9 +21,9 @@ export interface CheckEvidence {
  * "check.shape-against-means" note.
  * Cost: O(k). Pure.
  */
-export function checkWarnings(decision: TestDecision, e: CheckEvidence): Note[] {
+export function checkWarnings(decision: TestDecision, e: CheckEvidence): CodedText[] {
   if (decision.test === "out-of-scope") return [];
-  const out: Note[] = [];
+  const out: CodedText[] = [];
   const meansTest = decision.test === "anova" || decision.test === "welch";
   if (meansTest) {
     const sizes = new Map(e.groups.map((g) => [g.name, g.n]));

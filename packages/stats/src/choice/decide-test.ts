@@ -1,15 +1,11 @@
 import { formatStat } from "../reporting/format.js";
-import { note, type Note } from "./note.js";
-import {
-  posthocFor,
-  type OmnibusTest,
-  type OutOfScopePlan,
-  type PosthocMethod,
-  type SwitchRule,
-  type TestPlan,
-} from "./plan-test.js";
+import type { CodedText } from "../vocabulary/coded-text.js";
+import type { Comparisons, OmnibusTest, PosthocFamily } from "../vocabulary/ids.js";
+import { TEST_TERMS } from "../vocabulary/names.js";
+import { posthocFamilyFor } from "../vocabulary/posthoc-family.js";
+import { note } from "./note.js";
+import type { OutOfScopePlan, SwitchRule, TestPlan } from "./plan-test.js";
 import { VERY_SMALL_GROUP_N } from "./thresholds.js";
-import type { Comparisons } from "../analyze-options.js";
 
 /** What the decision needs from the data: sizes, spreads and which tests could be computed. */
 export interface DecisionEvidence {
@@ -26,7 +22,7 @@ export interface DecisionEvidence {
  */
 export interface TestDecision {
   test: OmnibusTest | "out-of-scope";
-  posthoc: PosthocMethod | "none";
+  posthoc: PosthocFamily | "none";
   /** The test the plan names before the data. */
   planned: OmnibusTest | "out-of-scope";
   rule: SwitchRule | null;
@@ -34,15 +30,9 @@ export interface TestDecision {
   ruleApplied: boolean;
   /** false when the test of record cannot be computed on these data: a deviation is needed. */
   computable: boolean;
-  reasons: Note[];
-  caveats: Note[];
+  reasons: CodedText[];
+  caveats: CodedText[];
 }
-
-export const TEST_LABELS: Record<OmnibusTest, string> = {
-  anova: "Classic one-way ANOVA",
-  welch: "Welch's ANOVA",
-  "kruskal-wallis": "The Kruskal–Wallis test",
-};
 
 /**
  * Applies a locked test plan to one dataset. The only data-driven move is the plan's named
@@ -66,8 +56,8 @@ export function decideTest(plan: TestPlan | OutOfScopePlan, evidence: DecisionEv
       caveats: [],
     };
   }
-  const reasons: Note[] = [...plan.reasons];
-  const caveats: Note[] = [];
+  const reasons: CodedText[] = [...plan.reasons];
+  const caveats: CodedText[] = [];
   const sizes = evidence.groups.map((g) => g.n);
   const minN = Math.min(...sizes);
   const maxN = Math.max(...sizes);
@@ -116,7 +106,7 @@ export function decideTest(plan: TestPlan | OutOfScopePlan, evidence: DecisionEv
       note(
         "decision.not-computable",
         { test },
-        `${TEST_LABELS[test]} cannot be computed on these data: ${missing}. The planned analysis cannot run as written; choose another test as a deviation from the plan, with a written justification the reviewer will see.`,
+        `${TEST_TERMS[test].title} cannot be computed on these data: ${missing}. The planned analysis cannot run as written; choose another test as a deviation from the plan, with a written justification the reviewer will see.`,
       ),
     );
   }
@@ -140,7 +130,7 @@ export function decideTest(plan: TestPlan | OutOfScopePlan, evidence: DecisionEv
   }
   return {
     test,
-    posthoc: posthocFor(test, evidence.comparisons),
+    posthoc: posthocFamilyFor(test, evidence.comparisons),
     planned: plan.test,
     rule: plan.rule,
     ruleApplied,

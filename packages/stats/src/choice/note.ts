@@ -1,13 +1,6 @@
-/**
- * A sentence the engine writes, with a stable code and the numbers behind it, so that
- * consumers can act on the code (and translate or restyle) without searching English text.
- */
-export interface Note {
-  code: string;
-  params: Record<string, string | number>;
-  text: string;
-}
+import type { CodedText } from "../vocabulary/coded-text.js";
 
-export function note(code: string, params: Note["params"], text: string): Note {
+/** Builds a coded sentence: a stable code, the numbers behind it, and the text. */
+export function note(code: string, params: CodedText["params"], text: string): CodedText {
   return { code, params, text };
 }

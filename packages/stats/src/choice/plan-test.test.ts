@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { planTest, posthocFor, type TestPlanDesign } from "./plan-test.js";
+import { planTest, type TestPlanDesign } from "./plan-test.js";
+import { posthocFamilyFor as posthocFor } from "../vocabulary/posthoc-family.js";
 
 const means: TestPlanDesign = {
   independent: true,

@@ -1,15 +1,18 @@
-import type { Comparisons, Policy, Scale } from "../analyze-options.js";
-import { note, type Note } from "./note.js";
+import type { CodedText } from "../vocabulary/coded-text.js";
+import type {
+  Comparisons,
+  OmnibusTest,
+  OutcomeQuestion,
+  PlannedSizes,
+  Policy,
+  PosthocFamily,
+  Scale,
+} from "../vocabulary/ids.js";
+import { posthocFamilyFor } from "../vocabulary/posthoc-family.js";
+import { note } from "./note.js";
 import { PLAN_SWITCH_MAX_SD_RATIO, PLAN_SWITCH_MAX_SIZE_RATIO } from "./thresholds.js";
 
-export type OmnibusTest = "anova" | "welch" | "kruskal-wallis";
-export type PosthocMethod =
-  "tukey-kramer" | "games-howell" | "dunn" | "dunnett" | "welch-vs-control-holm" | "dunn-vs-control";
-
-/** What the study asks of a continuous outcome: are the averages equal, or does one group tend to have larger values? */
-export type OutcomeQuestion = "means" | "larger-values";
-/** Whether the plan puts about the same number of units in every group. */
-export type PlannedSizes = "equal" | "unequal";
+export type { OutcomeQuestion, PlannedSizes };
 
 /** The design answers that decide the primary test before any data are seen. */
 export interface TestPlanDesign {
@@ -34,24 +37,16 @@ export interface SwitchRule {
 
 export interface TestPlan {
   test: OmnibusTest;
-  posthoc: PosthocMethod;
+  posthoc: PosthocFamily;
   rule: SwitchRule | null;
-  reasons: Note[];
+  reasons: CodedText[];
 }
 
 export interface OutOfScopePlan {
   test: "out-of-scope";
   posthoc: "none";
   rule: null;
-  reasons: Note[];
-}
-
-/** The post-hoc family that matches an omnibus test and the planned comparisons. */
-export function posthocFor(test: OmnibusTest, comparisons: Comparisons): PosthocMethod {
-  const vsControl = comparisons === "vs-control";
-  if (test === "anova") return vsControl ? "dunnett" : "tukey-kramer";
-  if (test === "welch") return vsControl ? "welch-vs-control-holm" : "games-howell";
-  return vsControl ? "dunn-vs-control" : "dunn";
+  reasons: CodedText[];
 }
 
 export const CLASSIC_TO_WELCH_RULE: SwitchRule = {
@@ -97,7 +92,7 @@ export function planTest(design: TestPlanDesign): TestPlan | OutOfScopePlan {
       ],
     };
   }
-  const reasons: Note[] = [];
+  const reasons: CodedText[] = [];
   let test: OmnibusTest;
   let rule: SwitchRule | null = null;
   if (design.scale === "ordinal") {
@@ -148,5 +143,5 @@ export function planTest(design: TestPlanDesign): TestPlan | OutOfScopePlan {
       );
     }
   }
-  return { test, posthoc: posthocFor(test, design.comparisons), rule, reasons };
+  return { test, posthoc: posthocFamilyFor(test, design.comparisons), rule, reasons };
 }

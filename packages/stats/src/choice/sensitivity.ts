@@ -1,15 +1,8 @@
 import { formatP, formatUnit } from "../reporting/format.js";
-import { note, type Note } from "./note.js";
-import type { OmnibusTest } from "./plan-test.js";
-
-export type SensitivityTest = OmnibusTest | "trimmed-means";
-
-export const SENSITIVITY_LABELS: Record<SensitivityTest, string> = {
-  anova: "classic one-way ANOVA",
-  welch: "Welch's ANOVA",
-  "kruskal-wallis": "the Kruskal–Wallis test",
-  "trimmed-means": "the test on 20% trimmed means",
-};
+import type { CodedText } from "../vocabulary/coded-text.js";
+import { SENSITIVITY_TESTS, type OmnibusTest, type SensitivityTest } from "../vocabulary/ids.js";
+import { SENSITIVITY_TERMS } from "../vocabulary/names.js";
+import { note } from "./note.js";
 
 /** What each alternative asks differently from the primary test, for the disagreement sentence. */
 const WHAT_IT_ASKS: Record<SensitivityTest, string> = {
@@ -27,7 +20,7 @@ export interface SensitivityAnalyses {
   primary: OmnibusTest;
   alpha: number;
   entries: SensitivityEntry[];
-  notes: Note[];
+  notes: CodedText[];
 }
 
 type PartP = { available: true; p: number } | { available: false; reason: string };
@@ -46,8 +39,8 @@ export function sensitivityAnalyses(
   const primaryPart = parts[primary];
   const primarySignificant = primaryPart?.available ? primaryPart.p < alpha : null;
   const entries: SensitivityEntry[] = [];
-  const notes: Note[] = [];
-  for (const test of ["anova", "welch", "kruskal-wallis", "trimmed-means"] as const) {
+  const notes: CodedText[] = [];
+  for (const test of SENSITIVITY_TESTS) {
     if (test === primary) continue;
     const part = parts[test];
     if (!part) continue;
@@ -59,12 +52,12 @@ export function sensitivityAnalyses(
     const agrees = primarySignificant === null ? true : significant === primarySignificant;
     entries.push({ test, available: true, p: part.p, significant, agrees });
     if (!agrees && primaryPart?.available) {
-      const label = SENSITIVITY_LABELS[test];
+      const label = SENSITIVITY_TERMS[test].name;
       notes.push(
         note(
           "sensitivity.disagrees",
           { test, p: part.p, primary, primaryP: primaryPart.p, alpha },
-          `${label[0]!.toUpperCase()}${label.slice(1)} ${significant ? "finds" : "does not find"} a difference at α = ${formatUnit(alpha)} (p ${formatP(part.p)}), unlike the primary ${SENSITIVITY_LABELS[primary]} (p ${formatP(primaryPart.p)}); ${WHAT_IT_ASKS[test]}. The conclusion is sensitive to that choice, so report it with care.`,
+          `${label[0]!.toUpperCase()}${label.slice(1)} ${significant ? "finds" : "does not find"} a difference at α = ${formatUnit(alpha)} (p ${formatP(part.p)}), unlike the primary ${SENSITIVITY_TERMS[primary].name} (p ${formatP(primaryPart.p)}); ${WHAT_IT_ASKS[test]}. The conclusion is sensitive to that choice, so report it with care.`,
         ),
       );
     }

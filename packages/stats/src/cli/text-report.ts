@@ -1,16 +1,10 @@
-import type { AnalysisResult } from "../analyze.js";
+import type { Unavailable } from "../types/group-summary.js";
+import { isAvailable, reasonOf, type AnalysisResult } from "../types/analysis-result.js";
 import { formatP } from "../reporting/format.js";
+import { CHECK_TERMS, POSTHOC_TERMS, TEST_TERMS } from "../vocabulary/names.js";
 
-type Rec = Record<string, unknown>;
-
-function isOk(x: unknown): x is Rec {
-  return typeof x === "object" && x !== null && (x as Rec).available !== false;
-}
-
-function why(x: unknown): string {
-  return typeof x === "object" && x !== null && typeof (x as Rec).reason === "string"
-    ? `not available: ${(x as Rec).reason as string}`
-    : "not available";
+function why(x: Unavailable | unknown): string {
+  return `not available: ${reasonOf(x, "no reason given")}`;
 }
 
 /** A number with about four significant digits, plain for ordinary magnitudes. */
@@ -35,22 +29,6 @@ function table(head: string[], rows: string[][]): string[] {
   return [line(head), ...rows.map(line)];
 }
 
-const POSTHOC_NAMES: Record<string, string> = {
-  "tukey-kramer": "Tukey–Kramer comparisons of all pairs",
-  "games-howell": "Games–Howell comparisons of all pairs",
-  dunn: "Dunn's rank comparisons of all pairs",
-  dunnett: "Dunnett's comparisons with the control",
-  "welch-vs-control-holm": "Welch t tests against the control (Holm-adjusted)",
-  "dunn-vs-control": "Dunn's rank comparisons with the control",
-};
-
-const TEST_NAMES: Record<string, string> = {
-  anova: "classic one-way ANOVA",
-  welch: "Welch's ANOVA",
-  "kruskal-wallis": "Kruskal–Wallis test",
-  "out-of-scope": "outside this analysis",
-};
-
 /**
  * The command line's plain-text report: the recommendation first (what to run and why), then
  * the groups, the three omnibus tests side by side, the checks, pairwise comparisons and any
@@ -74,7 +52,9 @@ export function textReport(
 
   const rec = result.recommendation;
   out.push(
-    `Primary test, from the design answers: ${TEST_NAMES[rec.test] ?? rec.test}${rec.posthoc !== "none" ? `, followed by ${POSTHOC_NAMES[rec.posthoc] ?? rec.posthoc}` : ""}${rec.computable || rec.test === "out-of-scope" ? "" : " (cannot be computed on these data)"}`,
+    rec.test === "out-of-scope"
+      ? "Primary test: none (the design is outside this analysis)"
+      : `Primary test, from the design answers: ${TEST_TERMS[rec.test].name}${rec.posthoc !== "none" ? `, followed by ${POSTHOC_TERMS[rec.posthoc].name}` : ""}${rec.computable ? "" : " (cannot be computed on these data)"}`,
   );
   for (const r of rec.reasons) out.push(`  - ${r.text}`);
   if (rec.caveats.length) {
@@ -110,91 +90,95 @@ export function textReport(
   out.push("");
 
   out.push("Is there a difference?");
-  const a = result.anova as Rec;
-  const w = result.welch as Rec;
-  const kw = result.kruskalWallis as Rec;
+  const a = result.anova;
+  const w = result.welch;
+  const kw = result.kruskalWallis;
+  const label = (t: keyof typeof TEST_TERMS) => TEST_TERMS[t].short.padEnd(16);
   out.push(
-    isOk(a)
-      ? `  classic ANOVA    F = ${num(a.F)} on ${a.df1} and ${a.df2} df, p ${pval(a.p)}; eta² ${num(a.etaSquared, 3)}${isOk(a.etaSquaredCi) ? ` (95% CI ${num((a.etaSquaredCi as Rec).lower, 3)} to ${num((a.etaSquaredCi as Rec).upper, 3)})` : ""}, omega² ${num(a.omegaSquared, 3)}, Cohen's f ${num(a.cohensF, 3)}`
-      : `  classic ANOVA    ${why(a)}`,
+    isAvailable(a)
+      ? `  ${label("anova")} F = ${num(a.F)} on ${a.df1} and ${a.df2} df, p ${pval(a.p)}; eta² ${num(a.etaSquared, 3)}${isAvailable(a.etaSquaredCi) ? ` (95% CI ${num(a.etaSquaredCi.lower, 3)} to ${num(a.etaSquaredCi.upper, 3)})` : ""}, omega² ${num(a.omegaSquared, 3)}, Cohen's f ${num(a.cohensF, 3)}`
+      : `  ${label("anova")} ${why(a)}`,
   );
   out.push(
-    isOk(w)
-      ? `  Welch's ANOVA    F = ${num(w.F)} on ${w.df1} and ${num(w.df2)} df, p ${pval(w.p)}`
-      : `  Welch's ANOVA    ${why(w)}`,
+    isAvailable(w)
+      ? `  ${label("welch")} F = ${num(w.F)} on ${w.df1} and ${num(w.df2)} df, p ${pval(w.p)}`
+      : `  ${label("welch")} ${why(w)}`,
   );
-  if (isOk(kw)) {
-    const perm = kw.permutation as Rec | undefined;
+  if (isAvailable(kw)) {
+    const perm = kw.permutation;
     out.push(
-      `  Kruskal–Wallis   H = ${num(kw.H)} on ${kw.df} df, p ${pval(kw.p)}; epsilon² ${num(kw.epsilonSquared, 3)}${perm ? `; permutation p ${pval(perm.p)} (${perm.iterations} shuffles, seed ${perm.seed})` : ""}`,
+      `  ${label("kruskal-wallis")} H = ${num(kw.H)} on ${kw.df} df, p ${pval(kw.p)}; epsilon² ${num(kw.epsilonSquared, 3)}${perm ? `; permutation p ${pval(perm.p)} (${perm.iterations} shuffles, seed ${perm.seed})` : ""}`,
     );
-  } else out.push(`  Kruskal–Wallis   ${why(kw)}`);
+  } else out.push(`  ${label("kruskal-wallis")} ${why(kw)}`);
   out.push("");
 
   out.push("Checks");
-  const sw = result.shapiroWilk as Rec[];
-  const swr = result.shapiroWilkResiduals as Rec;
+  const sw = result.shapiroWilk;
+  const swr = result.shapiroWilkResiduals;
   out.push(
-    `  normality of residuals (Shapiro–Wilk): ${isOk(swr) ? `W = ${num(swr.W)}, p ${pval(swr.p)}` : why(swr)}`,
+    `  normality of residuals (${CHECK_TERMS["shapiro-wilk"].short}): ${isAvailable(swr) ? `W = ${num(swr.W)}, p ${pval(swr.p)}` : why(swr)}`,
   );
   out.push(
-    `  per group: ${sw.map((s) => `${String(s.group)} ${isOk(s) ? `W = ${num(s.W)}, p ${pval(s.p)}` : "n/a"}`).join("; ")}`,
+    `  per group: ${sw.map((s) => `${s.group} ${s.available !== false ? `W = ${num(s.W)}, p ${pval(s.p)}` : "n/a"}`).join("; ")}`,
   );
   for (const [label, x] of [
-    ["equal variances, Levene (mean-centred)", result.levene],
-    ["equal variances, Brown–Forsythe (median-centred)", result.brownForsythe],
+    [`equal variances, ${CHECK_TERMS.levene.title}`, result.levene],
+    [`equal variances, ${CHECK_TERMS["brown-forsythe"].title}`, result.brownForsythe],
   ] as const) {
-    const t = x as Rec;
     out.push(
-      `  ${label}: ${isOk(t) ? `F = ${num(t.F)} on ${t.df1} and ${t.df2} df, p ${pval(t.p)}` : why(t)}`,
+      `  ${label}: ${isAvailable(x) ? `F = ${num(x.F)} on ${x.df1} and ${x.df2} df, p ${pval(x.p)}` : why(x)}`,
     );
   }
-  const b = result.bartlett as Rec;
+  const b = result.bartlett;
   out.push(
-    `  equal variances, Bartlett: ${isOk(b) ? `statistic ${num(b.statistic)} on ${b.df} df, p ${pval(b.p)}` : why(b)}`,
+    `  equal variances, ${CHECK_TERMS.bartlett.title}: ${isAvailable(b) ? `statistic ${num(b.statistic)} on ${b.df} df, p ${pval(b.p)}` : why(b)}`,
   );
   out.push(
-    `  largest SD / smallest SD: ${typeof result.sdRatio === "number" ? num(result.sdRatio, 3) : why(result.sdRatio)}`,
+    `  ${CHECK_TERMS["sd-ratio"].title.toLowerCase()}: ${typeof result.sdRatio === "number" ? num(result.sdRatio, 3) : why(result.sdRatio)}`,
   );
-  const o = result.outliers as Rec;
-  if (isOk(o)) {
+  const o = result.outliers;
+  if (isAvailable(o)) {
     out.push(
       `  outliers: ${o.totalMild} beyond 1.5 IQR, ${o.totalExtreme} beyond 3 IQR, ${o.totalLargeResidual} with |studentized residual| > 3`,
     );
   }
   out.push("");
 
-  const ph = result.posthoc as Rec;
-  const families: [string, string, (x: Rec) => string[]][] = [
-    [
-      "tukey",
-      "Tukey–Kramer (pooled variance)",
-      (x) => [num(x.diff), `${num(x.lower)} to ${num(x.upper)}`, pval(x.pAdj)],
-    ],
-    [
-      "gamesHowell",
-      "Games–Howell (separate variances)",
-      (x) => [num(x.diff), `${num(x.lower)} to ${num(x.upper)}`, pval(x.pAdj)],
-    ],
-    ["dunn", "Dunn (ranks, two-sided)", (x) => [num(x.z), pval(x.p), pval(x.pAdj)]],
-  ];
+  const ph = result.posthoc;
   out.push("Pairwise comparisons");
-  for (const [key, title, cells] of families) {
-    const fam = ph[key];
-    if (!Array.isArray(fam)) {
-      out.push(`  ${title}: ${why(fam)}`);
-      continue;
+  const interval = (x: { diff: number; lower: number; upper: number; pAdj: number }) => [
+    num(x.diff),
+    `${num(x.lower)} to ${num(x.upper)}`,
+    pval(x.pAdj),
+  ];
+  const family = <P extends { a: string; b: string }>(
+    title: string,
+    pairs: P[] | Unavailable,
+    head: string[],
+    cells: (x: P) => string[],
+  ) => {
+    if (!Array.isArray(pairs)) {
+      out.push(`  ${title}: ${why(pairs)}`);
+      return;
     }
     out.push(`  ${title}`);
-    const head =
-      key === "dunn" ? ["pair", "z", "p", "p adjusted"] : ["pair", "difference", "interval", "p adjusted"];
     out.push(
       ...table(
         head,
-        (fam as Rec[]).map((x) => [`${String(x.a)} − ${String(x.b)}`, ...cells(x)]),
+        pairs.map((x) => [`${x.a} − ${x.b}`, ...cells(x)]),
       ).map((l) => "  " + l),
     );
-  }
+  };
+  const intervalHead = ["pair", "difference", "interval", "p adjusted"];
+  family(`${POSTHOC_TERMS["tukey-kramer"].short} (pooled variance)`, ph.tukey, intervalHead, interval);
+  family(`${POSTHOC_TERMS["games-howell"].short} (separate variances)`, ph.gamesHowell, intervalHead, (x) =>
+    x.available ? interval(x) : ["—", `not available: ${x.reason}`, "—"],
+  );
+  family(`${POSTHOC_TERMS.dunn.short} (ranks, two-sided)`, ph.dunn, ["pair", "z", "p", "p adjusted"], (x) => [
+    num(x.z),
+    pval(x.p),
+    pval(x.pAdj),
+  ]);
   if (result.warnings.length) {
     out.push("");
     out.push("Warnings");

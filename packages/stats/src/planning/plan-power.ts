@@ -1,10 +1,8 @@
-import type { OmnibusTest } from "../choice/plan-test.js";
+import type { OmnibusTest, PowerMethod } from "../vocabulary/ids.js";
 import { StatsInputError } from "../errors.js";
 import { anovaPower } from "./anova-power.js";
 import { anovaSampleSize } from "./anova-sample-size.js";
 import { simulatedPower } from "./simulated-power.js";
-
-export type PowerMethod = "noncentral-f" | "noncentral-f-welch-approximation" | "simulation";
 
 export interface PlanPowerResult {
   test: OmnibusTest;

@@ -1,6 +1,8 @@
 import { StatsInputError } from "../errors.js";
 
-export type PAdjustMethod = "holm" | "bonferroni" | "bh" | "none";
+import type { Adjustment } from "../vocabulary/ids.js";
+
+export type PAdjustMethod = Adjustment | "none";
 
 /**
  * Multiplicity adjustment of a family of m p-values.

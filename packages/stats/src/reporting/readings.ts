@@ -1,5 +1,23 @@
+import { SD_RATIO_LIMIT } from "../choice/thresholds.js";
 import { formatDf, formatP, formatStat, formatUnit } from "./format.js";
-import { ok, reasonOf, type ResultView } from "./result-view.js";
+import type { AnalysisResult } from "../types/analysis-result.js";
+import { isAvailable as ok, reasonOf } from "../types/analysis-result.js";
+import { TEST_TERMS } from "../vocabulary/names.js";
+import type { OmnibusTest } from "../vocabulary/ids.js";
+
+/** The parts of a result the readings use (a stored analysis from an older engine still fits). */
+export type ResultView = Pick<
+  AnalysisResult,
+  | "groups"
+  | "anova"
+  | "welch"
+  | "kruskalWallis"
+  | "brownForsythe"
+  | "shapiroWilk"
+  | "shapiroWilkResiduals"
+  | "sdRatio"
+  | "outliers"
+> & { options: Pick<AnalysisResult["options"], "alpha"> };
 
 /** One plain-language line per assumption check, for the checks screen and the report. */
 export interface Reading {
@@ -8,8 +26,8 @@ export interface Reading {
   text: string;
 }
 
-/** A rule of thumb for the SD ratio, common practice (the same threshold the test choice uses). */
-const SD_RATIO_ATTENTION = 2;
+/** A rule of thumb for the SD ratio, common practice: the same threshold the test choice uses. */
+const SD_RATIO_ATTENTION = SD_RATIO_LIMIT;
 
 /**
  * Reads the assumption checks of one analysis into sentences that say what each means for the
@@ -34,7 +52,7 @@ export function checkReadings(r: ResultView): Reading[] {
 
   const sw = r.shapiroWilkResiduals;
   if (ok(sw)) {
-    const fails = r.shapiroWilk.filter((g) => "p" in g && g.p < alpha).map((g) => g.group);
+    const fails = r.shapiroWilk.filter((g) => g.available !== false && g.p < alpha).map((g) => g.group);
     out.push({
       key: "normality",
       level: sw.p < alpha ? "attention" : "ok",
@@ -52,7 +70,7 @@ export function checkReadings(r: ResultView): Reading[] {
   }
 
   const bf = r.brownForsythe;
-  const ratio = typeof r.sdRatio === "number" ? r.sdRatio : ok(r.sdRatio) ? r.sdRatio.ratio : null;
+  const ratio = typeof r.sdRatio === "number" ? r.sdRatio : null;
   if (ok(bf)) {
     const differs = bf.p < alpha || (ratio !== null && ratio > SD_RATIO_ATTENTION);
     const ratioText =
@@ -94,19 +112,18 @@ export function checkReadings(r: ResultView): Reading[] {
 }
 
 /** The omnibus result in the usual reporting form, e.g. "F(2, 27) = 4.21, p = .025, ω² = .17". */
-export function omnibusSentence(r: ResultView, test: string): string {
+export function omnibusSentence(r: ResultView, test: OmnibusTest): string {
   if (test === "anova") {
     const a = r.anova;
     if (!ok(a)) return `Classic one-way ANOVA could not be computed: ${reasonOf(a)}.`;
-    const ci =
-      a.etaSquaredCi && ok(a.etaSquaredCi)
-        ? `, η² = ${formatUnit(a.etaSquared)} [95% CI ${formatUnit(a.etaSquaredCi.lower)}, ${formatUnit(a.etaSquaredCi.upper)}]`
-        : `, η² = ${formatUnit(a.etaSquared)}`;
+    const ci = ok(a.etaSquaredCi)
+      ? `, η² = ${formatUnit(a.etaSquared)} [95% CI ${formatUnit(a.etaSquaredCi.lower)}, ${formatUnit(a.etaSquaredCi.upper)}]`
+      : `, η² = ${formatUnit(a.etaSquared)}`;
     return `F(${formatDf(a.df1)}, ${formatDf(a.df2)}) = ${formatStat(a.F)}, p ${formatP(a.p)}, ω² = ${formatUnit(a.omegaSquared)}${ci}`;
   }
   if (test === "welch") {
     const w = r.welch;
-    if (!ok(w)) return `Welch's ANOVA could not be computed: ${reasonOf(w)}.`;
+    if (!ok(w)) return `${TEST_TERMS.welch.title} could not be computed: ${reasonOf(w)}.`;
     const a = r.anova;
     const eff = ok(a) ? `, ω² = ${formatUnit(a.omegaSquared)}` : "";
     return `Welch's F(${formatDf(w.df1)}, ${formatDf(w.df2)}) = ${formatStat(w.F)}, p ${formatP(w.p)}${eff}`;
@@ -115,12 +132,6 @@ export function omnibusSentence(r: ResultView, test: string): string {
   if (!ok(k)) return `The Kruskal–Wallis test could not be computed: ${reasonOf(k)}.`;
   return `H(${formatDf(k.df)}) = ${formatStat(k.H)}, p ${formatP(k.p)}, ε² = ${formatUnit(k.epsilonSquared)}`;
 }
-
-export const TEST_NAMES: Record<string, string> = {
-  anova: "classic one-way ANOVA",
-  welch: "Welch's ANOVA",
-  "kruskal-wallis": "the Kruskal–Wallis test",
-};
 
 /**
  * A short summary that does not overclaim: what the omnibus test found at α, the effect size
@@ -131,13 +142,13 @@ export function midSentence(name: string): string {
   return name.length > 1 && /^[A-Z][a-z]/.test(name) ? name[0]!.toLowerCase() + name.slice(1) : name;
 }
 
-export function resultSummary(r: ResultView, test: string, outcomeName: string): string[] {
+export function resultSummary(r: ResultView, test: OmnibusTest, outcomeName: string): string[] {
   const outcome = midSentence(outcomeName);
   const alpha = r.options.alpha;
   const p = test === "anova" ? r.anova : test === "welch" ? r.welch : r.kruskalWallis;
   const lines: string[] = [];
-  const name = TEST_NAMES[test] ?? test;
-  if (!ok(p)) return [`${name[0]!.toUpperCase()}${name.slice(1)} could not be computed: ${reasonOf(p)}.`];
+  const name = TEST_TERMS[test].name;
+  if (!ok(p)) return [`${TEST_TERMS[test].title} could not be computed: ${reasonOf(p)}.`];
   const sentence = omnibusSentence(r, test);
   if (p.p < alpha) {
     lines.push(

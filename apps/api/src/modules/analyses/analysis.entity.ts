@@ -7,6 +7,7 @@ import {
   PrimaryGeneratedColumn,
   type Relation,
 } from "typeorm";
+import type { AnalysisResult, OmnibusTest, PosthocFamily } from "@waymark/stats";
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 
@@ -26,13 +27,14 @@ export class Analysis {
   engineVersion: string;
 
   @Column("varchar", { name: "recommended_test", length: 20 })
-  recommendedTest: string;
+  recommendedTest: OmnibusTest;
 
   @Column("varchar", { name: "chosen_test", length: 20 })
-  chosenTest: string;
+  chosenTest: OmnibusTest;
 
   @Column("varchar", { name: "posthoc_method", length: 80 })
-  posthocMethod: string;
+  /** The post-hoc family's id (vocabulary ids; older rows converted by migration 1764900000000). */
+  posthocMethod: PosthocFamily;
 
   @Column("text", { name: "override_justification", nullable: true })
   overrideJustification: string | null;
@@ -42,7 +44,7 @@ export class Analysis {
   planSnapshot: unknown;
 
   @Column("simple-json")
-  result: unknown;
+  result: AnalysisResult;
 
   @Column("simple-json")
   summary: string[];

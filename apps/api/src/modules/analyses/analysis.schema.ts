@@ -1,11 +1,7 @@
-import { z } from "zod";
+import { LIMITS } from "@waymark/contract";
 
-export const MIN_JUSTIFICATION = 20;
+// The request body comes from the one contract (@waymark/contract).
+export { runAnalysisBody as runAnalysisSchema } from "@waymark/contract";
 
-export const runAnalysisSchema = z.object({
-  datasetId: z.number().int().positive("datasetId must be a dataset of this study"),
-  test: z
-    .enum(["anova", "welch", "kruskal-wallis"], "test must be anova, welch or kruskal-wallis")
-    .optional(),
-  justification: z.string().trim().max(4000).optional(),
-});
+/** The shortest justification an override of the recommended test accepts (LIMITS.minJustification). */
+export const MIN_JUSTIFICATION = LIMITS.minJustification;

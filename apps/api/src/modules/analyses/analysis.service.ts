@@ -1,11 +1,4 @@
-import {
-  checkReadings,
-  ENGINE_VERSION,
-  posthocFor,
-  resultSummary,
-  TEST_NAMES,
-  type ResultView,
-} from "@waymark/stats";
+import { checkReadings, ENGINE_VERSION, posthocFamilyFor, resultSummary, testName } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { Actor } from "../../http/actor.js";
 import { HttpError, NotFoundError } from "../../http/errors.js";
@@ -47,7 +40,7 @@ export async function runChecks(study: Study, dataset: Dataset) {
           })),
         }
       : null;
-  return { checks: result, readings: checkReadings(result as unknown as ResultView), observations };
+  return { checks: result, readings: checkReadings(result), observations };
 }
 
 /**
@@ -82,7 +75,7 @@ export async function runAnalysis(
       422,
       "planned_test_unavailable",
       decision.reasons.find((r) => r.code === "decision.not-computable")?.text ??
-        `${TEST_NAMES[planned]} cannot be computed on these data.`,
+        `${testName(planned)} cannot be computed on these data.`,
     );
   }
   const part = chosen === "anova" ? result.anova : chosen === "welch" ? result.welch : result.kruskalWallis;
@@ -90,14 +83,14 @@ export async function runAnalysis(
     throw new HttpError(
       422,
       "test_unavailable",
-      `${TEST_NAMES[chosen]} cannot be computed on these data: ${String(part.reason)}.`,
+      `${testName(chosen)} cannot be computed on these data: ${String(part.reason)}.`,
     );
   }
   if (isDeviation && (input.justification ?? "").length < MIN_JUSTIFICATION) {
     throw new HttpError(
       400,
       "justification_required",
-      `Running ${TEST_NAMES[chosen]} instead of the plan's primary test, ${TEST_NAMES[planned]}, is a deviation from the locked plan and needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
+      `Running ${testName(chosen)} instead of the plan's primary test, ${testName(planned)}, is a deviation from the locked plan and needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
     );
   }
   const id = await inTransaction(ds, async (tx) => {
@@ -110,7 +103,7 @@ export async function runAnalysis(
         // The column keeps its first name; it holds the test of record under the locked plan.
         recommendedTest: planned,
         chosenTest: chosen,
-        posthocMethod: posthocFor(chosen, result.options.comparisons),
+        posthocMethod: posthocFamilyFor(chosen, result.options.comparisons),
         overrideJustification: isDeviation ? input.justification!.trim() : null,
         planSnapshot: {
           ...study.plan,
@@ -120,14 +113,14 @@ export async function runAnalysis(
           controlLevel: study.controlLevel,
         },
         result,
-        summary: resultSummary(result as unknown as ResultView, chosen, study.outcomeName),
+        summary: resultSummary(result, chosen, study.outcomeName),
         createdById: user.id,
       }),
     );
     await recordAudit(tx, actor, {
       action: "analysis.run",
       studyId: study.id,
-      summary: `Ran ${TEST_NAMES[chosen]} on dataset version ${dataset.version}`,
+      summary: `Ran ${testName(chosen)} on dataset version ${dataset.version}`,
       after: {
         analysisId: saved.id,
         datasetId: dataset.id,
@@ -140,7 +133,7 @@ export async function runAnalysis(
       await recordAudit(tx, actor, {
         action: "analysis.override",
         studyId: study.id,
-        summary: `Deviated from the plan: ran ${TEST_NAMES[chosen]} instead of the primary test, ${TEST_NAMES[planned]}`,
+        summary: `Deviated from the plan: ran ${testName(chosen)} instead of the primary test, ${testName(planned)}`,
         after: { analysisId: saved.id, justification: saved.overrideJustification },
       });
     }

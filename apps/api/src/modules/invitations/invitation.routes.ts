@@ -1,22 +1,12 @@
 import type { DataSource } from "typeorm";
-import { z } from "zod";
 import { policy } from "../../auth/policy.js";
-import { ROLES } from "../../auth/roles.js";
+import { acceptInvitationBody as acceptSchema, inviteBody as inviteSchema } from "@waymark/contract";
 import type { Env } from "../../config/env.js";
 import { actorOf } from "../../http/actor.js";
 import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { Invitation } from "./invitation.entity.js";
 import { acceptInvitation, findByToken, invite, stateOf } from "./invitation.service.js";
-
-const inviteSchema = z.object({
-  email: z.email("Enter a valid e-mail address").max(254),
-  role: z.enum(ROLES, "Choose analyst, reviewer, writer or admin"),
-});
-const acceptSchema = z.object({
-  displayName: z.string().trim().min(2, "Enter your name as colleagues know it").max(120),
-  password: z.string().max(200),
-});
 
 const present = (i: Invitation) => ({
   id: i.id,

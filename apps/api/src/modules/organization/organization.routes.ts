@@ -1,23 +1,12 @@
 import type { DataSource, EntityManager } from "typeorm";
-import { z } from "zod";
 import { policy } from "../../auth/policy.js";
 import { actorOf } from "../../http/actor.js";
 import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { recordAudit } from "../audit/audit.service.js";
-import { alphaSchema } from "../studies/study.schema.js";
+import { settingsBody as settingsSchema } from "@waymark/contract";
 import { OrganizationSettings } from "./organization-settings.entity.js";
 import { inTransaction } from "../../db/in-transaction.js";
-
-const settingsSchema = z
-  .object({
-    policy: z.enum(["classic-first", "welch-first"]),
-    defaultAlpha: alphaSchema,
-    defaultAdjust: z.enum(["holm", "bonferroni", "bh"]),
-    paperSize: z.enum(["A4", "Letter"]),
-  })
-  .partial()
-  .strict();
 
 export async function loadSettings(db: DataSource | EntityManager): Promise<OrganizationSettings> {
   return db.getRepository(OrganizationSettings).findOneByOrFail({ id: 1 });

@@ -1,11 +1,15 @@
 import {
+  ADJUSTMENT_TERMS,
   checkReadings,
-  midSentence,
   formatStat,
   formatUnit,
+  isAvailable,
+  midSentence,
   omnibusSentence,
-  TEST_NAMES,
-  type ResultView,
+  POSTHOC_TERMS,
+  posthocSentence,
+  TEST_TERMS,
+  type PosthocFamily,
 } from "@waymark/stats";
 import { comparisonsOf } from "../studies/plan.js";
 import { paragraph, type Block } from "./report-blocks.js";
@@ -22,17 +26,21 @@ const ASSIGNMENT: Record<string, string> = {
   unsure: "How units were assigned to groups was not recorded.",
 };
 
-const ADJUST: Record<string, string> = {
-  holm: "Holm's step-down adjustment",
-  bonferroni: "the Bonferroni adjustment",
-  bh: "the Benjamini–Hochberg false-discovery-rate adjustment",
-};
-
 const CAUTION =
   "This analysis supports, and does not replace, the judgement of a qualified statistician and the codes, regulations and licensed practice that apply to this work. Decisions that affect safety or health must rest on those, not on a p-value.";
 
 const date = (d: Date | string | null) =>
   d ? new Date(d).toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—";
+
+/** The references each post-hoc family cites (Hedges' g goes with every mean-based family). */
+const FAMILY_REFERENCES: Record<PosthocFamily, readonly ReferenceKey[]> = {
+  "tukey-kramer": ["tukey", "kramer", "hedges"],
+  "games-howell": ["gamesHowell", "hedges"],
+  dunnett: ["dunnett", "hedges"],
+  "welch-vs-control-holm": ["welch", "holm", "hedges"],
+  dunn: ["dunn"],
+  "dunn-vs-control": ["dunn"],
+};
 
 const list = (xs: string[]) =>
   xs.length <= 1 ? (xs[0] ?? "") : `${xs.slice(0, -1).join(", ")} and ${xs[xs.length - 1]}`;
@@ -43,12 +51,10 @@ const list = (xs: string[]) =>
  */
 export function buildReport(input: ReportInput): Block[] {
   const { study, dataset, analysis, signature } = input;
-  const r = analysis.result as Omit<ResultView, "groups"> & {
-    posthoc: Record<string, unknown>;
-    groups: Record<string, unknown>[];
-  };
-  const view = analysis.result as ResultView;
+  const r = analysis.result;
   const chosen = analysis.chosenTest;
+  const family = analysis.posthocMethod;
+  const adjustment = ADJUSTMENT_TERMS[study.plan.adjust].sentence;
   const vsControl = comparisonsOf(study.design) === "vs-control" && !!study.controlLevel;
   const alpha = study.plan.alpha;
   const unit = study.outcomeUnit;
@@ -79,7 +85,7 @@ export function buildReport(input: ReportInput): Block[] {
   blocks.push({ type: "heading", level: 3, text: "Pre-specified plan" });
   blocks.push(
     paragraph(
-      `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy, ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"} and ${ADJUST[study.plan.adjust]} for rank-based comparisons.` +
+      `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy, ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"} and ${adjustment} for rank-based comparisons.` +
         (study.plan.power
           ? ` The planned sample size was ${study.plan.power.nPerGroup} per group, for power ${formatUnit(study.plan.power.achievedPower)} to detect an effect of Cohen's f = ${formatStat(study.plan.power.effectF)} with the one-way ANOVA F test.`
           : ""),
@@ -99,45 +105,29 @@ export function buildReport(input: ReportInput): Block[] {
       "methods",
     ),
   );
-  const recommended = TEST_NAMES[analysis.recommendedTest] ?? analysis.recommendedTest;
-  const chosenName = TEST_NAMES[chosen] ?? chosen;
+  const recommended = TEST_TERMS[analysis.recommendedTest].name;
+  const chosenName = TEST_TERMS[chosen].name;
   blocks.push(
     paragraph(
       `Reasons recorded for the recommendation (${recommended}): ${r.recommendation.reasons.join(" ")}`,
       "methods",
     ),
   );
-  const posthocSentence: Record<string, string> = {
-    "Tukey–Kramer HSD":
-      "pairwise comparisons with the Tukey–Kramer honestly significant difference procedure, which controls the family-wise error rate with simultaneous 95% confidence intervals",
-    "Games–Howell":
-      "pairwise comparisons with the Games–Howell procedure, which does not assume equal variances and gives simultaneous 95% confidence intervals",
-    Dunn: `pairwise comparisons with Dunn's test on mean ranks (two-sided, tie-corrected), with ${ADJUST[study.plan.adjust]}`,
-    Dunnett: `comparisons of each group with the control by Dunnett's procedure, with simultaneous 95% confidence intervals`,
-    "Welch t-tests against the control, Holm-adjusted":
-      "Welch t-tests of each group against the control with Holm's adjustment",
-    "Dunn against the control": `Dunn's test of each group against the control with ${ADJUST[study.plan.adjust]}`,
-  };
   blocks.push(
     paragraph(
-      `The omnibus test was ${chosenName}, followed by ${posthocSentence[analysis.posthocMethod] ?? analysis.posthocMethod}. Effect sizes are reported with each result.`,
+      `The omnibus test was ${chosenName}, followed by ${posthocSentence(family, study.plan.adjust)}. Effect sizes are reported with each result.`,
       "methods",
     ),
   );
   if (chosen === "anova") (["fisher", "hays"] as const).forEach((x) => refs.add(x));
   if (chosen === "welch") (["welch", "hays"] as const).forEach((x) => refs.add(x));
   if (chosen === "kruskal-wallis") (["kruskal", "tomczak"] as const).forEach((x) => refs.add(x));
-  const m = analysis.posthocMethod;
-  if (m === "Tukey–Kramer HSD") (["tukey", "kramer", "hedges"] as const).forEach((x) => refs.add(x));
-  if (m === "Games–Howell") (["gamesHowell", "hedges"] as const).forEach((x) => refs.add(x));
-  if (m === "Dunnett") (["dunnett", "hedges"] as const).forEach((x) => refs.add(x));
-  if (m.startsWith("Welch t-tests")) (["welch", "holm"] as const).forEach((x) => refs.add(x));
-  if (m.startsWith("Dunn") && !m.startsWith("Dunnett")) {
-    refs.add("dunn");
+  for (const x of FAMILY_REFERENCES[family]) refs.add(x);
+  if (family === "dunn" || family === "dunn-vs-control") {
     if (study.plan.adjust === "holm") refs.add("holm");
     if (study.plan.adjust === "bh") refs.add("bh");
   }
-  if (r.anova && "etaSquaredCi" in (r.anova as object)) refs.add("steiger");
+  if (isAvailable(r.anova) && isAvailable(r.anova.etaSquaredCi)) refs.add("steiger");
 
   blocks.push({ type: "heading", level: 3, text: "Data and missing values" });
   const rep = dataset.report;
@@ -175,10 +165,10 @@ export function buildReport(input: ReportInput): Block[] {
     ]),
   });
   blocks.push({ type: "heading", level: 3, text: "Assumption checks" });
-  for (const reading of checkReadings(view)) blocks.push(paragraph(reading.text, "results"));
+  for (const reading of checkReadings(r)) blocks.push(paragraph(reading.text, "results"));
   blocks.push({ type: "heading", level: 3, text: "Omnibus test" });
-  const omni = omnibusSentence(view, chosen);
-  blocks.push(paragraph(`${chosenName[0]!.toUpperCase()}${chosenName.slice(1)}: ${omni}.`, "results"));
+  const omni = omnibusSentence(r, chosen);
+  blocks.push(paragraph(`${TEST_TERMS[chosen].title}: ${omni}.`, "results"));
   for (const line of analysis.summary) blocks.push(paragraph(line, "results"));
   if (analysis.overrideJustification) {
     blocks.push(
@@ -189,13 +179,13 @@ export function buildReport(input: ReportInput): Block[] {
     );
   }
   blocks.push({ type: "heading", level: 3, text: "Post-hoc comparisons" });
-  const table = posthocTable(r.posthoc ?? {}, chosen, vsControl, unit);
+  const table = posthocTable(r.posthoc, family, unit);
   if ("reason" in table)
     blocks.push(paragraph(`The post-hoc comparisons could not be computed: ${table.reason}.`, "results"));
   else
     blocks.push({
       type: "table",
-      caption: `Table 2. ${analysis.posthocMethod}`,
+      caption: `Table 2. ${POSTHOC_TERMS[family].title}`,
       header: table.header,
       rows: table.rows,
     });
@@ -208,17 +198,14 @@ export function buildReport(input: ReportInput): Block[] {
     blocks.push({
       type: "figure",
       figure: "intervals",
-      caption: `Figure 2. Differences between group means with simultaneous 95% confidence intervals (${analysis.posthocMethod}); intervals that cross zero show no clear difference.`,
+      caption: `Figure 2. Differences between group means with simultaneous 95% confidence intervals (${POSTHOC_TERMS[family].short}); intervals that cross zero show no clear difference.`,
     });
   }
-  const fwer = r as unknown as { familyWiseError?: { m?: number; fwerIndependent?: number } };
-  if (
-    typeof fwer.familyWiseError?.m === "number" &&
-    typeof fwer.familyWiseError.fwerIndependent === "number"
-  ) {
+  const fwer = r.familyWiseError;
+  if (isAvailable(fwer)) {
     blocks.push(
       paragraph(
-        `With m = ${fwer.familyWiseError.m} comparisons, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwer.familyWiseError.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
+        `With m = ${fwer.m} comparisons, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwer.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
         "results",
       ),
     );

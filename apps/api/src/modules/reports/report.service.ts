@@ -10,7 +10,6 @@ import { buildReport } from "./build-report.js";
 import { groupsFigure, intervalsFigure } from "./figures.js";
 import { intervalPairs } from "./posthoc-table.js";
 import type { Block } from "./report-blocks.js";
-import { comparisonsOf } from "../studies/plan.js";
 
 export interface GeneratedReport {
   blocks: Block[];
@@ -67,12 +66,7 @@ export async function generateReport(
       label,
     ),
   );
-  const result = analysis.result as { posthoc?: Record<string, unknown> };
-  const pairs = intervalPairs(
-    result.posthoc ?? {},
-    analysis.chosenTest,
-    comparisonsOf(study.design) === "vs-control" && !!study.controlLevel,
-  );
+  const pairs = intervalPairs(analysis.result.posthoc, analysis.posthocMethod);
   if (pairs.length > 0) images.set("intervals", intervalsFigure(pairs, `Difference in ${label}`));
   return { blocks, images, draft, title: study.title };
 }

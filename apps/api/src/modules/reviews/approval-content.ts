@@ -1,5 +1,6 @@
 import { createHash } from "node:crypto";
 import type { Analysis } from "../analyses/analysis.entity.js";
+import { SIGNED_POSTHOC_TEXT } from "../analyses/posthoc-signed-text.js";
 import type { Study } from "../studies/study.entity.js";
 
 /** JSON with object keys sorted at every level, so equal content always hashes the same. */
@@ -35,7 +36,8 @@ export function approvalContent(study: Study, analysis: Analysis, datasetSha256:
       engineVersion: analysis.engineVersion,
       recommendedTest: analysis.recommendedTest,
       chosenTest: analysis.chosenTest,
-      posthocMethod: analysis.posthocMethod,
+      // Hashed in the wording signed before records kept ids, so older signatures still verify.
+      posthocMethod: SIGNED_POSTHOC_TEXT[analysis.posthocMethod] ?? analysis.posthocMethod,
       overrideJustification: analysis.overrideJustification,
       result: analysis.result,
     },

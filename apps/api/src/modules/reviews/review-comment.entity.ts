@@ -10,8 +10,9 @@ import {
 import { DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 
-export const REVIEW_STEPS = ["design", "plan", "data", "checks", "choice", "results"] as const;
-export type ReviewStep = (typeof REVIEW_STEPS)[number];
+import type { ReviewStep } from "@waymark/contract";
+
+export { REVIEW_STEPS, type ReviewStep } from "@waymark/contract";
 
 @Entity({ name: "review_comments" })
 export class ReviewComment {

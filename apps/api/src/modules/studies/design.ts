@@ -1,25 +1,8 @@
-/** The analyst's answers to the design questions; each may still be open or "unsure". */
-export interface DesignAnswers {
-  independence?: "independent" | "paired" | "unsure";
-  scale?: "continuous" | "ordinal" | "unsure";
-  hasControl?: "yes" | "no" | "unsure";
-  comparisons?: "all-pairs" | "vs-control" | "unsure";
-  assignment?: "randomized" | "convenience" | "observational" | "unsure";
-  /** For a continuous outcome: a question about averages, or about which group tends to have larger values. */
-  question?: "means" | "larger-values" | "unsure";
-  /** Whether the plan puts about the same number of units in every group. */
-  groupSizes?: "equal" | "unequal" | "unsure";
-}
+import type { DesignAnswers } from "@waymark/contract";
 
-export const DESIGN_QUESTIONS = [
-  "independence",
-  "scale",
-  "question",
-  "groupSizes",
-  "hasControl",
-  "comparisons",
-  "assignment",
-] as const;
+/** The analyst's answers to the design questions; each may still be open or "unsure". */
+export type { DesignAnswers };
+export { DESIGN_QUESTIONS } from "@waymark/contract";
 
 /** Why a design falls outside what Waymark analyses, or null when it is in scope. */
 export function outOfScopeReason(d: DesignAnswers): string | null {

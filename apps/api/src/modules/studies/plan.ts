@@ -1,29 +1,15 @@
-import { planTest, type OutOfScopePlan, type PowerMethod, type TestPlan } from "@waymark/stats";
+import type { PlanSettings } from "@waymark/contract";
+import {
+  planTest,
+  type Comparisons,
+  type OmnibusTest,
+  type OutOfScopePlan,
+  type TestPlan,
+} from "@waymark/stats";
 import type { DesignAnswers } from "./design.js";
 
-export type TestPolicy = "classic-first" | "welch-first";
-export type Adjustment = "holm" | "bonferroni" | "bh";
-export type OmnibusTest = "anova" | "welch" | "kruskal-wallis";
-
-/** The analysis plan; frozen once `planLockedAt` is set on the study. */
-export interface PlanSettings {
-  policy: TestPolicy;
-  adjust: Adjustment;
-  alpha: number;
-  power: PlanPower | null;
-  /** The primary test decided from the design, stored when the plan is locked. */
-  testPlan?: TestPlan;
-}
-
-export interface PlanPower {
-  effectF: number;
-  targetPower: number;
-  nPerGroup: number;
-  achievedPower: number;
-  /** How the power of the primary test was computed (noncentral F, its Welch approximation, or simulation). */
-  method?: PowerMethod;
-  note?: string;
-}
+/** The analysis plan (ids only); frozen once `planLockedAt` is set on the study. */
+export type { OmnibusTest, PlanSettings };
 
 export const DEFAULT_PLAN: PlanSettings = {
   policy: "classic-first",
@@ -49,6 +35,6 @@ export function testPlanOf(plan: PlanSettings, design: DesignAnswers): TestPlan 
   });
 }
 
-export function comparisonsOf(design: DesignAnswers): "all-pairs" | "vs-control" {
+export function comparisonsOf(design: DesignAnswers): Comparisons {
   return design.comparisons === "vs-control" ? "vs-control" : "all-pairs";
 }

@@ -13,8 +13,9 @@ import { User } from "../users/user.entity.js";
 import type { DesignAnswers } from "./design.js";
 import type { PlanSettings } from "./plan.js";
 
-export type StudyStatus = "draft" | "in_review" | "approved";
-export type StudyContext = "general" | "clinical" | "safety-critical";
+import type { StudyContext, StudyStatus } from "@waymark/contract";
+
+export type { StudyContext, StudyStatus };
 
 @Entity({ name: "studies" })
 export class Study {

@@ -1,4 +1,4 @@
-import { planPower, TEST_NAMES } from "@waymark/stats";
+import { planPower, testName } from "@waymark/stats";
 import type { DataSource } from "typeorm";
 import type { z } from "zod";
 import type { Actor } from "../../http/actor.js";
@@ -196,7 +196,7 @@ export async function lockPlan(ds: DataSource, actor: Actor, id: number): Promis
     await recordAudit(tx, actor, {
       action: "study.plan-locked",
       studyId: id,
-      summary: `Locked the analysis plan; primary test: ${TEST_NAMES[testPlan.test]}`,
+      summary: `Locked the analysis plan; primary test: ${testName(testPlan.test)}`,
       after: { ...study.plan, design: study.design },
     });
   });

@@ -1,7 +1,6 @@
 import type { DataSource } from "typeorm";
-import { z } from "zod";
 import { policy } from "../../auth/policy.js";
-import { ROLES } from "../../auth/roles.js";
+import { userPatchBody as patchSchema } from "@waymark/contract";
 import { actorOf } from "../../http/actor.js";
 import { ConflictError, NotFoundError } from "../../http/errors.js";
 import type { RouteSpec } from "../../http/route-table.js";
@@ -10,11 +9,6 @@ import { recordAudit } from "../audit/audit.service.js";
 import type { TypeormSessionStore } from "../sessions/typeorm-session-store.js";
 import { toPublicUser, User } from "./user.entity.js";
 import { inTransaction } from "../../db/in-transaction.js";
-
-const patchSchema = z
-  .object({ role: z.enum(ROLES).optional(), active: z.boolean().optional() })
-  .strict()
-  .refine((b) => b.role !== undefined || b.active !== undefined, "Give a role or an active flag");
 
 export function userRoutes(ds: DataSource, sessions: TypeormSessionStore): RouteSpec[] {
   return [

@@ -1,4 +1,4 @@
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 import { RoleHome } from "@/features/home/components/role-home";
 
 export function HomeRoute() {

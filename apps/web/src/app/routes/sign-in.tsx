@@ -2,7 +2,7 @@ import { useState } from "react";
 import { Navigate, useLocation, useNavigate } from "react-router-dom";
 import { WaymarkLogo } from "@/components/ui/waymark-logo";
 import { paths } from "@/config/paths";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 import { usePublicConfig } from "@/features/auth/api/get-public-config";
 import { DemoAccounts } from "@/features/auth/components/demo-accounts";
 import { SignInForm } from "@/features/auth/components/sign-in-form";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { currentStep, shortReason, studySteps } from "./step-status";
-import { makeAnalysis, makeDataset, makeStudy } from "./testing/make-study";
+import { makeAnalysis, makeDataset, makeStudy } from "@/test/make-study";
 
 const states = (s: ReturnType<typeof studySteps>) => Object.fromEntries(s.map((x) => [x.key, x.state]));
 const facts = (s: ReturnType<typeof studySteps>) => Object.fromEntries(s.map((x) => [x.key, x.fact]));

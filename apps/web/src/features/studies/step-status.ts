@@ -1,7 +1,7 @@
 import type { StudyStepSegment } from "@/config/paths";
 import { formatDf, formatP, formatStat } from "@/lib/format";
 import { formatDateTime } from "@/lib/format";
-import { testTitle } from "./labels";
+import { testTitle } from "@/lib/labels";
 import { isAvailable, num, type Analysis, type DesignKey, type Recommendation, type Study } from "./types";
 
 export type StepState = "done" | "open" | "locked";

@@ -1,7 +1,7 @@
 import { Link, useParams } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { paths, reportPath, studyPath } from "@/config/paths";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 import { useStudyHistory } from "@/features/reviews/api/get-study-history";
 import { CheckReadings } from "@/features/reviews/components/check-readings";
 import { ChoiceFacts } from "@/features/reviews/components/choice-facts";
@@ -9,13 +9,13 @@ import { DecisionPanel } from "@/features/reviews/components/decision-panel";
 import { HistoryTimeline } from "@/features/reviews/components/history-timeline";
 import { DataFacts, PlanFacts } from "@/features/reviews/components/plan-facts";
 import { ReviewSection, ReviewStepIndex } from "@/features/reviews/components/review-section";
-import { useAnalysis } from "@/features/studies/api/get-analysis";
-import { useChecks } from "@/features/studies/api/get-checks";
+import { useAnalysis } from "@/features/analyses/api/get-analysis";
+import { useChecks } from "@/features/analyses/api/get-checks";
 import { useStudy } from "@/features/studies/api/get-study";
 import { DesignSummary } from "@/features/studies/components/design-summary";
 import { LifecycleBadge } from "@/features/studies/components/lifecycle-badge";
-import { RecommendationCard } from "@/features/studies/components/recommendation-card";
-import { ResultsPanel } from "@/features/studies/components/results-panel";
+import { RecommendationCard } from "@/features/analyses/components/recommendation-card";
+import { ResultsPanel } from "@/features/analyses/components/results-panel";
 import { isAvailable } from "@/features/studies/types";
 import { formatDateTime } from "@/lib/format";
 

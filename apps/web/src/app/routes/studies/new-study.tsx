@@ -1,6 +1,6 @@
 import { Navigate, useNavigate } from "react-router-dom";
 import { paths, studyPath } from "@/config/paths";
-import { useMe } from "@/features/auth/api/get-me";
+import { useMe } from "@/lib/current-user";
 import { CreateStudyForm } from "@/features/studies/components/create-study-form";
 import { can } from "@/lib/authorization";
 

@@ -1,9 +1,9 @@
 import { Link } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { studyPath } from "@/config/paths";
-import { useChecks } from "@/features/studies/api/get-checks";
-import { ChecksPanel } from "@/features/studies/components/checks-panel";
-import { StepHeading } from "@/features/studies/components/step-heading";
+import { useChecks } from "@/features/analyses/api/get-checks";
+import { ChecksPanel } from "@/features/analyses/components/checks-panel";
+import { StepHeading } from "@/components/ui/step-heading";
 import { useStudyContext } from "./study-context";
 
 export function StudyChecksRoute() {

@@ -1,12 +1,12 @@
 import { useNavigate } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { studyPath } from "@/config/paths";
-import { useChecks } from "@/features/studies/api/get-checks";
-import { RecommendationCard } from "@/features/studies/components/recommendation-card";
-import { RunAnalysisForm } from "@/features/studies/components/run-analysis-form";
-import { StepHeading } from "@/features/studies/components/step-heading";
+import { useChecks } from "@/features/analyses/api/get-checks";
+import { RecommendationCard } from "@/features/analyses/components/recommendation-card";
+import { RunAnalysisForm } from "@/features/analyses/components/run-analysis-form";
+import { StepHeading } from "@/components/ui/step-heading";
 import { OutOfScopeStop } from "@/features/studies/components/out-of-scope-stop";
-import { UnavailableNote } from "@/features/studies/components/unavailable-note";
+import { UnavailableNote } from "@/features/analyses/components/unavailable-note";
 import { isAvailable } from "@/features/studies/types";
 import { useStudyContext } from "./study-context";
 

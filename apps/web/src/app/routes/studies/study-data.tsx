@@ -1,9 +1,9 @@
 import { ErrorPanel } from "@/components/errors/error-panel";
-import { useDatasets } from "@/features/studies/api/get-datasets";
-import { DataUpload } from "@/features/studies/components/data-upload";
-import { DatasetVersions } from "@/features/studies/components/dataset-versions";
-import { StepHeading } from "@/features/studies/components/step-heading";
-import { ValidationReport } from "@/features/studies/components/validation-report";
+import { useDatasets } from "@/features/datasets/api/get-datasets";
+import { DataUpload } from "@/features/datasets/components/data-upload";
+import { DatasetVersions } from "@/features/datasets/components/dataset-versions";
+import { StepHeading } from "@/components/ui/step-heading";
+import { ValidationReport } from "@/features/datasets/components/validation-report";
 import { useStudyContext } from "./study-context";
 
 export function StudyDataRoute() {

@@ -1,5 +1,5 @@
 import { DesignQuestionnaire } from "@/features/studies/components/design-questionnaire";
-import { StepHeading } from "@/features/studies/components/step-heading";
+import { StepHeading } from "@/components/ui/step-heading";
 import { useStudyContext } from "./study-context";
 
 export function StudyDesignRoute() {

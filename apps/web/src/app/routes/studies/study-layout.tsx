@@ -1,13 +1,13 @@
 import { Link, Outlet, useLocation, useParams } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { paths, STUDY_STEP_SEGMENTS, type StudyStepSegment } from "@/config/paths";
-import { useMe } from "@/features/auth/api/get-me";
-import { useAnalysis } from "@/features/studies/api/get-analysis";
+import { useMe } from "@/lib/current-user";
+import { useAnalysis } from "@/features/analyses/api/get-analysis";
 import { useStudy } from "@/features/studies/api/get-study";
 import { LifecycleBadge } from "@/features/studies/components/lifecycle-badge";
 import { PlanLockedNote } from "@/features/studies/components/plan-locked-note";
 import { StudyTrail } from "@/features/studies/components/study-trail";
-import { CONTEXT_LABELS } from "@/features/studies/labels";
+import { CONTEXT_LABELS } from "@/lib/labels";
 import { studySteps } from "@/features/studies/step-status";
 import { can } from "@/lib/authorization";
 import type { StudyOutletContext } from "./study-context";

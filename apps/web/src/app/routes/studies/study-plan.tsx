@@ -2,8 +2,8 @@ import { FamilyWisePanel } from "@/features/studies/components/family-wise-panel
 import { LockPlanPanel } from "@/features/studies/components/lock-plan-panel";
 import { PlanForm } from "@/features/studies/components/plan-form";
 import { PlannedMethods } from "@/features/studies/components/planned-methods";
-import { PowerCalculator } from "@/features/studies/components/power-calculator";
-import { StepHeading } from "@/features/studies/components/step-heading";
+import { PowerCalculator } from "@/features/power/components/power-calculator";
+import { StepHeading } from "@/components/ui/step-heading";
 import { useStudyContext } from "./study-context";
 
 export function StudyPlanRoute() {

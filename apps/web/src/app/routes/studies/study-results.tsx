@@ -1,10 +1,10 @@
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { DraftReportLink } from "@/features/reports/components/draft-report-link";
 import { HistoryTimeline } from "@/features/reviews/components/history-timeline";
-import { useAnalysis } from "@/features/studies/api/get-analysis";
-import { ResultsPanel } from "@/features/studies/components/results-panel";
-import { StepHeading } from "@/features/studies/components/step-heading";
-import { SubmitPanel } from "@/features/studies/components/submit-panel";
+import { useAnalysis } from "@/features/analyses/api/get-analysis";
+import { ResultsPanel } from "@/features/analyses/components/results-panel";
+import { StepHeading } from "@/components/ui/step-heading";
+import { SubmitPanel } from "@/features/reviews/components/submit-panel";
 import { useStudyContext } from "./study-context";
 
 export function StudyResultsRoute() {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client";
-import { meQueryOptions, type User } from "./get-me";
+import { meQueryOptions, type User } from "@/lib/current-user";
 
 export const loginInputSchema = z.object({
   email: z.email("Enter a valid e-mail address"),

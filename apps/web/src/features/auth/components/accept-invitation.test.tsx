@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { renderWithProviders } from "@/test/render";
-import { meQueryOptions } from "../api/get-me";
+import { meQueryOptions } from "@/lib/current-user";
 import { AcceptInvitation } from "./accept-invitation";
 
 afterEach(() => vi.unstubAllGlobals());

@@ -1,4 +1,4 @@
-import type { User } from "@/features/auth/api/get-me";
+import type { User } from "@/lib/current-user";
 import { ROLE_LABELS } from "@/lib/roles";
 import { ROLE_GUIDES, TRAIL } from "../role-guides";
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
 import type { Study } from "../types";
-import { studyKeys } from "./keys";
+import { studyKeys } from "@/lib/query-keys";
 
 export function getStudies(): Promise<Study[]> {
   return api.get<{ studies: Study[] }>("/studies").then((r) => r.studies);

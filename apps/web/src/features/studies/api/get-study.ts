@@ -1,7 +1,7 @@
 import { queryOptions, useQuery, type QueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
 import type { Study } from "../types";
-import { studyKeys } from "./keys";
+import { studyKeys } from "@/lib/query-keys";
 
 export function getStudy(id: number): Promise<Study> {
   return api.get<{ study: Study }>(`/studies/${id}`).then((r) => r.study);

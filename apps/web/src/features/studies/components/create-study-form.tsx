@@ -8,7 +8,7 @@ import {
   useCreateStudy,
   type CreateStudyForm,
 } from "../api/create-study";
-import { CONTEXT_LABELS } from "../labels";
+import { CONTEXT_LABELS } from "@/lib/labels";
 import type { Study, StudyContext } from "../types";
 import { LevelsEditor } from "./levels-editor";
 

@@ -1,8 +1,8 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { DESIGN_QUESTIONS } from "../design-questions";
-import { makeStudy } from "../testing/make-study";
-import { renderWithStudy, routeFetch } from "../testing/study-harness";
+import { makeStudy } from "@/test/make-study";
+import { renderWithStudy, routeFetch } from "@/test/study-harness";
 import type { DesignAnswers, Study } from "../types";
 import { DesignQuestionnaire } from "./design-questionnaire";
 

@@ -1,5 +1,5 @@
 import { formatAlpha, formatPercent } from "@/lib/format";
-import { plannedComparisons } from "../labels";
+import { plannedComparisons } from "@/lib/labels";
 import type { ComparisonSet } from "../types";
 
 /** Why the comparisons need protecting: the chance of at least one false alarm over m tests. */

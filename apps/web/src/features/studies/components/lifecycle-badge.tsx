@@ -1,4 +1,4 @@
-import { STATUS_LABELS } from "../labels";
+import { STATUS_LABELS } from "@/lib/labels";
 import type { StudyStatus } from "../types";
 
 const STYLES: Record<StudyStatus, string> = {

@@ -1,9 +1,9 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { makeStudy } from "../testing/make-study";
-import { renderWithStudy, routeFetch } from "../testing/study-harness";
+import { makeStudy } from "@/test/make-study";
+import { renderWithStudy, routeFetch } from "@/test/study-harness";
 import { PlanForm } from "./plan-form";
-import { PowerCalculator } from "./power-calculator";
+import { PowerCalculator } from "@/features/power/components/power-calculator";
 
 afterEach(() => vi.unstubAllGlobals());
 

@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Form } from "@/components/ui/form";
 import { TextField } from "@/components/ui/text-field";
 import { useSavePlan } from "../api/save-plan";
-import { ADJUST_NAMES, POLICY_TEXT } from "../labels";
+import { ADJUST_NAMES, POLICY_TEXT } from "@/lib/labels";
 import type { Adjustment, Policy, Study } from "../types";
 
 export const planFormSchema = z.object({

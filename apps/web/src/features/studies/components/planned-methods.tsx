@@ -1,5 +1,5 @@
 import { formatAlpha } from "@/lib/format";
-import { ADJUST_NAMES, COMPARISON_TEXT, POLICY_TEXT, posthocName, testTitle } from "../labels";
+import { ADJUST_NAMES, COMPARISON_TEXT, POLICY_TEXT, posthocName, testTitle } from "@/lib/labels";
 import type { Study } from "../types";
 
 /** What the plan will run, as the server derived it from the design answers and the policy. */

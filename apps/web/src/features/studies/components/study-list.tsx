@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import { studyPath } from "@/config/paths";
 import { formatDate } from "@/lib/format";
-import { CONTEXT_LABELS } from "../labels";
+import { CONTEXT_LABELS } from "@/lib/labels";
 import { studySteps } from "../step-status";
 import type { Study } from "../types";
 import { LifecycleBadge } from "./lifecycle-badge";

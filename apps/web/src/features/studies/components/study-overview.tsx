@@ -1,7 +1,7 @@
 import { Link } from "react-router-dom";
 import { studyPath } from "@/config/paths";
 import { formatAlpha, formatDateTime } from "@/lib/format";
-import { CONTEXT_LABELS } from "../labels";
+import { CONTEXT_LABELS } from "@/lib/labels";
 import { currentStep, STEP_LABELS, type StepStatus } from "../step-status";
 import type { Study } from "../types";
 

@@ -1,0 +1,29 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api-client";
+import type { Analysis, Study, TestId } from "@/features/studies/types";
+import { studyKeys } from "@/lib/query-keys";
+
+export interface CreateAnalysisBody {
+  datasetId: number;
+  test?: TestId;
+  justification?: string;
+}
+
+export function createAnalysis(id: number, body: CreateAnalysisBody): Promise<Analysis> {
+  return api.post<{ analysis: Analysis }>(`/studies/${id}/analyses`, { ...body }).then((r) => r.analysis);
+}
+
+export function useCreateAnalysis(id: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateAnalysisBody) => createAnalysis(id, body),
+    onSuccess: (analysis) => {
+      qc.setQueryData(studyKeys.analysis(id, analysis.id), analysis);
+      // The results step opens at once; the refetch below brings the rest of the study.
+      qc.setQueryData<Study>(studyKeys.detail(id), (s) => (s ? { ...s, latestAnalysisId: analysis.id } : s));
+      void qc.invalidateQueries({ queryKey: studyKeys.analyses(id), exact: true });
+      void qc.invalidateQueries({ queryKey: studyKeys.detail(id), exact: true });
+      void qc.invalidateQueries({ queryKey: studyKeys.all, exact: true });
+    },
+  });
+}

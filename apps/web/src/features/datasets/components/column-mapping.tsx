@@ -1,0 +1,133 @@
+import { useId, useState } from "react";
+import { Button } from "@/components/ui/button";
+import type { DatasetPreview, Layout } from "@/features/studies/types";
+
+export interface Mapping {
+  layout: Layout;
+  groupColumn: string;
+  outcomeColumn: string;
+}
+
+/** The first rows of the file and the columns Waymark guessed, which the analyst can change. */
+export function ColumnMapping({
+  preview,
+  fileName,
+  onConfirm,
+  onCancel,
+  busy,
+}: {
+  preview: DatasetPreview;
+  fileName: string;
+  onConfirm: (m: Mapping) => void;
+  onCancel: () => void;
+  busy?: boolean;
+}) {
+  const [layout, setLayout] = useState<Layout>(preview.guess.layout);
+  const [groupColumn, setGroup] = useState(preview.guess.groupColumn ?? preview.columns[0] ?? "");
+  const [outcomeColumn, setOutcome] = useState(preview.guess.outcomeColumn ?? preview.columns[1] ?? "");
+  const gid = useId();
+  const oid = useId();
+  const same = layout === "long" && groupColumn === outcomeColumn;
+  return (
+    <section aria-labelledby="preview-title" className="rounded-lg bg-paper p-5 shadow-sm">
+      <h3 id="preview-title" className="font-semibold">
+        {fileName}: first rows of {preview.rowCount}
+      </h3>
+      <div className="mt-3 overflow-x-auto">
+        <table className="text-sm" aria-label="First rows of the file">
+          <thead>
+            <tr className="border-b border-ink/15 text-left">
+              {preview.columns.map((c) => (
+                <th
+                  key={c}
+                  className={`px-2 py-1 font-semibold ${layout === "long" && (c === groupColumn || c === outcomeColumn) ? "text-spruce" : ""}`}
+                >
+                  {c}
+                  {layout === "long" && c === groupColumn ? (
+                    <span className="ml-1 text-xs font-normal">(group)</span>
+                  ) : null}
+                  {layout === "long" && c === outcomeColumn ? (
+                    <span className="ml-1 text-xs font-normal">(outcome)</span>
+                  ) : null}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {preview.rows.map((r, i) => (
+              <tr key={i} className="border-b border-ink/5">
+                {preview.columns.map((c, j) => (
+                  <td key={c} className="num px-2 py-1">
+                    {r[j] ?? ""}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <fieldset className="mt-4 flex flex-col gap-1 text-sm">
+        <legend className="font-medium">How the file is laid out</legend>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="layout" checked={layout === "long"} onChange={() => setLayout("long")} />{" "}
+          One row per unit: a group column and an outcome column
+        </label>
+        <label className="flex items-center gap-2">
+          <input type="radio" name="layout" checked={layout === "wide"} onChange={() => setLayout("wide")} />{" "}
+          One column per group, each holding that group's values
+        </label>
+      </fieldset>
+      {layout === "long" && (
+        <div className="mt-3 flex flex-wrap gap-4 text-sm">
+          <div className="flex flex-col gap-1">
+            <label htmlFor={gid} className="font-medium">
+              Group column
+            </label>
+            <select
+              id={gid}
+              value={groupColumn}
+              onChange={(e) => setGroup(e.target.value)}
+              className="rounded-md border border-ink/25 bg-paper px-3 py-1.5"
+            >
+              {preview.columns.map((c) => (
+                <option key={c} value={c}>
+                  {c}
+                </option>
+              ))}
+            </select>
+          </div>
+          <div className="flex flex-col gap-1">
+            <label htmlFor={oid} className="font-medium">
+              Outcome column
+            </label>
+            <select
+              id={oid}
+              value={outcomeColumn}
+              onChange={(e) => setOutcome(e.target.value)}
+              className="rounded-md border border-ink/25 bg-paper px-3 py-1.5"
+            >
+              {preview.columns.map((c) => (
+                <option key={c} value={c}>
+                  {c}
+                </option>
+              ))}
+            </select>
+          </div>
+        </div>
+      )}
+      {same && (
+        <p role="alert" className="mt-2 text-sm text-brick">
+          The group and the outcome must be different columns.
+        </p>
+      )}
+      <div className="mt-4 flex gap-2">
+        <Button disabled={busy || same} onClick={() => onConfirm({ layout, groupColumn, outcomeColumn })}>
+          {busy ? "Uploading…" : "Upload this file"}
+        </Button>
+        <Button variant="secondary" disabled={busy} onClick={onCancel}>
+          Choose another file
+        </Button>
+      </div>
+    </section>
+  );
+}

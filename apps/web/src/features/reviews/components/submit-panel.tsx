@@ -1,0 +1,70 @@
+import { useState } from "react";
+import { ErrorPanel } from "@/components/errors/error-panel";
+import { Button } from "@/components/ui/button";
+import { useSubmitStudy } from "../api/submit-study";
+import type { Study } from "@/features/studies/types";
+
+/** Sends the study to a reviewer, after a confirm step saying what the submission freezes. */
+export function SubmitPanel({ study, analysisId }: { study: Study; analysisId: number }) {
+  const submit = useSubmitStudy(study.id);
+  const [confirming, setConfirming] = useState(false);
+  if (study.status === "in_review") {
+    return (
+      <p className="rounded-md bg-panel p-4 text-sm">
+        Submitted for review: a reviewer will approve it or send it back with comments.
+      </p>
+    );
+  }
+  if (study.status === "approved") {
+    return (
+      <p className="rounded-md bg-spruce-100 p-4 text-sm font-medium text-spruce">
+        Approved by a reviewer. Writers can now download the report.
+      </p>
+    );
+  }
+  return (
+    <section aria-labelledby="submit-title" className="rounded-lg border border-spruce/30 bg-paper p-5">
+      <h3 id="submit-title" className="font-semibold">
+        Submit for review
+      </h3>
+      <p className="mt-1 max-w-prose text-sm">
+        A reviewer checks the plan, the checks, the choice of test and these results, then approves them with
+        an electronic signature or sends the study back with comments. Nobody can approve their own study.
+      </p>
+      {!confirming ? (
+        <Button className="mt-3" onClick={() => setConfirming(true)}>
+          Submit for review…
+        </Button>
+      ) : (
+        <div
+          role="alertdialog"
+          aria-labelledby="submit-confirm"
+          className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-4"
+        >
+          <p id="submit-confirm" className="font-semibold">
+            Submit this analysis?
+          </p>
+          <p className="mt-1 max-w-prose text-sm">
+            While it is in review, the study, its data and this analysis cannot change.
+          </p>
+          <div className="mt-3 flex gap-2">
+            <Button
+              disabled={submit.isPending}
+              onClick={() => submit.mutate(analysisId, { onSuccess: () => setConfirming(false) })}
+            >
+              {submit.isPending ? "Submitting…" : "Yes, submit"}
+            </Button>
+            <Button variant="secondary" onClick={() => setConfirming(false)}>
+              Not yet
+            </Button>
+          </div>
+        </div>
+      )}
+      {submit.error && (
+        <div className="mt-3">
+          <ErrorPanel title="The study was not submitted" message={submit.error.message} />
+        </div>
+      )}
+    </section>
+  );
+}

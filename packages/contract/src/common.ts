@@ -1,0 +1,17 @@
+import { z } from "zod";
+import { ALPHA_MESSAGE, LIMITS } from "./limits.js";
+
+/** A required text field with the limit named in its message. */
+export const text = (label: string, max: number) =>
+  z.string().trim().min(1, `${label} is required`).max(max, `${label} must be at most ${max} characters`);
+
+/** α in (0, .20]: the one check, the one message. */
+export const alpha = z.number(ALPHA_MESSAGE).gt(0, ALPHA_MESSAGE).max(LIMITS.alphaMax, ALPHA_MESSAGE);
+
+/** Dates cross the wire as ISO text. */
+export const timestamp = z
+  .union([z.string(), z.date()])
+  .transform((d) => (d instanceof Date ? d.toISOString() : d));
+
+export const person = z.object({ id: z.number(), displayName: z.string() });
+export type Person = z.infer<typeof person>;

@@ -1,0 +1,92 @@
+import { z } from "zod";
+import { person, timestamp } from "./common.js";
+import { omnibusTest, reviewDecision, reviewStep } from "./enums.js";
+import { LIMITS } from "./limits.js";
+
+export const submitBody = z.object({ analysisId: z.number().int().positive().optional() }).strict();
+
+export const approveBody = z.object({
+  password: z.string().min(1, "Re-enter your password to sign"),
+  meaning: z
+    .string()
+    .trim()
+    .min(
+      LIMITS.minSignatureMeaning,
+      "State what your signature means, e.g. approved as the analysis of record",
+    )
+    .max(LIMITS.maxSignatureMeaning),
+});
+export type ApproveBody = z.infer<typeof approveBody>;
+
+export const requestChangesBody = z.object({
+  comment: z.string().trim().min(1, "Say what needs to change").max(LIMITS.comment),
+  step: reviewStep.nullable().optional(),
+  stepComments: z
+    .array(z.object({ step: reviewStep, body: z.string().trim().min(1).max(LIMITS.comment) }))
+    .max(LIMITS.maxStepComments)
+    .optional(),
+});
+export type RequestChangesBody = z.infer<typeof requestChangesBody>;
+
+export const queueItem = z.object({
+  studyId: z.number(),
+  title: z.string(),
+  analyst: person,
+  submittedAt: timestamp,
+  round: z.number(),
+  recommendedTest: omnibusTest,
+  chosenTest: omnibusTest,
+  override: z.boolean(),
+  daysWaiting: z.number(),
+});
+export type QueueItem = z.infer<typeof queueItem>;
+export const reviewQueueResponse = z.object({ queue: z.array(queueItem) });
+
+export const reviewComment = z.object({
+  id: z.number(),
+  step: reviewStep.nullable(),
+  body: z.string(),
+  author: person.nullable(),
+  createdAt: timestamp,
+});
+export type ReviewComment = z.infer<typeof reviewComment>;
+
+export const signatureRecord = z.object({
+  signerName: z.string(),
+  signedAt: timestamp,
+  meaning: z.string(),
+  contentHash: z.string(),
+});
+export type SignatureRecord = z.infer<typeof signatureRecord>;
+
+export const reviewRound = z.object({
+  id: z.number(),
+  round: z.number(),
+  analysisId: z.number(),
+  datasetId: z.number(),
+  submittedAt: timestamp,
+  submittedBy: person.nullable(),
+  decision: reviewDecision.nullable(),
+  decidedAt: timestamp.nullable(),
+  decidedBy: person.nullable(),
+  comments: z.array(reviewComment),
+  signature: signatureRecord.nullable(),
+});
+export type ReviewRound = z.infer<typeof reviewRound>;
+
+export const trailEvent = z.object({
+  id: z.number(),
+  at: timestamp,
+  actorEmail: z.string().nullable(),
+  action: z.string(),
+  summary: z.string(),
+});
+export type TrailEvent = z.infer<typeof trailEvent>;
+
+export const studyHistory = z.object({
+  rounds: z.array(reviewRound),
+  approvalValid: z.boolean(),
+  approvalNote: z.string().nullable(),
+  events: z.array(trailEvent),
+});
+export type StudyHistory = z.infer<typeof studyHistory>;
