@@ -47,6 +47,14 @@ export {
   type KruskalWallisOptions,
 } from "./omnibus/kruskal-wallis.js";
 export { permutationKruskalWallis, type PermutationResult } from "./omnibus/permutation-kruskal-wallis.js";
+export {
+  trimmedMeansAnova,
+  trimmedMoments,
+  trimmedWelchF,
+  DEFAULT_TRIM,
+  type TrimmedMeansAnovaResult,
+  type TrimmedGroupSummary,
+} from "./omnibus/trimmed-means-anova.js";
 
 // Assumption checks.
 export { shapiroWilk, SHAPIRO_WILK_MAX_N, type ShapiroWilkResult } from "./assumptions/shapiro-wilk.js";
