@@ -80,6 +80,20 @@ export {
   type PosthocMethod,
 } from "./choice/recommend-test.js";
 
+export {
+  errorRateCheck,
+  errorRateRuns,
+  ERROR_RATE_RUNS,
+  ERROR_RATE_FULL_N,
+  ERROR_RATE_MIN_RUNS,
+  ERROR_RATE_MAX_RUNS,
+  ERROR_RATE_SEED,
+  ERROR_RATE_SMALL_GROUP,
+  type ErrorRateCheckResult,
+  type ErrorRateCheckOptions,
+  type TestErrorRate,
+} from "./choice/error-rate-check.js";
+
 // Distributions.
 export * from "./distributions/index.js";
 

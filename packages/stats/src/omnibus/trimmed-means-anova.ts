@@ -49,6 +49,9 @@ export function trimmedMoments(
   const trimmedMean = sum / h;
   const lo = sorted[g] as number;
   const hi = sorted[n - g - 1] as number;
+  // The winsorized sample is constant exactly when these two agree; summing equal values
+  // could leave a rounding residue that would pass for a tiny positive variance.
+  if (lo === hi) return { g, h, trimmedMean: lo, winsorizedVariance: 0 };
   // Winsorized mean first, then squared deviations from it (two passes, no cancellation).
   const wMean = (sum + g * lo + g * hi) / n;
   let ss = g * (lo - wMean) ** 2 + g * (hi - wMean) ** 2;
