@@ -98,7 +98,15 @@ export {
 export * from "./distributions/index.js";
 
 // Reporting: shared number formatting and plain-language readings (web app, API report, CLI).
-export { formatDf, formatP, formatPercent, formatStat, formatUnit } from "./reporting/format.js";
+export {
+  formatDf,
+  formatP,
+  formatPercent,
+  formatPWithExponent,
+  formatStat,
+  formatUnit,
+  SMALLEST_WRITTEN_P,
+} from "./reporting/format.js";
 export {
   checkReadings,
   midSentence,

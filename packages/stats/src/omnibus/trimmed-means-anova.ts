@@ -1,5 +1,6 @@
 import { StatsInputError } from "../errors.js";
 import { fSf } from "../distributions/f.js";
+import { log10FSf } from "../distributions/log10-tails.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
@@ -30,6 +31,8 @@ export interface TrimmedMeansAnovaResult {
   df1: number;
   df2: number;
   p: number;
+  /** log₁₀ p, finite where p underflows to 0 (e.g. −716.3 for p ≈ 5e−717). */
+  log10p: number;
   trimmedMeans: TrimmedGroupSummary[];
 }
 
@@ -122,6 +125,7 @@ export function trimmedMeansAnova(
     df1,
     df2,
     p: fSf(F, df1, df2),
+    log10p: log10FSf(F, df1, df2),
     trimmedMeans: stats.map((s) => ({
       group: s.name,
       n: s.n,
