@@ -68,6 +68,20 @@ export {
 } from "./assumptions/outliers.js";
 export { qqPlot, type QqPlot } from "./assumptions/qq-plot.js";
 export { sdRatio, type SdRatio } from "./assumptions/sd-ratio.js";
+export type { CheckReading } from "./assumptions/check-reading.js";
+export {
+  groupNormality,
+  type GroupNormality,
+  type GroupNormalityReport,
+} from "./assumptions/group-normality.js";
+export {
+  sizeAwareOutliers,
+  grubbsCritical,
+  OUTLIER_FALSE_FLAG_RATE,
+  type SizeAwareOutlierReport,
+  type SizeAwareOutlierGroup,
+  type SizeAwareFlag,
+} from "./assumptions/size-aware-outliers.js";
 
 // Choosing the test.
 export * from "./choice/thresholds.js";
