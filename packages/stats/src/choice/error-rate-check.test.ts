@@ -123,17 +123,24 @@ describe("mixtureCentres", () => {
   });
 });
 
+// The check's result when it runs (it is unavailable only above 50,000 values).
+function check(...args: Parameters<typeof errorRateCheck>) {
+  const r = errorRateCheck(...args);
+  if (!r.available) throw new Error(r.reason);
+  return r;
+}
+
 describe("errorRateCheck", () => {
   it("normal data, equal SDs and equal n: the classic ANOVA rate is within 3 Monte Carlo SE of α (the F test is exact under normality — Fisher; common practice)", () => {
-    const r = errorRateCheck(normalGroups(11, [60, 60, 60], [1, 1, 1]));
+    const r = check(normalGroups(11, [60, 60, 60], [1, 1, 1]));
     if (!r.rates.anova.available) throw new Error(r.rates.anova.reason);
     expect(Math.abs(r.rates.anova.rate - 0.05)).toBeLessThan(3 * Math.sqrt((0.05 * 0.95) / r.runs));
     expect(r.runs).toBe(2000);
   });
 
   it("largest SD in the smallest group: classic ANOVA is liberal, Welch's ANOVA close to α in large groups (Glass, Peckham & Sanders 1972, Review of Educational Research 42, 237–288; Welch 1951; from memory)", () => {
-    const small = errorRateCheck(normalGroups(12, [16, 50, 30, 80], [10, 1, 1, 1]));
-    const large = errorRateCheck(normalGroups(12, [64, 200, 120, 320], [10, 1, 1, 1]));
+    const small = check(normalGroups(12, [16, 50, 30, 80], [10, 1, 1, 1]));
+    const large = check(normalGroups(12, [64, 200, 120, 320], [10, 1, 1, 1]));
     for (const r of [small, large]) {
       const { anova, welch } = r.rates;
       if (!anova.available || !welch.available) throw new Error("unavailable");
@@ -151,14 +158,14 @@ describe("errorRateCheck", () => {
 
   it("the same seed gives the same result; another seed gives other draws (property of a seeded generator)", () => {
     const data = normalGroups(13, [10, 12, 9], [1, 2, 3]);
-    expect(errorRateCheck(data, { seed: 5 })).toEqual(errorRateCheck(data, { seed: 5 }));
-    expect(errorRateCheck(data, { seed: 5 }).rates).not.toEqual(errorRateCheck(data, { seed: 6 }).rates);
+    expect(check(data, { seed: 5 })).toEqual(check(data, { seed: 5 }));
+    expect(check(data, { seed: 5 }).rates).not.toEqual(check(data, { seed: 6 }).rates);
   });
 
   it("a zero-variance group: Welch and the trimmed test are unavailable with the reason, the others are still checked", () => {
     const data = normalGroups(14, [10, 10, 10], [1, 1, 1]);
     data[1] = { name: "G2", values: Array(10).fill(7) };
-    const r = errorRateCheck(data, { runs: 200 });
+    const r = check(data, { runs: 200 });
     expect(r.rates.welch).toEqual({
       available: false,
       reason: expect.stringMatching(/group 'G2' has zero variance/),
@@ -169,21 +176,29 @@ describe("errorRateCheck", () => {
     expect(r.notes.join(" ")).toMatch(/covers classic one-way ANOVA, Kruskal–Wallis\./);
   });
 
+  it("is not run above 50,000 values, with the reason (bounded work)", () => {
+    const r = errorRateCheck(normalGroups(17, [30000, 30000], [1, 1], 1));
+    expect(r).toEqual({
+      available: false,
+      reason: expect.stringMatching(/with 60000 values \(more than 50000\)/),
+    });
+  });
+
   it("reduces the runs above 2,000 values by the stated rule", () => {
     expect(errorRateRuns(2000)).toBe(2000);
     expect(errorRateRuns(4000)).toBe(1000);
     expect(errorRateRuns(100_000)).toBe(200);
-    const r = errorRateCheck(normalGroups(15, [1500, 1500, 1000], [1, 1, 1]));
+    const r = check(normalGroups(15, [1500, 1500, 1000], [1, 1, 1]));
     expect(r.runs).toBe(1000);
     expect(r.notes[0]).toMatch(/ran 1000 simulated data sets instead of 2000/);
   });
 
   it("rejects bad options with the reason", () => {
     const data = normalGroups(16, [5, 5], [1, 1]);
-    expect(() => errorRateCheck(data, { alpha: 1 })).toThrow(/alpha between 0 and 1/);
-    expect(() => errorRateCheck(data, { runs: 1e9 })).toThrow(/between 1 and 20000 runs/);
+    expect(() => check(data, { alpha: 1 })).toThrow(/alpha between 0 and 1/);
+    expect(() => check(data, { runs: 1e9 })).toThrow(/between 1 and 20000 runs/);
     expect(() =>
-      errorRateCheck([
+      check([
         { name: "A", values: [1] },
         { name: "B", values: [1, 2] },
       ]),

@@ -47,10 +47,14 @@ function bandwidthFor(sortedStandardized: Float64Array): number {
   return 0.9 * spread * n ** -0.2;
 }
 
+/** Groups above this size are resampled without kernel noise. */
+export const SMOOTH_MAX_GROUP = 1000;
+
 /**
  * Builds the frame from each group's residuals (values minus the group mean).
  * `smooth` = false draws the residuals themselves (the plain bootstrap); true adds normal
- * kernel noise, shrunk to keep the variance (Silverman & Young 1987).
+ * kernel noise, shrunk to keep the variance (Silverman & Young 1987), to groups of up to
+ * SMOOTH_MAX_GROUP values.
  * Cost: O(N log N) plus O(N) root-finding per group for the centres.
  */
 export function resamplingFrame(
@@ -83,7 +87,9 @@ export function resamplingFrame(
     const e = standardized.subarray(start[g] as number, start[g + 1] as number);
     if (s > 0) for (let i = 0; i < n; i++) e[i] = (r[i] as number) / s;
     e.sort();
-    const h = smooth && s > 0 ? bandwidthFor(e) : 0;
+    // Large groups are resampled plainly: their resamples are not lumpy, and the exact
+    // mixture centres would cost O(n) per root-finding step.
+    const h = smooth && s > 0 && n <= SMOOTH_MAX_GROUP ? bandwidthFor(e) : 0;
     bandwidth[g] = h;
     const c = mixtureCentres(e, h, trim);
     const scale = s / Math.sqrt(1 + h * h);
