@@ -77,7 +77,7 @@ describe("replicateStatistics (the simulation's kernels)", () => {
         if (h.available) expect(rel(out[STAT.kruskalWallisH] as number, h.H)).toBeLessThan(1e-10);
         else expect(out[STAT.kruskalWallisH]).toBeNaN();
         if (t.available) {
-          expect(rel(out[STAT.trimmedF] as number, t.F)).toBeLessThan(1e-9);
+          expect(rel(out[STAT.trimmedF] as number, t.F)).toBeLessThan(1e-10);
           expect(rel(out[STAT.trimmedDf2] as number, t.df2)).toBeLessThan(1e-10);
         } else expect(out[STAT.trimmedF]).toBeNaN();
       }
