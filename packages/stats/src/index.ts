@@ -40,6 +40,14 @@ export {
   type KruskalWallisOptions,
 } from "./omnibus/kruskal-wallis.js";
 export { permutationKruskalWallis, type PermutationResult } from "./omnibus/permutation-kruskal-wallis.js";
+export {
+  trimmedMeansAnova,
+  trimmedMoments,
+  trimmedWelchF,
+  DEFAULT_TRIM,
+  type TrimmedMeansAnovaResult,
+  type TrimmedGroupSummary,
+} from "./omnibus/trimmed-means-anova.js";
 
 // Assumption checks.
 export { shapiroWilk, SHAPIRO_WILK_MAX_N, type ShapiroWilkResult } from "./assumptions/shapiro-wilk.js";
@@ -53,6 +61,20 @@ export {
 } from "./assumptions/outliers.js";
 export { qqPlot, type QqPlot } from "./assumptions/qq-plot.js";
 export { sdRatio, type SdRatio } from "./assumptions/sd-ratio.js";
+export type { CheckReading } from "./assumptions/check-reading.js";
+export {
+  groupNormality,
+  type GroupNormality,
+  type GroupNormalityReport,
+} from "./assumptions/group-normality.js";
+export {
+  sizeAwareOutliers,
+  grubbsCritical,
+  OUTLIER_FALSE_FLAG_RATE,
+  type SizeAwareOutlierReport,
+  type SizeAwareOutlierGroup,
+  type SizeAwareFlag,
+} from "./assumptions/size-aware-outliers.js";
 
 // Choosing the test.
 export * from "./choice/thresholds.js";
@@ -74,11 +96,34 @@ export {
   type SensitivityEntry,
 } from "./choice/sensitivity.js";
 
+export {
+  errorRateCheck,
+  errorRateRuns,
+  ERROR_RATE_RUNS,
+  ERROR_RATE_FULL_N,
+  ERROR_RATE_MIN_RUNS,
+  ERROR_RATE_MAX_RUNS,
+  ERROR_RATE_MAX_N,
+  ERROR_RATE_SEED,
+  ERROR_RATE_SMALL_GROUP,
+  type ErrorRateCheckResult,
+  type ErrorRateCheckOptions,
+  type TestErrorRate,
+} from "./choice/error-rate-check.js";
+
 // Distributions.
 export * from "./distributions/index.js";
 
 // Reporting: shared number formatting and plain-language readings (web app, API report, CLI).
-export { formatDf, formatP, formatPercent, formatStat, formatUnit } from "./reporting/format.js";
+export {
+  formatDf,
+  formatP,
+  formatPercent,
+  formatPWithExponent,
+  formatStat,
+  formatUnit,
+  SMALLEST_WRITTEN_P,
+} from "./reporting/format.js";
 export {
   checkReadings,
   midSentence,

@@ -46,4 +46,37 @@ describe("levene", () => {
     );
     expect(r.available).toBe(false);
   });
+
+  it("two values per group: unavailable, not F ≈ 1e30 (arithmetic: both values lie |x₁ − x₂|/2 from the mean and from the median, so SS within is exactly 0)", () => {
+    const groups = [
+      { name: "A", values: [4.1, 5.3] },
+      { name: "B", values: [6.2, 9.9] },
+      { name: "C", values: [1.7, 2.0] },
+    ];
+    for (const center of ["mean", "median"] as const) {
+      const r = levene(groups, center);
+      expect(r.available).toBe(false);
+      if (!r.available)
+        expect(r.reason).toMatch(/absolute deviations from the group (mean|median) are equal/);
+    }
+    // Large offsets and many groups: still zero up to rounding.
+    const far = Array.from({ length: 6 }, (_, g) => ({
+      name: `G${g}`,
+      values: [`100000.${g + 1}7`, `10000${g}.93`],
+    }));
+    expect(levene(far, "mean").available).toBe(false);
+  });
+
+  it("a group of three keeps the test available (the deviations then differ within the group)", () => {
+    const r = levene(
+      [
+        { name: "A", values: [4.1, 5.3] },
+        { name: "B", values: [6.2, 9.9, 7.0] },
+        { name: "C", values: [1.7, 2.0] },
+      ],
+      "mean",
+    );
+    if (!r.available) throw new Error(r.reason);
+    expect(r.F).toBeLessThan(1e6);
+  });
 });

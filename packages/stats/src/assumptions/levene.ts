@@ -27,7 +27,11 @@ export interface LeveneResult {
  * Example: levene([{name:"A",values:[1,2,3]},{name:"B",values:[2,4,6]}], "mean") → F = 0.8, p = 0.4216
  *   (deviations 1,0,1 vs 2,0,2).
  * Cost: O(N) plus the shared per-group sort for the median.
- * Unavailable when every deviation is zero within each group (e.g. all groups constant).
+ * Unavailable when the deviations show no spread within groups: all groups constant, or every
+ * group's deviations equal — always so with two values per group (both lie |x₁ − x₂|/2 from the
+ * mean or median), where the within-group sum of squares is exactly 0 in exact arithmetic but
+ * rounding leaves ~1e-30 and F ≈ 1e30. Treated as zero: SS_W ≤ 1e-12·SS_T, or SS_W at or below
+ * the rounding noise N·(16·ε·max|x|)² of deviations computed from values of size max|x|.
  */
 export function levene(input: SampleInput, center: "mean" | "median"): LeveneResult | Unavailable {
   const sample = prepareSample(input);
@@ -40,6 +44,12 @@ export function levene(input: SampleInput, center: "mean" | "median"): LeveneRes
     return { name: g.name, values: d };
   });
   const result = oneWayAnova(sampleFromArrays(deviations));
+  if (result.available && withinIsRoundingNoise(result.ssWithin, result.ssTotal, sample, deviations)) {
+    return {
+      available: false,
+      reason: `${name} is undefined: within every group the absolute deviations from the group ${center} are equal (as they always are with two values in a group), so they show no spread within groups and F would be rounding noise`,
+    };
+  }
   if (!result.available) {
     return {
       available: false,
@@ -55,4 +65,31 @@ export function levene(input: SampleInput, center: "mean" | "median"): LeveneRes
     df2: result.df2,
     p: result.p,
   };
+}
+
+/** Relative share of SS_T below which SS_W counts as zero. Common practice (a scaled tolerance). */
+export const LEVENE_RELATIVE_TOLERANCE = 1e-12;
+
+/**
+ * Whether the within-group sum of squares of the deviations is zero up to rounding: relative to
+ * the total, or to the error of deviations formed from centred values as large as max|x|
+ * (each carries at most a few ulps of max|x|). Cost: O(N).
+ */
+function withinIsRoundingNoise(
+  ssWithin: number,
+  ssTotal: number,
+  sample: { groups: readonly { centred: Float64Array }[] },
+  deviations: readonly { values: Float64Array }[],
+): boolean {
+  if (ssWithin <= LEVENE_RELATIVE_TOLERANCE * ssTotal) return true;
+  let maxAbs = 0;
+  let N = 0;
+  for (const g of sample.groups) {
+    N += g.centred.length;
+    for (let i = 0; i < g.centred.length; i++) maxAbs = Math.max(maxAbs, Math.abs(g.centred[i] as number));
+  }
+  for (const d of deviations)
+    for (let i = 0; i < d.values.length; i++) maxAbs = Math.max(maxAbs, d.values[i] as number);
+  const noise = 16 * Number.EPSILON * maxAbs;
+  return ssWithin <= N * noise * noise;
 }

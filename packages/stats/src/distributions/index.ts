@@ -5,3 +5,4 @@ export * from "./chi-square.js";
 export * from "./studentized-range.js";
 export * from "./noncentral-f.js";
 export * from "./dunnett.js";
+export * from "./log10-tails.js";

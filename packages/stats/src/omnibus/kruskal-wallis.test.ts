@@ -62,4 +62,16 @@ describe("kruskalWallis", () => {
       reason: "All values are tied, so the ranks carry no information and H is undefined",
     });
   });
+
+  it("gives log10 p where p underflows: χ²(2) has the closed form P(X > h) = exp(−h/2) (Abramowitz & Stegun 26.4.21, from memory)", () => {
+    // Three groups of 1000 that do not overlap: H ≈ 2665, p ≈ 10^−579.
+    const k = kruskalWallis(
+      [0, 1, 2].map((g) => ({ name: `G${g}`, values: Array.from({ length: 1000 }, (_, i) => g * 1000 + i) })),
+    );
+    if (!k.available) throw new Error(k.reason);
+    expect(k.p).toBe(0);
+    const closed = -k.H / 2 / Math.LN10;
+    expect(closed).toBeLessThan(-500);
+    expect(Math.abs(k.log10p - closed) / Math.abs(closed)).toBeLessThan(1e-12);
+  });
 });

@@ -1,4 +1,5 @@
 import { chiSquareSf } from "../distributions/chi-square.js";
+import { log10ChiSquareSf } from "../distributions/log10-tails.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { midranks } from "../numeric/midranks.js";
@@ -23,6 +24,8 @@ export interface KruskalWallisResult {
   df: number;
   /** Upper tail of χ²(k − 1) at H. */
   p: number;
+  /** log₁₀ p, finite where p underflows to 0 (e.g. −716.3 for p ≈ 5e−717). */
+  log10p: number;
   /** ε² = H/(N − 1) (Tomczak & Tomczak 2014). */
   epsilonSquared: number;
   /** C = 1 − Σ(t³ − t)/(N³ − N); H has been divided by it. */
@@ -80,6 +83,7 @@ export function kruskalWallis(
     H,
     df,
     p: chiSquareSf(H, df),
+    log10p: log10ChiSquareSf(H, df),
     epsilonSquared: H / (N - 1),
     tieCorrection,
     meanRanks: sample.groups.map((g, i) => ({

@@ -59,4 +59,28 @@ describe("oneWayAnova", () => {
       ]),
     ).toThrow(new StatsInputError("One-way ANOVA needs at least one value in every group; group 'B' has 0"));
   });
+
+  it("gives log10 p where p underflows: df1 = 2 has the closed form P(F > f) = (d2/(d2 + 2f))^(d2/2) (Abramowitz & Stegun 26.6.4, from memory)", () => {
+    // Three tight, far-apart groups of 400: F is huge and p is far below the smallest double.
+    const group = (centre: number) => Array.from({ length: 400 }, (_, i) => centre + ((i % 7) - 3) / 10);
+    const a = oneWayAnova([
+      { name: "A", values: group(0) },
+      { name: "B", values: group(1) },
+      { name: "C", values: group(2) },
+    ]);
+    if (!a.available) throw new Error(a.reason);
+    expect(a.p).toBe(0);
+    const closed = (a.df2 / 2) * Math.log10(a.df2 / (a.df2 + 2 * a.F));
+    expect(closed).toBeLessThan(-700);
+    expect(Math.abs(a.log10p - closed) / Math.abs(closed)).toBeLessThan(1e-12);
+  });
+
+  it("log10 p agrees with log10 of p in the ordinary range (identity)", () => {
+    const a = oneWayAnova([
+      { name: "A", values: [1, 2, 3] },
+      { name: "B", values: [4, 5, 6] },
+    ]);
+    if (!a.available) throw new Error(a.reason);
+    expect(a.log10p).toBeCloseTo(Math.log10(a.p), 12);
+  });
 });

@@ -1,4 +1,5 @@
 import { fSf } from "../distributions/f.js";
+import { log10FSf } from "../distributions/log10-tails.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { groupMoments } from "../numeric/group-moments.js";
@@ -12,6 +13,8 @@ export interface OneWayAnovaResult {
   df1: number;
   df2: number;
   p: number;
+  /** log₁₀ p, finite where p underflows to 0 (e.g. −716.3 for p ≈ 5e−717). */
+  log10p: number;
   ssBetween: number;
   ssWithin: number;
   ssTotal: number;
@@ -95,6 +98,7 @@ export function oneWayAnova(input: SampleInput): OneWayAnovaResult | Unavailable
     df1,
     df2,
     p: fSf(F, df1, df2),
+    log10p: log10FSf(F, df1, df2),
     ssBetween,
     ssWithin,
     ssTotal,

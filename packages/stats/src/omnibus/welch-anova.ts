@@ -1,4 +1,5 @@
 import { fSf } from "../distributions/f.js";
+import { log10FSf } from "../distributions/log10-tails.js";
 import type { Unavailable } from "../types/group-summary.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { groupMoments } from "../numeric/group-moments.js";
@@ -12,6 +13,8 @@ export interface WelchAnovaResult {
   df1: number;
   df2: number;
   p: number;
+  /** log₁₀ p, finite where p underflows to 0 (e.g. −716.3 for p ≈ 5e−717). */
+  log10p: number;
 }
 
 /**
@@ -61,5 +64,13 @@ export function welchAnova(input: SampleInput): WelchAnovaResult | Unavailable {
   const F = between / df1 / (1 + (2 * (k - 2) * lambda) / (k * k - 1));
   // Λ = 0 only for a single group; with k ≥ 2 it is positive.
   const df2 = (k * k - 1) / (3 * lambda);
-  return { available: true, method: "Welch's ANOVA", F, df1, df2, p: fSf(F, df1, df2) };
+  return {
+    available: true,
+    method: "Welch's ANOVA",
+    F,
+    df1,
+    df2,
+    p: fSf(F, df1, df2),
+    log10p: log10FSf(F, df1, df2),
+  };
 }

@@ -44,3 +44,33 @@ export function formatDf(df: number): string {
 export function formatPercent(x: number, digits = 1): string {
   return `${formatStat(x * 100, digits)}%`;
 }
+
+/** Smallest p written as a number; below it the exponent comes from log₁₀ p. */
+export const SMALLEST_WRITTEN_P = 1e-300;
+
+/**
+ * The p-value with its relation in scientific form, for places that show how small p is
+ * (never "= 0"): "= .025" from .001 up; "= 3.2 × 10^−8" below; under 1e-300, where doubles
+ * run out, the power of ten from log₁₀ p — "≈ 5 × 10^−717" — or "< 1e-300" when log₁₀ p is not
+ * known. Common practice (scientific notation for very small p, e.g. in genome-wide studies).
+ * Example: formatPWithExponent(0, −716.3) → "≈ 5 × 10^−717".
+ */
+export function formatPWithExponent(p: number, log10p?: number): string {
+  const logKnown = log10p !== undefined && Number.isFinite(log10p);
+  if (Number.isFinite(p) && p >= 0.001) return formatP(p);
+  if (Number.isFinite(p) && p >= SMALLEST_WRITTEN_P) {
+    const [mantissa, exponent] = p.toExponential(1).split("e") as [string, string];
+    return `= ${mantissa} × 10^${withMinus(String(Number(exponent)))}`;
+  }
+  if (logKnown) {
+    let exponent = Math.floor(log10p);
+    let mantissa = Math.round(10 ** (log10p - exponent));
+    if (mantissa >= 10) {
+      mantissa = 1;
+      exponent += 1;
+    }
+    return `≈ ${mantissa === 1 ? "" : `${mantissa} × `}10^${withMinus(String(exponent))}`;
+  }
+  if (p === 0) return "< 1e-300";
+  return "not available";
+}
