@@ -24,9 +24,9 @@ import { analyze } from "../dist/analyze.js";
 // ---- The two places that follow analyze()'s contract -------------------------------------
 
 /**
- * The p-value of the test the procedure reports as primary. For now analyze() reports a
- * recommendation; when it reports the primary test decided by the plan, switch this to
- * `result.primary`. Returns undefined when that test could not be computed.
+ * The p-value of the test the procedure reports as primary: the plan's test after the plan's own
+ * rule (the result's `recommendation`, a name kept for the command line's JSON contract).
+ * Returns undefined when that test could not be computed.
  */
 function primaryP(result) {
   const test = result.recommendation.test;
@@ -43,7 +43,17 @@ function primaryP(result) {
 
 /** The analyze() options for a scenario under a policy (the design answers of a locked plan). */
 function designFor(scenario, policy) {
-  return { alpha: ALPHA, policy, scale: "continuous" };
+  // A question about means, planned with the scenario's own sizes; the error-rate check is a
+  // per-study aid, not part of the procedure being measured, so it is skipped here.
+  const equal = scenario.sizes.every((n) => n === scenario.sizes[0]);
+  return {
+    alpha: ALPHA,
+    policy,
+    scale: "continuous",
+    question: "means",
+    plannedSizes: equal ? "equal" : "unequal",
+    errorRateCheck: false,
+  };
 }
 
 // ---- Grid ---------------------------------------------------------------------------------

@@ -1,5 +1,6 @@
 import { StatsInputError } from "./errors.js";
 import { DEFAULT_ALPHA } from "./choice/thresholds.js";
+import { ERROR_RATE_MAX_RUNS, ERROR_RATE_SEED } from "./choice/error-rate-check.js";
 import type { OutcomeQuestion, PlannedSizes, TestPlan } from "./choice/plan-test.js";
 
 import {
@@ -34,7 +35,7 @@ export interface AnalyzeOptions {
   plannedSizes?: PlannedSizes;
   /** A locked plan's test decision; when given it is used as it stands instead of being derived from the answers above. */
   plan?: TestPlan;
-  /** The seeded error-rate simulation for the data at hand; false skips it (default: run with seed 1). */
+  /** The seeded error-rate simulation for the data at hand; false skips it (default: run with the engine's fixed seed). */
   errorRateCheck?: false | { seed?: number; runs?: number };
 }
 
@@ -109,7 +110,7 @@ export function resolveOptions(options: AnalyzeOptions, groupNames: readonly str
 
 function resolveErrorRateCheck(o: AnalyzeOptions["errorRateCheck"]): ResolvedOptions["errorRateCheck"] {
   if (o === false) return false;
-  const seed = o?.seed ?? 1;
+  const seed = o?.seed ?? ERROR_RATE_SEED;
   if (!Number.isSafeInteger(seed) || seed < 0) {
     throw new StatsInputError(`The errorRateCheck seed must be a non-negative integer; got ${String(seed)}`);
   }

@@ -5,7 +5,11 @@ import { outliers } from "./assumptions/outliers.js";
 import { qqPlot } from "./assumptions/qq-plot.js";
 import { sdRatio as sdRatioOf } from "./assumptions/sd-ratio.js";
 import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./assumptions/shapiro-wilk.js";
+import { groupNormality } from "./assumptions/group-normality.js";
+import { sizeAwareOutliers } from "./assumptions/size-aware-outliers.js";
 import { checkWarnings } from "./choice/check-warnings.js";
+import { errorRateCheck } from "./choice/error-rate-check.js";
+import { trimmedMeansAnova } from "./omnibus/trimmed-means-anova.js";
 import { decideTest } from "./choice/decide-test.js";
 import { planTest } from "./choice/plan-test.js";
 import { sensitivityAnalyses, type SensitivityAnalyses } from "./choice/sensitivity.js";
@@ -23,7 +27,11 @@ import { ENGINE_VERSION } from "./version.js";
 import { etaSquaredCi } from "./effect-sizes/eta-squared-ci.js";
 import type { Unavailable } from "./types/group-summary.js";
 import { runPosthoc } from "./posthoc-plan.js";
-import type { AnalysisResult, ShapiroWilkResidualsPart } from "./types/analysis-result.js";
+import type {
+  AnalysisResult,
+  ErrorRateCheckPart,
+  ShapiroWilkResidualsPart,
+} from "./types/analysis-result.js";
 
 export interface AnalyzeInput {
   groups: readonly GroupInput[];
@@ -103,6 +111,8 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
     : anovaCore;
   const welch = part(() => welchAnova(sample));
   const kw = part(() => kruskalWallis(sample));
+  // Sensitivity analysis for means with heavy tails or far values (Yuen 1974; k-group Welch form).
+  const trimmed = part(() => trimmedMeansAnova(sample));
   const lev = part(() => levene(sample, "mean"));
   const bf = part(() => levene(sample, "median"));
   const bart = part(() => bartlett(sample));
@@ -124,6 +134,9 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const ratio = sdRatioOf(sample);
   const sdRatio: number | Unavailable = ratio.available ? ratio.ratio : ratio;
   const outlierReport = part(() => outliers(sample));
+  // The checks that inform: normality per group (not pooled) and outlier fences by group size.
+  const normalityByGroup = part(() => groupNormality(sample, options.alpha));
+  const outliersBySize = part(() => sizeAwareOutliers(sample));
   const qq = qqPlot(sample);
 
   const posthoc = runPosthoc(sample, groups, anova, options);
@@ -159,11 +172,15 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const checkNotes = checkWarnings(recommendation, {
     alpha: options.alpha,
     groups: groupSpreads,
-    normality: shapiro.map((x) =>
-      typeof x.p === "number" ? { group: x.group, p: x.p } : { group: x.group, available: false as const },
-    ),
-    outliers: outlierReport.available
-      ? outlierReport.groups.map((g) => ({ group: g.group, count: g.extreme.length }))
+    normality: normalityByGroup.available
+      ? normalityByGroup.groups.map((g) =>
+          typeof g.p === "number"
+            ? { group: g.group, p: g.p }
+            : { group: g.group, available: false as const },
+        )
+      : [],
+    outliers: outliersBySize.available
+      ? outliersBySize.groups.map((g) => ({ group: g.group, count: g.flaggedCount }))
       : [],
   });
   const pOf = (x: object) =>
@@ -177,6 +194,19 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
           anova: pOf(anova),
           welch: pOf(welch),
           "kruskal-wallis": pOf(kw),
+          "trimmed-means": pOf(trimmed),
+        });
+  // How often each candidate test falsely finds a difference in data like these (seeded).
+  const errorRate: ErrorRateCheckPart =
+    options.errorRateCheck === false
+      ? { available: false, reason: "The error-rate check was not asked for." }
+      : part(() => {
+          const { seed, runs } = options.errorRateCheck as { seed: number; runs: number | undefined };
+          return errorRateCheck(sample, {
+            alpha: options.alpha,
+            seed,
+            ...(runs !== undefined ? { runs } : {}),
+          });
         });
 
   return finite<AnalysisResult>(
@@ -207,7 +237,11 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       posthoc: posthoc.posthoc,
       familyWiseError: posthoc.familyWiseError,
       recommendation,
+      trimmedMeans: trimmed,
+      groupNormality: normalityByGroup,
+      sizeAwareOutliers: outliersBySize,
       sensitivity,
+      errorRateCheck: errorRate,
       checkWarnings: checkNotes,
       warnings,
     },

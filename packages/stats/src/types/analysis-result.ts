@@ -11,7 +11,11 @@ import type { BartlettResult } from "../assumptions/bartlett.js";
 import type { LeveneResult } from "../assumptions/levene.js";
 import type { OutlierReport } from "../assumptions/outliers.js";
 import type { QqPlot } from "../assumptions/qq-plot.js";
+import type { GroupNormalityReport } from "../assumptions/group-normality.js";
+import type { SizeAwareOutlierReport } from "../assumptions/size-aware-outliers.js";
 import type { TestDecision } from "../choice/decide-test.js";
+import type { ErrorRateCheckResult } from "../choice/error-rate-check.js";
+import type { TrimmedMeansAnovaResult } from "../omnibus/trimmed-means-anova.js";
 import type { SensitivityAnalyses } from "../choice/sensitivity.js";
 import type { CodedText } from "../vocabulary/coded-text.js";
 import type { GroupDescription } from "../descriptives/describe.js";
@@ -27,6 +31,8 @@ import type { TukeyKramerPair } from "../posthoc/tukey-kramer.js";
 import type { WelchVsControlPair } from "../posthoc/welch-vs-control-holm.js";
 import type { Adjustment } from "../vocabulary/ids.js";
 import type { Unavailable } from "./group-summary.js";
+
+export type ErrorRateCheckPart = ErrorRateCheckResult | Unavailable;
 
 /** A part that may be unavailable. */
 export type Part<T extends { available: true }> = T | Unavailable;
@@ -100,8 +106,16 @@ export interface AnalysisResult {
   familyWiseError: FamilyWiseErrorPart;
   /** The test of record under the plan (the key keeps its first name: the command line's JSON contract). */
   recommendation: TestDecision;
+  /** Heteroscedastic test on 20% trimmed means: a sensitivity analysis, never the primary test. */
+  trimmedMeans: TrimmedMeansAnovaResult | Unavailable;
+  /** Shapiro–Wilk per group on standardized residuals, with a reading per group. */
+  groupNormality: GroupNormalityReport | Unavailable;
+  /** Far values by fences that account for each group's size (Grubbs-type). */
+  sizeAwareOutliers: SizeAwareOutlierReport | Unavailable;
   /** The other omnibus tests beside the primary one, with a sentence where they disagree. */
   sensitivity: SensitivityAnalyses | Unavailable;
+  /** The seeded simulation of each candidate test's error rate with data like these. */
+  errorRateCheck: ErrorRateCheckPart;
   /** Where a check speaks against the plan's test: what it means and which sensitivity analysis answers it. */
   checkWarnings: CodedText[];
   warnings: string[];
