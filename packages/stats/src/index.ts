@@ -125,6 +125,12 @@ export {
   SMALLEST_WRITTEN_P,
 } from "./reporting/format.js";
 export {
+  deviationSentence,
+  errorRateSentences,
+  primaryTestSentence,
+  sensitivitySentences,
+} from "./reporting/choice-sentences.js";
+export {
   checkReadings,
   midSentence,
   omnibusSentence,

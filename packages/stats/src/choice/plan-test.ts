@@ -138,7 +138,7 @@ export function planTest(design: TestPlanDesign): TestPlan | OutOfScopePlan {
         note(
           "plan.classic-unbalanced",
           {},
-          "The organization's policy puts classic ANOVA first, but the plan does not put the same number of units in every group; with unequal sizes classic ANOVA's error rate depends on which group has the larger spread, so the plan uses Welch's ANOVA.",
+          "The organization's policy puts classic ANOVA first, but the plan does not commit to the same number of units in every group; with unequal sizes classic ANOVA's error rate depends on which group has the larger spread, so the plan uses Welch's ANOVA.",
         ),
       );
     }

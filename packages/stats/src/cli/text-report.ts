@@ -1,6 +1,7 @@
 import type { Unavailable } from "../types/group-summary.js";
 import { isAvailable, reasonOf, type AnalysisResult } from "../types/analysis-result.js";
 import { formatP } from "../reporting/format.js";
+import { errorRateSentences, sensitivitySentences } from "../reporting/choice-sentences.js";
 import { CHECK_TERMS, POSTHOC_TERMS, TEST_TERMS } from "../vocabulary/names.js";
 
 function why(x: Unavailable | unknown): string {
@@ -61,10 +62,13 @@ export function textReport(
     out.push("  Keep in mind:");
     for (const c of rec.caveats) out.push(`  - ${c.text}`);
   }
-  if ("entries" in result.sensitivity) {
-    out.push("  Sensitivity analyses:");
-    for (const n of result.sensitivity.notes) out.push(`  - ${n.text}`);
+  if (result.checkWarnings.length) {
+    out.push("  What the checks say about it:");
+    for (const w of result.checkWarnings) out.push(`  - ${w.text}`);
   }
+  for (const line of sensitivitySentences(result.sensitivity)) out.push(`  - ${line}`);
+  out.push("  Error-rate check:");
+  for (const line of errorRateSentences(result.errorRateCheck, rec.test)) out.push(`  - ${line}`);
   out.push("");
 
   out.push("Groups");

@@ -17,7 +17,10 @@ export type ResultView = Pick<
   | "shapiroWilkResiduals"
   | "sdRatio"
   | "outliers"
-> & { options: Pick<AnalysisResult["options"], "alpha"> };
+> &
+  Partial<Pick<AnalysisResult, "groupNormality" | "sizeAwareOutliers">> & {
+    options: Pick<AnalysisResult["options"], "alpha">;
+  };
 
 /** One plain-language line per assumption check, for the checks screen and the report. */
 export interface Reading {
@@ -50,8 +53,17 @@ export function checkReadings(r: ResultView): Reading[] {
           (minN < 5 ? " Groups this small give the checks little power to detect problems." : ""),
   });
 
+  // Per group on standardized residuals (pooled residuals mix spread with shape); analyses
+  // stored by an older engine carry only the pooled test, read as it was.
+  const perGroup = r.groupNormality;
   const sw = r.shapiroWilkResiduals;
-  if (ok(sw)) {
+  if (perGroup && ok(perGroup)) {
+    out.push({
+      key: "normality",
+      level: perGroup.summary.code === "normality.some-depart" ? "attention" : "ok",
+      text: perGroup.summary.text,
+    });
+  } else if (ok(sw)) {
     const fails = r.shapiroWilk.filter((g) => g.available !== false && g.p < alpha).map((g) => g.group);
     out.push({
       key: "normality",
@@ -92,8 +104,15 @@ export function checkReadings(r: ResultView): Reading[] {
     });
   }
 
+  const bySize = r.sizeAwareOutliers;
   const o = r.outliers;
-  if (ok(o)) {
+  if (bySize && ok(bySize)) {
+    out.push({
+      key: "outliers",
+      level: bySize.groups.some((g) => g.flaggedCount > 0) ? "attention" : "ok",
+      text: bySize.summary.text,
+    });
+  } else if (ok(o)) {
     const rows = o.groups.flatMap((g) => g.extreme.map((v) => `row ${v.row} in ${g.group}`));
     out.push({
       key: "outliers",

@@ -1,4 +1,8 @@
 import {
+  deviationSentence,
+  errorRateSentences,
+  primaryTestSentence,
+  sensitivitySentences,
   ADJUSTMENT_TERMS,
   checkReadings,
   formatStat,
@@ -10,6 +14,7 @@ import {
   posthocSentence,
   TEST_TERMS,
   type PosthocFamily,
+  type PowerMethod,
 } from "@waymark/stats";
 import { comparisonsOf } from "../studies/plan.js";
 import { paragraph, type Block } from "./report-blocks.js";
@@ -24,6 +29,12 @@ const ASSIGNMENT: Record<string, string> = {
   observational:
     "Groups were observed as they occurred (no assignment), so differences cannot be attributed to the grouping factor alone.",
   unsure: "How units were assigned to groups was not recorded.",
+};
+
+const POWER_METHOD_WORDS: Record<PowerMethod, string> = {
+  "noncentral-f": "noncentral F distribution",
+  "noncentral-f-welch-approximation": "noncentral F of classic ANOVA, an approximation for Welch's ANOVA",
+  simulation: "seeded simulation of normal groups",
 };
 
 const CAUTION =
@@ -87,35 +98,42 @@ export function buildReport(input: ReportInput): Block[] {
     paragraph(
       `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy, ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"} and ${adjustment} for rank-based comparisons.` +
         (study.plan.power
-          ? ` The planned sample size was ${study.plan.power.nPerGroup} per group, for power ${formatUnit(study.plan.power.achievedPower)} to detect an effect of Cohen's f = ${formatStat(study.plan.power.effectF)} with the one-way ANOVA F test.`
+          ? ` The planned sample size was ${study.plan.power.nPerGroup} per group, for power ${formatUnit(study.plan.power.achievedPower)} to detect an effect of Cohen's f = ${formatStat(study.plan.power.effectF)} with the primary test (${POWER_METHOD_WORDS[study.plan.power.method ?? "noncentral-f"]}).`
           : ""),
       "methods",
     ),
   );
   if (study.plan.power) refs.add("cohen");
   blocks.push({ type: "heading", level: 3, text: "Choice of test" });
-  const rule =
-    study.plan.policy === "welch-first"
-      ? "Under the welch-first policy, Welch's heteroscedastic ANOVA is the default omnibus test, because it keeps its error rate when group variances differ and loses little when they do not; the Kruskal–Wallis test replaces it for ordinal outcomes, clear non-normality in small groups, or extreme outliers."
-      : "Under the classic-first policy, classic one-way ANOVA is the default omnibus test; Welch's ANOVA replaces it when the spread differs between groups (Brown–Forsythe p < α, or the largest SD more than twice the smallest), and the Kruskal–Wallis test replaces both for ordinal outcomes, clear non-normality in small groups, or extreme outliers.";
-  if (study.plan.policy === "welch-first") refs.add("delacre");
+  const decision = r.recommendation;
+  // The plan decided the primary test from the design; the checks informed, never switched it.
   blocks.push(
     paragraph(
-      `${rule} Normality was checked with Shapiro–Wilk tests within each group and on the pooled within-group residuals; equality of spread with the Brown–Forsythe (median-centred) and Levene (mean-centred) tests and the ratio of the largest to the smallest SD; outliers with Tukey's fences at 1.5 and 3 IQR and with studentized residuals beyond ±3.`,
+      `${primaryTestSentence(decision)} ${decision.reasons.map((x) => x.text).join(" ")}`,
       "methods",
     ),
   );
-  const recommended = TEST_TERMS[analysis.recommendedTest].name;
-  const chosenName = TEST_TERMS[chosen].name;
+  refs.add("zimmerman");
+  if (decision.test === "welch" || decision.planned === "welch") refs.add("delacre");
+  if (decision.planned === "kruskal-wallis") refs.add("fagerland");
   blocks.push(
     paragraph(
-      `Reasons recorded for the recommendation (${recommended}): ${r.recommendation.reasons.join(" ")}`,
+      "The checks — Shapiro–Wilk tests within each group on standardized residuals, the Brown–Forsythe (median-centred) and Levene (mean-centred) tests and the ratio of the largest to the smallest SD for spread, and fences for far values that account for each group's size (Grubbs-type, 5% false-flag rate per group) — informed the reading of the results and the sensitivity analyses; they did not choose the test, because choosing a test from pre-tests on the same data inflates its error rate.",
       "methods",
     ),
   );
+  refs.add("grubbs");
+  for (const line of errorRateSentences(r.errorRateCheck, decision.test)) blocks.push(paragraph(line, "methods"));
+  if (r.errorRateCheck.available) refs.add("efron");
+  for (const line of sensitivitySentences(r.sensitivity)) blocks.push(paragraph(line, "methods"));
+  if (isAvailable(r.trimmedMeans)) refs.add("yuen");
+  const planned = analysis.recommendedTest;
+  if (analysis.overrideJustification && planned !== chosen) {
+    blocks.push(paragraph(deviationSentence(planned, chosen, analysis.overrideJustification), "methods"));
+  }
   blocks.push(
     paragraph(
-      `The omnibus test was ${chosenName}, followed by ${posthocSentence(family, study.plan.adjust)}. Effect sizes are reported with each result.`,
+      `The omnibus test reported below is ${TEST_TERMS[chosen].name}${planned === chosen ? ", the plan's primary test" : ""}, followed by ${posthocSentence(family, study.plan.adjust)}. Effect sizes are reported with each result.`,
       "methods",
     ),
   );
@@ -170,14 +188,6 @@ export function buildReport(input: ReportInput): Block[] {
   const omni = omnibusSentence(r, chosen);
   blocks.push(paragraph(`${TEST_TERMS[chosen].title}: ${omni}.`, "results"));
   for (const line of analysis.summary) blocks.push(paragraph(line, "results"));
-  if (analysis.overrideJustification) {
-    blocks.push(
-      paragraph(
-        `The analyst chose ${chosenName} instead of the recommended ${recommended}, with this justification: “${analysis.overrideJustification}”`,
-        "results",
-      ),
-    );
-  }
   blocks.push({ type: "heading", level: 3, text: "Post-hoc comparisons" });
   const table = posthocTable(r.posthoc, family, unit);
   if ("reason" in table)
