@@ -5,8 +5,11 @@ import { ALPHA_MESSAGE, LIMITS } from "./limits.js";
 export const text = (label: string, max: number) =>
   z.string().trim().min(1, `${label} is required`).max(max, `${label} must be at most ${max} characters`);
 
-/** α in (0, .20]: the one check, the one message. */
-export const alpha = z.number(ALPHA_MESSAGE).gt(0, ALPHA_MESSAGE).max(LIMITS.alphaMax, ALPHA_MESSAGE);
+/** α in (0, .20]: the one check, the one message (the API's 4xx and the web's forms alike). */
+export const alpha = z
+  .number("Enter α as a number, for example 0.05")
+  .gt(0, ALPHA_MESSAGE)
+  .max(LIMITS.alphaMax, ALPHA_MESSAGE);
 
 /** Dates cross the wire as ISO text. */
 export const timestamp = z
