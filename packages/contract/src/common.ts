@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { CodedText } from "@waymark/stats/vocabulary";
 import { ALPHA_MESSAGE, LIMITS } from "./limits.js";
 
 /** A required text field with the limit named in its message. */
@@ -18,3 +19,10 @@ export const timestamp = z
 
 export const person = z.object({ id: z.number(), displayName: z.string() });
 export type Person = z.infer<typeof person>;
+
+/** A reason or caveat with a stable code and its numbers beside the sentence (CodedText in the vocabulary). */
+export const codedText = z.object({
+  code: z.string(),
+  params: z.record(z.string(), z.union([z.string(), z.number()])),
+  text: z.string(),
+}) satisfies z.ZodType<CodedText>;
