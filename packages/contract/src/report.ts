@@ -67,3 +67,4 @@ export const reportStudy = z.object({
   levels: z.array(z.string()),
   updatedAt: timestamp,
 });
+export type ReportStudy = z.infer<typeof reportStudy>;

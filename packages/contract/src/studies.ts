@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { POWER_METHODS } from "@waymark/stats/vocabulary";
-import { alpha, person, text, timestamp } from "./common.js";
+import { alpha, codedText, person, text, timestamp } from "./common.js";
 import {
   adjustment,
   comparisons,
@@ -83,11 +83,6 @@ export const powerPlan = powerPlanInput.extend({
 });
 export type PowerPlan = z.infer<typeof powerPlan>;
 
-export const codedText = z.object({
-  code: z.string(),
-  params: z.record(z.string(), z.union([z.string(), z.number()])),
-  text: z.string(),
-});
 
 /** The primary test the plan decides from the design before any data (stored at lock time). */
 export const testPlan = z.object({

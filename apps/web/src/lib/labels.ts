@@ -1,64 +1,59 @@
-import type {
-  Adjustment,
-  ComparisonSet,
-  Policy,
-  StudyContext,
-  StudyStatus,
-  TestId,
-} from "@/features/studies/types";
+import type { StudyContext, StudyStatus } from "@waymark/contract";
+import {
+  ADJUSTMENT_TERMS,
+  COMPARISON_TERMS,
+  POLICY_TERMS,
+  POSTHOC_TERMS,
+  TEST_TERMS,
+  type Adjustment,
+  type Comparisons,
+} from "@waymark/stats/vocabulary";
 
-export const TEST_NAMES: Record<TestId, string> = {
-  anova: "classic one-way ANOVA",
-  welch: "Welch's ANOVA",
-  "kruskal-wallis": "Kruskal–Wallis test",
-};
+/**
+ * The words screens use for ids, read from the one vocabulary in @waymark/stats (the API's
+ * report and the command line read the same). Only the web's own labels are declared here.
+ */
+const known = <T extends object>(terms: T, id: string | null | undefined): id is Extract<keyof T, string> =>
+  !!id && Object.hasOwn(terms, id);
 
-/** Capitalised for the start of a line. */
-export function testTitle(test: string | null | undefined): string {
-  const name = test && test in TEST_NAMES ? TEST_NAMES[test as TestId] : "the planned test";
-  return name.charAt(0).toUpperCase() + name.slice(1);
+/** Capitalises the first letter, for a name that starts a sentence. */
+export function sentenceStart(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
+/** A test's name mid-sentence ("classic one-way ANOVA", "the Kruskal–Wallis test"). */
 export function testName(test: string | null | undefined): string {
-  return test && test in TEST_NAMES ? TEST_NAMES[test as TestId] : "the planned test";
+  return known(TEST_TERMS, test) ? TEST_TERMS[test].name : "the planned test";
 }
 
-const POSTHOC_NAMES: Record<string, string> = {
-  "tukey-kramer": "Tukey–Kramer comparisons of all pairs",
-  tukey: "Tukey–Kramer comparisons of all pairs",
-  "games-howell": "Games–Howell comparisons of all pairs",
-  dunn: "Dunn's test for all pairs",
-  dunnett: "Dunnett's comparisons with the control",
-  "welch-vs-control-holm": "Welch t-tests against the control, Holm-adjusted",
-  "dunn-vs-control": "Dunn's test against the control",
-  none: "no post-hoc comparisons",
-};
-
-export function posthocName(method: string | null | undefined): string {
-  if (!method) return "the matched post-hoc method";
-  return POSTHOC_NAMES[method] ?? method;
+/** A test's name for a heading, a table cell or the start of a line. */
+export function testTitle(test: string | null | undefined): string {
+  return known(TEST_TERMS, test) ? TEST_TERMS[test].title : "The planned test";
 }
 
-export const ADJUST_NAMES: Record<Adjustment, string> = {
-  holm: "Holm (step-down)",
-  bonferroni: "Bonferroni",
-  bh: "Benjamini–Hochberg (false discovery rate)",
-};
+/** A post-hoc family's name ("Tukey–Kramer comparisons of all pairs"). */
+export function posthocName(family: string | null | undefined): string {
+  if (family === "none") return "no post-hoc comparisons";
+  return known(POSTHOC_TERMS, family) ? POSTHOC_TERMS[family].name : "the matched post-hoc method";
+}
 
-export const POLICY_TEXT: Record<Policy, { title: string; line: string }> = {
-  "classic-first": {
-    title: "Classic ANOVA first",
-    line: "Use classic one-way ANOVA and move to Welch's ANOVA only when the groups' spread clearly differs.",
-  },
-  "welch-first": {
-    title: "Welch's ANOVA first",
-    line: "Use Welch's ANOVA from the start: it holds its error rate when spreads differ and loses little when they are equal.",
-  },
-};
+export function adjustmentTitle(adjust: string | null | undefined): string {
+  return known(ADJUSTMENT_TERMS, adjust) ? ADJUSTMENT_TERMS[adjust].title : "—";
+}
 
-export const COMPARISON_TEXT: Record<ComparisonSet, string> = {
-  "all-pairs": "every pair of groups",
-  "vs-control": "each group against the control",
+export function policyTitle(policy: string | null | undefined): string {
+  return known(POLICY_TERMS, policy) ? POLICY_TERMS[policy].title : "—";
+}
+
+export function comparisonName(comparisons: string | null | undefined): string {
+  return known(COMPARISON_TERMS, comparisons) ? COMPARISON_TERMS[comparisons].name : "—";
+}
+
+/** What each adjustment does, for the choices in the plan and the organization's settings. */
+export const ADJUSTMENT_HINTS: Record<Adjustment, string> = {
+  holm: "Controls the family-wise error rate like Bonferroni, but tests the smallest p first and is never less powerful.",
+  bonferroni: "Multiplies each p by the number of comparisons: simple and strict.",
+  bh: "Controls the expected share of false discoveries instead of the chance of any; suits screening, not confirmation.",
 };
 
 export const CONTEXT_LABELS: Record<StudyContext, string> = {
@@ -74,7 +69,7 @@ export const STATUS_LABELS: Record<StudyStatus, string> = {
 };
 
 /** Number of planned comparisons for k groups. */
-export function plannedComparisons(k: number, comparisons: ComparisonSet): number {
+export function plannedComparisons(k: number, comparisons: Comparisons): number {
   if (k < 2) return 0;
   return comparisons === "vs-control" ? k - 1 : (k * (k - 1)) / 2;
 }

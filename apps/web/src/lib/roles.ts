@@ -1,5 +1,6 @@
-export const ROLES = ["analyst", "reviewer", "writer", "admin"] as const;
-export type Role = (typeof ROLES)[number];
+import type { Role } from "@waymark/contract";
+
+export { ROLES, type Role } from "@waymark/contract";
 
 export const ROLE_LABELS: Record<Role, string> = {
   analyst: "Analyst",

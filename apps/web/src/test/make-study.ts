@@ -1,4 +1,6 @@
-import type { Analysis, AnalysisResult, Dataset, Study } from "@/features/studies/types";
+import type { AnalysisDto as Analysis, DatasetDto as Dataset, StudyDto as Study } from "@waymark/contract";
+import type { AnalysisResult } from "@waymark/stats/result";
+import { engineResult } from "./engine-fixtures";
 
 /** An invented study for tests: tensile strength of glued joints under three adhesives. */
 export function makeStudy(over: Partial<Study> = {}): Study {
@@ -26,7 +28,7 @@ export function makeStudy(over: Partial<Study> = {}): Study {
       adjust: "holm",
       alpha: 0.05,
       plannedTest: "anova",
-      plannedPosthoc: "Tukey–Kramer HSD",
+      plannedPosthoc: "tukey-kramer",
       comparisons: "all-pairs",
       power: null,
       lockedAt: null,
@@ -42,10 +44,12 @@ export function makeStudy(over: Partial<Study> = {}): Study {
 export function makeDataset(over: Partial<Dataset> = {}): Dataset {
   return {
     id: 11,
+    studyId: 7,
     version: 1,
     fileName: "joints.csv",
     sizeBytes: 812,
     sha256: "3f7a1c9e5b2d4f6a8c0e1b3d5f7a9c2e4b6d8f0a1c3e5b7d9f2a4c6e8b0d1f3a",
+    mediaType: "text/csv",
     uploadedAt: "2025-12-04T10:00:00.000Z",
     uploadedBy: { id: 1, displayName: "Ada Okafor" },
     groupColumn: "Adhesive",
@@ -56,6 +60,8 @@ export function makeDataset(over: Partial<Dataset> = {}): Dataset {
       rowsRead: 30,
       rowsUsed: 30,
       excluded: [],
+      excludedCount: 0,
+      usable: true,
       groupsFound: [
         { name: "Epoxy", n: 10 },
         { name: "Acrylic", n: 10 },
@@ -69,27 +75,9 @@ export function makeDataset(over: Partial<Dataset> = {}): Dataset {
   };
 }
 
-const U = (reason: string) => ({ available: false as const, reason });
-
-/** An engine result where nothing could be computed: every part is Unavailable. */
+/** The engine's own result when nothing can be computed (every value identical): every test is Unavailable. */
 export function unavailableResult(): AnalysisResult {
-  return {
-    groups: U("no groups"),
-    anova: U("All values are identical, so the F ratio cannot be formed"),
-    welch: U("Welch's ANOVA weights each group by n/variance; group 'Epoxy' has zero variance"),
-    kruskalWallis: U("all values are tied"),
-    levene: U("zero spread"),
-    brownForsythe: U("zero spread"),
-    bartlett: U("zero variance"),
-    shapiroWilk: U("too few values"),
-    shapiroWilkResiduals: U("too few values"),
-    sdRatio: U("Group 'Epoxy' has zero standard deviation, so the ratio of SDs cannot be formed"),
-    outliers: U("zero spread"),
-    qq: U("A Q–Q plot needs at least 2 residuals; found 0"),
-    posthoc: U("post-hoc comparisons are not integrated yet"),
-    familyWiseError: U("post-hoc comparisons are not integrated yet"),
-    recommendation: U("no recommendation"),
-  };
+  return engineResult("identical");
 }
 
 export function makeAnalysis(over: Partial<Analysis> = {}): Analysis {
@@ -103,9 +91,10 @@ export function makeAnalysis(over: Partial<Analysis> = {}): Analysis {
     createdBy: { id: 1, displayName: "Ada Okafor" },
     recommendedTest: "anova",
     chosenTest: "anova",
-    posthocMethod: "Tukey–Kramer HSD",
+    posthocMethod: "tukey-kramer",
     override: null,
-    result: unavailableResult(),
+    planSnapshot: {},
+    result: engineResult("equal-spread"),
     summary: [],
     ...over,
   };

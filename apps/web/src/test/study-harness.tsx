@@ -5,7 +5,7 @@ import { MemoryRouter } from "react-router-dom";
 import { makeQueryClient } from "@/lib/query-client";
 import { useStudy } from "@/features/studies/api/get-study";
 import { studyKeys } from "@/lib/query-keys";
-import type { Study } from "@/features/studies/types";
+import type { StudyDto as Study } from "@waymark/contract";
 
 function FromCache({ id, children }: { id: number; children: (s: Study) => ReactElement }) {
   const q = useStudy(id);

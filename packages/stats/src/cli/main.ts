@@ -5,6 +5,7 @@ import { analyzeCommand } from "./analyze-command.js";
 import { CliError } from "./cli-error.js";
 import { powerCommand } from "./power-command.js";
 import { USAGE } from "./usage.js";
+import { ADJUSTMENTS, POLICIES, SCALES } from "../vocabulary/ids.js";
 
 export interface CliIo {
   stdout: (text: string) => void;
@@ -116,11 +117,11 @@ function run(argv: readonly string[], io: CliIo): number {
       throw new CliError(`--alpha must be between 0 and 1; got ${values.alpha}`, 2);
     const options: AnalyzeOptions = {};
     if (alpha !== undefined) options.alpha = alpha;
-    const adjust = choice("adjust", values.adjust, ["holm", "bonferroni", "bh"] as const);
+    const adjust = choice("adjust", values.adjust, ADJUSTMENTS);
     if (adjust) options.adjust = adjust;
-    const policy = choice("policy", values.policy, ["classic-first", "welch-first"] as const);
+    const policy = choice("policy", values.policy, POLICIES);
     if (policy) options.policy = policy;
-    const scale = choice("scale", values.scale, ["continuous", "ordinal"] as const);
+    const scale = choice("scale", values.scale, SCALES);
     if (scale) options.scale = scale;
     const question = choice("question", values.question, ["means", "larger-values"] as const);
     if (question) options.question = question;

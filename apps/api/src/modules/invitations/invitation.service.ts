@@ -16,7 +16,8 @@ export const INVITATION_HOURS = 72;
 
 export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export type InvitationState = "open" | "used" | "expired" | "revoked";
+import type { InvitationState } from "@waymark/contract";
+export type { InvitationState };
 
 export function stateOf(i: Invitation, now = Date.now()): InvitationState {
   if (i.usedAt) return "used";

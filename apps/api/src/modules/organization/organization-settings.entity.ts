@@ -1,4 +1,6 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn } from "typeorm";
+import type { PaperSize } from "@waymark/contract";
+import type { Adjustment, Policy } from "@waymark/stats";
 import { DATETIME } from "../../db/column-types.js";
 
 /** The organization's single settings row (id 1). */
@@ -8,16 +10,16 @@ export class OrganizationSettings {
   id: number;
 
   @Column("varchar", { length: 20 })
-  policy: "classic-first" | "welch-first";
+  policy: Policy;
 
   @Column("real", { name: "default_alpha" })
   defaultAlpha: number;
 
   @Column("varchar", { name: "default_adjust", length: 12 })
-  defaultAdjust: "holm" | "bonferroni" | "bh";
+  defaultAdjust: Adjustment;
 
   @Column("varchar", { name: "paper_size", length: 8 })
-  paperSize: "A4" | "Letter";
+  paperSize: PaperSize;
 
   @UpdateDateColumn({ name: "updated_at", type: DATETIME })
   updatedAt: Date;

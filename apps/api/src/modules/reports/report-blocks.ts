@@ -2,19 +2,10 @@
  * The report as a list of blocks: one text source for both the HTML preview in the web app and
  * the DOCX, so the two cannot drift apart.
  */
-export interface Run {
-  text: string;
-  italic?: boolean;
-  bold?: boolean;
-}
+import type { Block, ReportSection, Run } from "@waymark/contract";
 
-export type Block =
-  | { type: "heading"; level: 1 | 2 | 3; text: string }
-  | { type: "paragraph"; runs: Run[]; section?: "methods" | "results" | "sign-off" }
-  | { type: "table"; caption: string; header: string[]; rows: string[][] }
-  | { type: "figure"; caption: string; figure: "groups" | "intervals"; image?: string }
-  | { type: "caution"; text: string }
-  | { type: "references"; items: string[] };
+/** The block model is the contract's (@waymark/contract, report.ts). */
+export type { Block, Run };
 
 /** Statistic symbols set in italics, as reporting style guides ask (APA 7th ed. §6.45, common practice). */
 const SYMBOL = /(?<![\p{L}\d])(F|p|H|t|z|q|W|n|N|M|SD|SE|d|g|r)(?=\s?[(=<>≤≥,)]|\s[=<>])/gu;
@@ -32,7 +23,7 @@ export function statRuns(text: string): Run[] {
   return runs;
 }
 
-export function paragraph(text: string, section?: "methods" | "results" | "sign-off"): Block {
+export function paragraph(text: string, section?: ReportSection): Block {
   return { type: "paragraph", runs: statRuns(text), ...(section ? { section } : {}) };
 }
 

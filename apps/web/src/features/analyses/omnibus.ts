@@ -1,11 +1,7 @@
-import {
-  isAvailable,
-  num,
-  reasonOf,
-  type Analysis,
-  type AnalysisResult,
-  type TestId,
-} from "@/features/studies/types";
+import { isAvailable, num, reasonOf } from "@/lib/result-values";
+import type { AnalysisDto as Analysis } from "@waymark/contract";
+import type { AnalysisResult } from "@waymark/stats/result";
+import type { OmnibusTest as TestId } from "@waymark/stats/vocabulary";
 
 export interface OmnibusNumbers {
   symbol: "F" | "H";

@@ -1,77 +1,61 @@
 import { describe, expect, it } from "vitest";
+import { engineResult } from "@/test/engine-fixtures";
 import { posthocView } from "./posthoc";
-import { unavailableResult } from "@/test/make-study";
-import type { AnalysisResult } from "@/features/studies/types";
 
-// Shapes as the engine's runPosthoc sends them; the numbers are invented.
-const base: AnalysisResult = {
-  ...unavailableResult(),
-  posthoc: {
-    tukey: [
-      {
-        a: "A",
-        b: "B",
-        diff: 1.5,
-        lower: -0.5,
-        upper: 3.5,
-        pAdj: 0.2,
-        hedgesG: { available: true, g: 0.71, d: 0.74 },
-      },
-    ],
-    gamesHowell: { available: false, reason: "Games–Howell needs every group's variance above zero" },
-    dunn: [{ a: "A", b: "B", z: 2.1, p: 0.03, pAdj: 0.09, rankBiserial: { available: true, r: 0.42 } }],
-    control: {
-      control: "A",
-      dunnett: [
-        {
-          a: "B",
-          b: "A",
-          diff: -1.5,
-          lower: -3.2,
-          upper: 0.2,
-          pAdj: 0.08,
-          hedgesG: { available: false, reason: "too few values" },
-        },
-      ],
-      welchHolm: { available: false, reason: "zero variance" },
-      dunn: [],
-    },
-  },
-};
+// Real engine output on seeded invented data (src/test/engine-fixtures.ts).
+const r = engineResult("equal-spread", { control: "Epoxy" });
 
 describe("posthocView", () => {
-  it("takes the family matched to the test and the engine's Hedges' g", () => {
-    const v = posthocView("anova", "all-pairs", base);
-    expect("rows" in v && v.rows[0]).toMatchObject({
-      a: "A",
-      b: "B",
-      diff: 1.5,
-      lower: -0.5,
-      upper: 3.5,
-      pAdj: 0.2,
-      effect: 0.71,
+  it("takes the family matched to the test, with the engine's Hedges' g per pair", () => {
+    const v = posthocView("anova", "all-pairs", r);
+    if (!("rows" in v) || !Array.isArray(r.posthoc.tukey)) throw new Error("Tukey–Kramer pairs expected");
+    expect(v.rows).toHaveLength(3);
+    const pair = r.posthoc.tukey[0]!;
+    expect(v.rows[0]).toEqual({
+      a: pair.a,
+      b: pair.b,
+      diff: pair.diff,
+      lower: pair.lower,
+      upper: pair.upper,
+      pAdj: pair.pAdj,
+      effect: pair.hedgesG.available ? pair.hedgesG.g : null,
     });
-    expect("rows" in v && v.effectLabel).toBe("g");
+    expect(v.effectLabel).toBe("g");
+    expect(v.hasIntervals).toBe(true);
   });
 
   it("Dunn's rows carry the rank-biserial r and no interval", () => {
-    const v = posthocView("kruskal-wallis", "all-pairs", base);
-    expect("rows" in v && v.rows[0]).toMatchObject({ effect: 0.42, lower: null, upper: null, pAdj: 0.09 });
-    expect("rows" in v && v.hasIntervals).toBe(false);
-  });
-
-  it("comparisons with the control come from the control family of the test", () => {
-    const v = posthocView("anova", "vs-control", base);
-    expect("rows" in v && v.rows.map((r) => `${r.a}-${r.b}`)).toEqual(["B-A"]);
-    expect(posthocView("welch", "vs-control", base)).toEqual({ unavailable: "zero variance." });
-  });
-
-  it("gives the reason when the family is unavailable", () => {
-    expect(posthocView("welch", "all-pairs", base)).toEqual({
-      unavailable: "Games–Howell needs every group's variance above zero.",
+    const v = posthocView("kruskal-wallis", "all-pairs", r);
+    if (!("rows" in v) || !Array.isArray(r.posthoc.dunn)) throw new Error("Dunn pairs expected");
+    const pair = r.posthoc.dunn[0]!;
+    expect(v.rows[0]).toMatchObject({
+      effect: pair.rankBiserial.available ? pair.rankBiserial.r : null,
+      lower: null,
+      upper: null,
+      pAdj: pair.pAdj,
     });
-    expect(posthocView("anova", "all-pairs", unavailableResult())).toEqual({
-      unavailable: "post-hoc comparisons are not integrated yet.",
+    expect(v.hasIntervals).toBe(false);
+    expect(v.effectLabel).toBe("r");
+  });
+
+  it("comparisons with the control come from the test's control family: k − 1 pairs, each with the control", () => {
+    for (const test of ["anova", "welch", "kruskal-wallis"] as const) {
+      const v = posthocView(test, "vs-control", r);
+      if (!("rows" in v)) throw new Error(`${test}: control comparisons expected`);
+      expect(v.rows).toHaveLength(2);
+      for (const row of v.rows) expect([row.a, row.b]).toContain("Epoxy");
+    }
+  });
+
+  it("gives the engine's reason when the family could not run", () => {
+    const none = engineResult("identical");
+    const v = posthocView("anova", "all-pairs", none);
+    expect(v).toEqual({
+      unavailable: expect.stringMatching(/^Tukey–Kramer needs the classic ANOVA's error variance/),
+    });
+    // No control was named, so comparisons with one cannot be read.
+    expect(posthocView("anova", "vs-control", engineResult("equal-spread"))).toEqual({
+      unavailable: expect.stringMatching(/no control group was named/),
     });
   });
 });

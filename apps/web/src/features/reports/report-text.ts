@@ -1,4 +1,4 @@
-import type { Block } from "./types";
+import type { Block } from "@waymark/contract";
 
 const MISSING = /-?\b(NaN|undefined|Infinity)\b/g;
 

@@ -1,4 +1,4 @@
-import type { DesignAnswers, DesignKey } from "./types";
+import type { DesignAnswers, DesignQuestion as DesignKey } from "@waymark/contract";
 
 export interface DesignOption {
   value: string;

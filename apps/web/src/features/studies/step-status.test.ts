@@ -1,6 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { currentStep, shortReason, studySteps } from "./step-status";
 import { makeAnalysis, makeDataset, makeStudy } from "@/test/make-study";
+import { engineResult } from "@/test/engine-fixtures";
+import { formatDf, formatP, formatStat } from "@/lib/format";
+
+const unequal = engineResult("unequal-spread");
 
 const states = (s: ReturnType<typeof studySteps>) => Object.fromEntries(s.map((x) => [x.key, x.state]));
 const facts = (s: ReturnType<typeof studySteps>) => Object.fromEntries(s.map((x) => [x.key, x.fact]));
@@ -85,22 +89,17 @@ describe("studySteps", () => {
     const analysis = makeAnalysis({
       chosenTest: "welch",
       recommendedTest: "welch",
-      result: {
-        ...makeAnalysis().result,
-        welch: { F: 5.104, df1: 2, df2: 15.348, p: 0.0199 },
-        recommendation: {
-          test: "welch",
-          posthoc: "games-howell",
-          reasons: ["The largest SD is 3.1 times the smallest."],
-          caveats: [],
-          alternatives: [],
-        },
-      },
+      // analyze() on seeded data whose spreads differ about fourfold (src/test/engine-fixtures.ts).
+      result: unequal,
     });
     const steps = studySteps(study, analysis);
     expect(states(steps)).toMatchObject({ checks: "done", choice: "done", results: "done" });
     expect(facts(steps).choice).toBe("Welch's ANOVA, reason: unequal spread");
-    expect(facts(steps).results).toBe("F(2, 15.3) = 5.10, p = .020 (data v1)");
+    if (!unequal.welch.available) throw new Error("Welch's ANOVA expected");
+    const w = unequal.welch;
+    expect(facts(steps).results).toBe(
+      `F(${formatDf(w.df1)}, ${formatDf(w.df2)}) = ${formatStat(w.F)}, p ${formatP(w.p)} (data v1)`,
+    );
     expect(currentStep(steps)).toBe("results");
   });
 

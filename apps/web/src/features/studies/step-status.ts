@@ -2,7 +2,13 @@ import type { StudyStepSegment } from "@/config/paths";
 import { formatDf, formatP, formatStat } from "@/lib/format";
 import { formatDateTime } from "@/lib/format";
 import { testTitle } from "@/lib/labels";
-import { isAvailable, num, type Analysis, type DesignKey, type Recommendation, type Study } from "./types";
+import { isAvailable, num } from "@/lib/result-values";
+import type {
+  AnalysisDto as Analysis,
+  DesignQuestion as DesignKey,
+  StudyDto as Study,
+} from "@waymark/contract";
+import type { Recommendation } from "@waymark/stats/result";
 
 export type StepState = "done" | "open" | "locked";
 

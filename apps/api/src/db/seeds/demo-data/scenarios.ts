@@ -1,5 +1,6 @@
 import type { StudyContext } from "../../../modules/studies/study.entity.js";
 import type { DesignAnswers } from "../../../modules/studies/design.js";
+import type { OmnibusTest } from "@waymark/stats";
 import { seededRandom } from "./seeded-random.js";
 
 /** An invented demo study: its details, design answers, plan and a generated CSV. */
@@ -17,7 +18,7 @@ export interface DemoScenario {
   fileName: string;
   csv: string;
   /** The test this scenario is built to land on; a test checks the engine agrees. */
-  expectedTest: "anova" | "welch" | "kruskal-wallis";
+  expectedTest: OmnibusTest;
 }
 
 function toCsv(header: [string, string], rows: [string, number][], decimals: number): string {

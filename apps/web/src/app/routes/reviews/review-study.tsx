@@ -16,7 +16,7 @@ import { DesignSummary } from "@/features/studies/components/design-summary";
 import { LifecycleBadge } from "@/features/studies/components/lifecycle-badge";
 import { RecommendationCard } from "@/features/analyses/components/recommendation-card";
 import { ResultsPanel } from "@/features/analyses/components/results-panel";
-import { isAvailable } from "@/features/studies/types";
+import { isAvailable } from "@/lib/result-values";
 import { formatDateTime } from "@/lib/format";
 
 /**

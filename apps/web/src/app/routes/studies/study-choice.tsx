@@ -7,7 +7,7 @@ import { RunAnalysisForm } from "@/features/analyses/components/run-analysis-for
 import { StepHeading } from "@/components/ui/step-heading";
 import { OutOfScopeStop } from "@/features/studies/components/out-of-scope-stop";
 import { UnavailableNote } from "@/features/analyses/components/unavailable-note";
-import { isAvailable } from "@/features/studies/types";
+import { isAvailable } from "@/lib/result-values";
 import { useStudyContext } from "./study-context";
 
 export function StudyChoiceRoute() {

@@ -1,6 +1,6 @@
 import { useOutletContext } from "react-router-dom";
 import type { StepStatus } from "@/features/studies/step-status";
-import type { Analysis, Study } from "@/features/studies/types";
+import type { AnalysisDto as Analysis, StudyDto as Study } from "@waymark/contract";
 
 export interface StudyOutletContext {
   study: Study;

@@ -30,7 +30,7 @@ export function StudyLayoutRoute() {
   const latestAnalysis = latest.data ?? null;
   const steps = studySteps(s, latestAnalysis);
   const canEdit =
-    !!me.data && can(me.data.role, "studies:create") && me.data.id === s.owner.id && s.status === "draft";
+    !!me.data && can(me.data.role, "studies:create") && me.data.id === s.owner?.id && s.status === "draft";
   const segment = location.pathname.split("/")[3] as StudyStepSegment | undefined;
   const step =
     segment && (STUDY_STEP_SEGMENTS as readonly string[]).includes(segment)

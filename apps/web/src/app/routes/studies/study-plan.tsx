@@ -3,6 +3,7 @@ import { LockPlanPanel } from "@/features/studies/components/lock-plan-panel";
 import { PlanForm } from "@/features/studies/components/plan-form";
 import { PlannedMethods } from "@/features/studies/components/planned-methods";
 import { PowerCalculator } from "@/features/power/components/power-calculator";
+import { useSavePlan } from "@/features/studies/api/save-plan";
 import { StepHeading } from "@/components/ui/step-heading";
 import { useStudyContext } from "./study-context";
 
@@ -10,6 +11,7 @@ export function StudyPlanRoute() {
   const { study, canEdit } = useStudyContext();
   const locked = !!study.plan.lockedAt;
   const editable = canEdit && !locked;
+  const savePlan = useSavePlan(study.id);
   return (
     <div className="flex flex-col gap-6">
       <StepHeading
@@ -29,7 +31,7 @@ export function StudyPlanRoute() {
           <PlanForm study={study} />
         </section>
       )}
-      <PowerCalculator study={study} editable={editable} />
+      <PowerCalculator study={study} editable={editable} save={savePlan} />
       <FamilyWisePanel
         k={study.levels.length}
         alpha={study.plan.alpha}

@@ -1,13 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Analysis, Study, TestId } from "@/features/studies/types";
+import type { AnalysisDto as Analysis, RunAnalysisBody, StudyDto as Study } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
-export interface CreateAnalysisBody {
-  datasetId: number;
-  test?: TestId;
-  justification?: string;
-}
+export type CreateAnalysisBody = RunAnalysisBody;
 
 export function createAnalysis(id: number, body: CreateAnalysisBody): Promise<Analysis> {
   return api.post<{ analysis: Analysis }>(`/studies/${id}/analyses`, { ...body }).then((r) => r.analysis);

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Analysis } from "@/features/studies/types";
+import type { AnalysisDto as Analysis } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export function getAnalysis(id: number, analysisId: number): Promise<Analysis> {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { ChecksResponse } from "@/features/studies/types";
+import type { ChecksResponse } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export function getChecks(id: number, datasetId: number): Promise<ChecksResponse> {

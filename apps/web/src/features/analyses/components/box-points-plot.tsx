@@ -1,13 +1,11 @@
 import * as Plot from "@observablehq/plot";
 import { useMemo } from "react";
 import { formatValue } from "@/lib/format";
-import {
-  isAvailable,
-  num,
-  type GroupDescription,
-  type Maybe,
-  type OutlierPart,
-} from "@/features/studies/types";
+import { isAvailable, num, type Maybe } from "@/lib/result-values";
+import type { GroupDescription, OutlierReport as OutlierPart } from "@waymark/stats/result";
+
+/** A group's description with its values, when the server sends them (for the points). */
+export type PlottedGroup = GroupDescription & { values?: number[] };
 import { groupColour, groupSymbol } from "./group-marks";
 import { PlotFigure } from "@/components/ui/plot-figure";
 
@@ -48,7 +46,7 @@ export function BoxPointsPlot({
   outliers,
   outcomeLabel,
 }: {
-  groups: GroupDescription[];
+  groups: PlottedGroup[];
   outliers?: Maybe<OutlierPart>;
   outcomeLabel: string;
 }) {

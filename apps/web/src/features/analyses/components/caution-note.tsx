@@ -1,4 +1,4 @@
-import type { StudyContext } from "@/features/studies/types";
+import type { StudyContext } from "@waymark/contract";
 
 export const CAUTION_TEXT =
   "This analysis supports, and does not replace, the judgement of a qualified statistician and the codes, regulations and licensed practice that apply.";

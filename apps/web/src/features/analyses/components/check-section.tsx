@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { CheckReading } from "@/features/studies/types";
+import type { Reading as CheckReading } from "@waymark/stats/result";
 import { WhatThisMeans } from "./what-this-means";
 
 /** One assumption check: its plain reading first, then the numbers, then what it means. */

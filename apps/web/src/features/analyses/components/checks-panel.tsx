@@ -1,11 +1,7 @@
-import {
-  isAvailable,
-  reasonOf,
-  type ChecksResponse,
-  type GroupDescription,
-  type Study,
-} from "@/features/studies/types";
-import { BoxPointsPlot } from "./box-points-plot";
+import { isAvailable, reasonOf } from "@/lib/result-values";
+import type { ChecksResponse, StudyDto as Study } from "@waymark/contract";
+import type { GroupDescription } from "@waymark/stats/result";
+import { BoxPointsPlot, type PlottedGroup } from "./box-points-plot";
 import { CheckSection } from "./check-section";
 import { DescriptivesTable } from "./descriptives-table";
 import { GroupSizes } from "./group-sizes";
@@ -21,7 +17,7 @@ const KNOWN = new Set(["normality", "spread", "outliers", "sizes"]);
 function withValues(
   groups: GroupDescription[],
   observations: ChecksResponse["observations"],
-): GroupDescription[] {
+): PlottedGroup[] {
   const list = observations?.groups;
   if (!Array.isArray(list)) return groups;
   return groups.map((g) => {
@@ -29,7 +25,7 @@ function withValues(
     const values = o?.values
       ?.map((v) => (typeof v === "number" ? v : Number(v)))
       .filter((v) => Number.isFinite(v));
-    return values && values.length > 0 && !g.values ? { ...g, values } : g;
+    return values && values.length > 0 && !("values" in g) ? { ...g, values } : g;
   });
 }
 

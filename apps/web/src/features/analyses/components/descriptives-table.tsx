@@ -1,5 +1,6 @@
 import { formatNumber } from "@/lib/format";
-import { num, type GroupDescription } from "@/features/studies/types";
+import { num } from "@/lib/result-values";
+import type { GroupDescription } from "@waymark/stats/result";
 import { GroupSwatch } from "./group-swatch";
 
 function cell(x: unknown, digits = 2): string {

@@ -1,12 +1,9 @@
 import { formatP, formatStat } from "@/lib/format";
-import {
-  isAvailable,
-  num,
-  reasonOf,
-  type Maybe,
-  type ShapiroPart,
-  type ShapiroRow,
-} from "@/features/studies/types";
+import { isAvailable, num, reasonOf, type Maybe } from "@/lib/result-values";
+import type {
+  ShapiroWilkResidualsPart as ShapiroPart,
+  ShapiroWilkGroup as ShapiroRow,
+} from "@waymark/stats/result";
 import { AttentionMark } from "@/components/ui/attention-mark";
 import { S } from "./stat-symbol";
 
@@ -21,7 +18,7 @@ function Row({
   row: Maybe<ShapiroPart> | ShapiroRow | undefined;
   alpha: number;
 }) {
-  const s = isAvailable(row) ? (row as ShapiroPart) : null;
+  const s = isAvailable(row) ? row : null;
   const ok = !!s && num(s.W) !== null && num(s.p) !== null;
   return (
     <tr className="border-t border-ink/10">

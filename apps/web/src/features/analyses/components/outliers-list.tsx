@@ -1,11 +1,6 @@
 import { formatStat, formatValue } from "@/lib/format";
-import {
-  isAvailable,
-  reasonOf,
-  type FlaggedValue,
-  type Maybe,
-  type OutlierPart,
-} from "@/features/studies/types";
+import { isAvailable, reasonOf, type Maybe } from "@/lib/result-values";
+import type { FlaggedValue, OutlierReport as OutlierPart } from "@waymark/stats/result";
 import { AttentionMark } from "@/components/ui/attention-mark";
 
 function Flagged({ items, kind }: { items: FlaggedValue[]; kind: string }) {

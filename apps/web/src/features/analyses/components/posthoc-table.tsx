@@ -34,13 +34,9 @@ export function PosthocTable({
             <th className="p-1.5 font-medium">
               {view.effectLabel === "r" ? (
                 <S>r</S>
-              ) : view.effectLabel === "g" ? (
-                <>
-                  Hedges' <S>g</S>
-                </>
               ) : (
                 <>
-                  Cohen's <S>d</S>
+                  Hedges' <S>g</S>
                 </>
               )}
             </th>

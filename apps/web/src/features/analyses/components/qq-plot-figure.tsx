@@ -1,6 +1,6 @@
 import * as Plot from "@observablehq/plot";
 import { useMemo } from "react";
-import type { QqPart } from "@/features/studies/types";
+import type { QqPlot as QqPart } from "@waymark/stats/result";
 import { PlotFigure } from "@/components/ui/plot-figure";
 
 function quantile(sorted: number[], q: number): number {
@@ -13,7 +13,7 @@ function quantile(sorted: number[], q: number): number {
 /** Normal Q–Q plot of the residuals, with the reference line through the quartiles. */
 export function QqPlotFigure({ qq, unit }: { qq: QqPart; unit: string }) {
   const points = useMemo(() => {
-    const ys = qq.residuals ?? qq.sample ?? [];
+    const ys = qq.residuals;
     return qq.theoretical
       .map((x, i) => ({ x, y: ys[i] as number }))
       .filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));

@@ -1,5 +1,5 @@
-import { posthocName, testTitle } from "@/lib/labels";
-import type { Recommendation } from "@/features/studies/types";
+import { posthocName, testName, testTitle } from "@/lib/labels";
+import type { Recommendation } from "@waymark/stats/result";
 
 /** The recommended test, why, the alternatives and why not, and the matching post-hoc method. */
 export function RecommendationCard({ rec, plannedTest }: { rec: Recommendation; plannedTest?: string }) {
@@ -17,8 +17,7 @@ export function RecommendationCard({ rec, plannedTest }: { rec: Recommendation; 
         {plannedTest && plannedTest !== rec.test && (
           <span className="text-ink-soft">
             {" "}
-            The plan expected {testTitle(plannedTest).toLowerCase()}; the checks on these data point
-            elsewhere.
+            The plan expected {testName(plannedTest)}; the checks on these data point elsewhere.
           </span>
         )}
       </p>

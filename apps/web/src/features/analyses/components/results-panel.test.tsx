@@ -1,65 +1,43 @@
 import { screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { renderWithProviders } from "@/test/render";
+import { engineResult } from "@/test/engine-fixtures";
 import { makeAnalysis, makeStudy, unavailableResult } from "@/test/make-study";
-import type { AnalysisResult } from "@/features/studies/types";
+import { formatBounded, formatDf, formatP, formatStat } from "@/lib/format";
 import { CAUTION_TEXT } from "./caution-note";
 import { ResultsPanel } from "./results-panel";
 
-const BAD = /NaN|undefined|Infinity|\bnull\b|\[object/;
+// A leaked JavaScript value; the engine's prose may say a statistic "is undefined" in words.
+const BAD = /NaN|(?<!is )undefined|Infinity|\bnull\b|\[object/;
 
-// Numbers of an invented three-group example; the expected strings follow the reporting
-// format (APA 7th ed., common practice), not a computation.
-const partial: AnalysisResult = {
-  ...unavailableResult(),
-  groups: [
-    { name: "Epoxy", n: 10, mean: 21.4, sd: 2.1, median: 21.2, min: 18, max: 25 },
-    {
-      name: "Acrylic",
-      n: 10,
-      mean: 19.8,
-      sd: { available: false, reason: "not computed" },
-      median: 19.5,
-      min: 16,
-      max: 23,
-    },
-    { name: "Urethane", n: 10, mean: 23.9, sd: 2.4, median: 23.7, min: 20, max: 28 },
-  ],
-  anova: {
-    F: 4.2101,
-    df1: 2,
-    df2: 27,
-    p: 0.0254,
-    omegaSquared: 0.1712,
-    etaSquared: 0.2377,
-    cohensF: 0.558,
-    msWithin: 5.1,
-  },
-  welch: { F: 5.104, df1: 2, df2: 15.348, p: 0.0199 },
-  options: { alpha: 0.05, comparisons: "all-pairs" },
-};
+// Every result here is analyze() on seeded invented data (src/test/engine-fixtures.ts); the
+// expected strings follow the reporting format (APA 7th ed., common practice) over its numbers.
+const equal = engineResult("equal-spread");
+const unequal = engineResult("unequal-spread");
 
 describe("ResultsPanel", () => {
-  it("renders no NaN, undefined or null when every part is unavailable, and gives the reasons", () => {
+  it("renders no NaN, undefined or null when every part is unavailable, and gives the engine's reasons", () => {
+    const none = unavailableResult();
     const { container } = renderWithProviders(
-      <ResultsPanel
-        study={makeStudy()}
-        analysis={makeAnalysis({ result: unavailableResult(), summary: [] })}
-      />,
+      <ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result: none, summary: [] })} />,
     );
     expect(container.textContent).not.toMatch(BAD);
-    expect(screen.getByText(/All values are identical, so the F ratio cannot be formed\./)).toBeTruthy();
-    expect(screen.getByText(/post-hoc comparisons are not integrated yet/)).toBeTruthy();
+    if (none.anova.available) throw new Error("the identical-values scenario must leave ANOVA unavailable");
+    expect(container.textContent).toContain(none.anova.reason);
     expect(screen.getByText(/could not be computed on these data/)).toBeTruthy();
   });
 
   it("shows the omnibus line in reporting form with the effect size", () => {
+    if (!equal.anova.available) throw new Error("the equal-spread scenario must give a classic ANOVA");
+    const a = equal.anova;
     const { container } = renderWithProviders(
-      <ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result: partial, summary: [] })} />,
+      <ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result: equal, summary: [] })} />,
     );
-    expect(screen.getByTestId("omnibus-line").textContent).toBe("F(2, 27) = 4.21, p = .025, ω² = .17");
+    expect(screen.getByTestId("omnibus-line").textContent).toBe(
+      `F(${formatDf(a.df1)}, ${formatDf(a.df2)}) = ${formatStat(a.F)}, p ${formatP(a.p)}, ω² = ${formatBounded(a.omegaSquared)}`,
+    );
+    expect(a.df2).toBe(27); // N − k = 30 − 3
     expect(container.textContent).not.toMatch(BAD);
-    expect(screen.getByTestId("plain-summary").textContent).toMatch(/statistically significant difference/);
     expect(screen.getByText("Statistical and practical significance")).toBeTruthy();
   });
 
@@ -67,10 +45,12 @@ describe("ResultsPanel", () => {
     renderWithProviders(
       <ResultsPanel
         study={makeStudy()}
-        analysis={makeAnalysis({ chosenTest: "welch", posthocMethod: "Games–Howell", result: partial })}
+        analysis={makeAnalysis({ chosenTest: "welch", posthocMethod: "games-howell", result: unequal })}
       />,
     );
-    expect(screen.getByTestId("omnibus-line").textContent).toBe("F(2, 15.3) = 5.10, p = .020, ω² = .17");
+    expect(screen.getByTestId("omnibus-line").textContent).toMatch(
+      /^F\(2, \d+\.\d\) = \d+\.\d{2}, p [=<] \.\d{3}, ω² = -?\.\d{2}$/,
+    );
     expect(screen.getByText(/from the classic ANOVA's sums of squares/)).toBeTruthy();
   });
 
@@ -78,50 +58,42 @@ describe("ResultsPanel", () => {
     const { container } = renderWithProviders(
       <ResultsPanel
         study={makeStudy()}
-        analysis={makeAnalysis({ result: partial, summary: ["F(2, 27) = NaN, p = undefined"] })}
+        analysis={makeAnalysis({ result: equal, summary: ["F(2, 27) = NaN, p = undefined"] })}
       />,
     );
     expect(container.textContent).not.toMatch(BAD);
   });
 
-  // d = difference ÷ √MS_within: 1.6 ÷ √5.1 = 0.71 and 4.1 ÷ √5.1 = 1.82 (by hand).
-  it("post-hoc rows with missing intervals show a dash, never a broken number", () => {
-    const result: AnalysisResult = {
-      ...partial,
-      posthoc: {
-        tukey: [
-          { a: "Epoxy", b: "Acrylic", diff: 1.6, lower: -0.9, upper: 4.1, pAdj: 0.27 },
-          {
-            a: "Urethane",
-            b: "Acrylic",
-            diff: 4.1,
-            lower: { available: false, reason: "x" },
-            upper: 6.6,
-            pAdj: 0.0004,
-          },
-        ],
-        gamesHowell: { available: false, reason: "zero variance" },
-        dunn: { available: false, reason: "ties" },
-      },
-    };
+  it("lists every Tukey–Kramer pair with its interval and Hedges' g, and a dash for a withheld number", () => {
+    const result = engineResult("equal-spread");
+    const pairs = result.posthoc.tukey;
+    if (!Array.isArray(pairs)) throw new Error("the equal-spread scenario must give Tukey–Kramer pairs");
+    // analyze() withholds a non-finite number as Unavailable; the table must show a dash for it.
+    (pairs[1] as unknown as { lower: unknown }).lower = { available: false, reason: "withheld" };
     const { container } = renderWithProviders(
       <ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result })} />,
     );
     const table = screen.getByRole("table", { name: "Post-hoc comparisons" });
-    expect(table.textContent).toMatch(/Epoxy − Acrylic1\.60\[−0\.90, 4\.10\]\.2700\.71/);
-    expect(table.textContent).toMatch(/Urethane − Acrylic4\.10—< \.0011\.82/);
+    const rows = table.querySelectorAll("tbody tr");
+    expect(rows).toHaveLength(3); // k(k − 1)/2 pairs for k = 3
+    const [first, second] = pairs;
+    if (!first?.hedgesG.available) throw new Error("Hedges' g must be available here");
+    expect(rows[0]?.textContent).toBe(
+      `${first.a} − ${first.b}${formatStat(first.diff)}[${formatStat(first.lower)}, ${formatStat(first.upper)}]${formatP(first.pAdj).replace(/^= /, "")}${formatStat(first.hedgesG.g)}`,
+    );
+    expect(rows[1]?.textContent).toContain(`${second?.a} − ${second?.b}${formatStat(second!.diff)}—.`);
     expect(container.textContent).not.toMatch(BAD);
   });
 
   it.each(["clinical", "safety-critical"] as const)("shows the caution for a %s study", (context) => {
     renderWithProviders(
-      <ResultsPanel study={makeStudy({ context })} analysis={makeAnalysis({ result: partial })} />,
+      <ResultsPanel study={makeStudy({ context })} analysis={makeAnalysis({ result: equal })} />,
     );
     expect(screen.getByTestId("caution-note").textContent).toBe(CAUTION_TEXT);
   });
 
   it("shows no caution for a general study", () => {
-    renderWithProviders(<ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result: partial })} />);
+    renderWithProviders(<ResultsPanel study={makeStudy()} analysis={makeAnalysis({ result: equal })} />);
     expect(screen.queryByTestId("caution-note")).toBeNull();
   });
 
@@ -131,11 +103,15 @@ describe("ResultsPanel", () => {
         study={makeStudy()}
         analysis={makeAnalysis({
           chosenTest: "kruskal-wallis",
+          posthocMethod: "dunn",
           override: { justification: "Ratings on a coarse 1–7 scale." },
-          result: partial,
+          result: equal,
         })}
       />,
     );
     expect(screen.getByText("Override, flagged for the reviewer.")).toBeTruthy();
+    expect(
+      screen.getByText(/the Kruskal–Wallis test was used instead of classic one-way ANOVA/i),
+    ).toBeTruthy();
   });
 });

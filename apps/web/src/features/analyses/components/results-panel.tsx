@@ -1,8 +1,9 @@
 import { formatAlpha, formatBounded, formatDateTime, formatPercent, formatStat } from "@/lib/format";
 import { omnibusNumbers, etaSquaredWithCi } from "../omnibus";
-import { posthocName, testName, testTitle } from "@/lib/labels";
+import { posthocName, sentenceStart, testName, testTitle } from "@/lib/labels";
 import { posthocView } from "../posthoc";
-import { isAvailable, num, type Analysis, type Study } from "@/features/studies/types";
+import { isAvailable, num } from "@/lib/result-values";
+import type { AnalysisDto as Analysis, StudyDto as Study } from "@waymark/contract";
 import { AttentionMark } from "@/components/ui/attention-mark";
 import { CautionNote } from "./caution-note";
 import { IntervalsPlot } from "./intervals-plot";
@@ -40,10 +41,10 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
 
   const fallback =
     significant === null
-      ? `The ${testName(analysis.chosenTest)} could not be computed on these data.`
+      ? `${sentenceStart(testName(analysis.chosenTest))} could not be computed on these data.`
       : significant
-        ? `The ${testName(analysis.chosenTest)} finds a statistically significant difference in ${outcome} between the ${study.factorName.toLowerCase()} groups at α = ${formatAlpha(alpha)}${assignedAtRandom ? "" : "; as the groups were not assigned at random, read it as an association rather than an effect of the grouping"}.`
-        : `The ${testName(analysis.chosenTest)} does not find a statistically significant difference in ${outcome} between the ${study.factorName.toLowerCase()} groups at α = ${formatAlpha(alpha)}. That is not evidence that the groups are the same.`;
+        ? `${sentenceStart(testName(analysis.chosenTest))} finds a statistically significant difference in ${outcome} between the ${study.factorName.toLowerCase()} groups at α = ${formatAlpha(alpha)}${assignedAtRandom ? "" : "; as the groups were not assigned at random, read it as an association rather than an effect of the grouping"}.`
+        : `${sentenceStart(testName(analysis.chosenTest))} does not find a statistically significant difference in ${outcome} between the ${study.factorName.toLowerCase()} groups at α = ${formatAlpha(alpha)}. That is not evidence that the groups are the same.`;
 
   return (
     <div className="flex flex-col gap-5" data-testid="results-panel">
@@ -55,8 +56,9 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
       {analysis.override && (
         <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm">
           <span className="font-semibold text-amber-800">Override, flagged for the reviewer.</span>{" "}
-          {testTitle(analysis.chosenTest)} was used instead of the recommended{" "}
-          {testName(analysis.recommendedTest)}. Reason given: “{analysis.override.justification}”
+          {sentenceStart(testName(analysis.chosenTest))} was used instead of{" "}
+          {testName(analysis.recommendedTest)}, the recommended test. Reason given: “
+          {analysis.override.justification}”
         </p>
       )}
 
@@ -137,8 +139,8 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
           Which groups differ
         </h3>
         <p className="mt-1 text-sm text-ink-soft">
-          {posthocName(analysis.posthocMethod)}, holding the chance of any false alarm over the family at α ={" "}
-          {formatAlpha(alpha)}.
+          {sentenceStart(posthocName(analysis.posthocMethod))}, holding the chance of any false alarm over the
+          family at α = {formatAlpha(alpha)}.
           {fwe && num(fwe.m) !== null && num(fwe.fwerIndependent) !== null && (
             <>
               {" "}

@@ -3,10 +3,11 @@ import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
 import { Form } from "@/components/ui/form";
 import { useCreateAnalysis } from "../api/create-analysis";
-import { TEST_NAMES, testTitle } from "@/lib/labels";
-import type { Analysis, TestId } from "@/features/studies/types";
+import { testTitle } from "@/lib/labels";
+import { LIMITS, type AnalysisDto as Analysis } from "@waymark/contract";
+import { OMNIBUS_TESTS, type OmnibusTest as TestId } from "@waymark/stats/vocabulary";
 
-export const MIN_JUSTIFICATION = 20;
+const MIN_JUSTIFICATION = LIMITS.minJustification;
 
 export const runAnalysisSchema = (recommended: string) =>
   z
@@ -40,7 +41,7 @@ export function RunAnalysisForm({
   onDone: (a: Analysis) => void;
 }) {
   const run = useCreateAnalysis(studyId);
-  const others = (Object.keys(TEST_NAMES) as TestId[]).filter((t) => t !== recommended);
+  const others = OMNIBUS_TESTS.filter((t) => t !== recommended);
   return (
     <Form
       schema={runAnalysisSchema(recommended) as unknown as z.ZodType<Values, Values>}

@@ -1,13 +1,6 @@
 import { formatDf, formatP, formatStat } from "@/lib/format";
-import {
-  isAvailable,
-  num,
-  reasonOf,
-  type BartlettPart,
-  type FTestPart,
-  type Maybe,
-  type SdRatioDetail,
-} from "@/features/studies/types";
+import { isAvailable, num, reasonOf, type Maybe } from "@/lib/result-values";
+import type { BartlettPart, LevenePart as FTestPart, SdRatio as SdRatioDetail } from "@waymark/stats/result";
 import { AttentionMark } from "@/components/ui/attention-mark";
 import { S } from "./stat-symbol";
 

@@ -1,4 +1,4 @@
-import { reasonOf } from "@/features/studies/types";
+import { reasonOf } from "@/lib/result-values";
 
 /** Where a statistic could not be computed: the reason, in place of the number. */
 export function UnavailableNote({ what, value }: { what: string; value: unknown }) {

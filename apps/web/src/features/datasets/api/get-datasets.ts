@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Dataset } from "@/features/studies/types";
+import type { DatasetDto as Dataset } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export function getDatasets(id: number): Promise<Dataset[]> {

@@ -1,6 +1,6 @@
 import { useMutation } from "@tanstack/react-query";
 import { uploadWithProgress } from "@/lib/api-client";
-import type { DatasetPreview } from "@/features/studies/types";
+import type { DatasetPreview } from "@waymark/contract";
 
 /** Reads the first rows of a file and guesses its layout; nothing is stored. */
 export function previewDataset(

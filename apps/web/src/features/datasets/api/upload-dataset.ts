@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { ApiError, uploadWithProgress } from "@/lib/api-client";
-import type { Dataset, Layout, ValidationReport } from "@/features/studies/types";
+import type { DatasetDto as Dataset, Layout, ValidationReport } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export interface UploadDatasetInput {

@@ -1,6 +1,6 @@
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
-import type { DatasetPreview, Layout } from "@/features/studies/types";
+import type { DatasetPreview, Layout } from "@waymark/contract";
 
 export interface Mapping {
   layout: Layout;

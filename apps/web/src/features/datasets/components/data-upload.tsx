@@ -2,7 +2,7 @@ import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { usePreviewDataset } from "../api/preview-dataset";
 import { rejectedReport, useUploadDataset } from "../api/upload-dataset";
-import type { Dataset, Study } from "@/features/studies/types";
+import type { DatasetDto as Dataset, StudyDto as Study } from "@waymark/contract";
 import { ColumnMapping } from "./column-mapping";
 import { FilePicker } from "./file-picker";
 import { ProgressBar } from "./progress-bar";

@@ -1,5 +1,5 @@
 import { formatBytes, formatDateTime } from "@/lib/format";
-import type { Dataset } from "@/features/studies/types";
+import type { DatasetDto as Dataset } from "@waymark/contract";
 import { ShortHash } from "@/components/ui/short-hash";
 
 /** Every uploaded version of the data, newest first, with its fingerprint. */

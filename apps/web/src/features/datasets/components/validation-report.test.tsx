@@ -1,11 +1,12 @@
 import { render, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import type { ValidationReport as Report } from "@/features/studies/types";
+import type { ValidationReport as Report } from "@waymark/contract";
 import { ValidationReport } from "./validation-report";
 
 const report: Report = {
   rowsRead: 34,
   rowsUsed: 30,
+  usable: true,
   excluded: [
     { row: 5, reason: "missing", value: "", column: "Strength" },
     { row: 12, reason: "non-numeric", value: "n.m.", column: "Strength" },

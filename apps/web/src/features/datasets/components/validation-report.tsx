@@ -1,4 +1,4 @@
-import type { ValidationReport as Report } from "@/features/studies/types";
+import type { ValidationReport as Report } from "@waymark/contract";
 import { AttentionMark } from "@/components/ui/attention-mark";
 
 const REASONS: Record<string, string> = {

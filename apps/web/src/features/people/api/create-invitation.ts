@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client";
 import { ROLES } from "@/lib/roles";
-import type { Invitation } from "../types";
+import type { InvitationDto as Invitation } from "@waymark/contract";
 import { peopleKeys } from "./keys";
 
 export const inviteInputSchema = z.object({

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Invitation } from "../types";
+import type { InvitationDto as Invitation } from "@waymark/contract";
 import { peopleKeys } from "./keys";
 
 export function getInvitations(): Promise<Invitation[]> {

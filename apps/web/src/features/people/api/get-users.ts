@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Account } from "../types";
+import type { AccountDto as Account } from "@waymark/contract";
 import { peopleKeys } from "./keys";
 
 export function getUsers(): Promise<Account[]> {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
 import type { Role } from "@/lib/roles";
-import type { Account } from "../types";
+import type { AccountDto as Account } from "@waymark/contract";
 import { peopleKeys } from "./keys";
 
 export type UserChange = { role: Role } | { active: boolean };

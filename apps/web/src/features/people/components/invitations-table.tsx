@@ -1,7 +1,7 @@
 import { columnHelper, DataTable, timeOf } from "@/components/ui/data-table";
 import { formatDateTime } from "@/lib/format";
 import { ROLE_LABELS } from "@/lib/roles";
-import type { Invitation, InvitationState } from "../types";
+import type { InvitationDto as Invitation, InvitationState } from "@waymark/contract";
 
 const STATE: Record<InvitationState, { label: string; className: string }> = {
   open: { label: "Open, not yet used", className: "bg-spruce-100 text-spruce" },

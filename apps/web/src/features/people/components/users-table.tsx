@@ -4,7 +4,7 @@ import { columnHelper, DataTable, timeOf } from "@/components/ui/data-table";
 import { formatDateTime } from "@/lib/format";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/roles";
 import { useUpdateUser } from "../api/update-user";
-import type { Account } from "../types";
+import type { AccountDto as Account } from "@waymark/contract";
 
 const ROLE_OPTIONS = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 

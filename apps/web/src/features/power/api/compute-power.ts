@@ -1,16 +1,8 @@
 import { useMutation } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { PowerResult } from "@/features/studies/types";
+import type { PowerBody, PowerResponse as PowerResult } from "@waymark/contract";
 
-export interface PowerBody {
-  k: number;
-  alpha: number;
-  effectF?: number;
-  means?: number[];
-  sd?: number;
-  power?: number;
-  n?: number;
-}
+export type { PowerBody };
 
 export function computePower(body: PowerBody): Promise<PowerResult> {
   return api.post<PowerResult>("/power", { ...body });

@@ -6,8 +6,7 @@ import { Form } from "@/components/ui/form";
 import { TextField } from "@/components/ui/text-field";
 import { formatAlpha } from "@/lib/format";
 import { useComputePower, type PowerBody } from "../api/compute-power";
-import { useSavePlan } from "@/features/studies/api/save-plan";
-import type { PowerResult, Study } from "@/features/studies/types";
+import type { PowerResponse as PowerResult, StudyDto as Study } from "@waymark/contract";
 import { PowerCurvePlot } from "./power-curve-plot";
 
 export const powerFormSchema = z
@@ -85,9 +84,24 @@ export function toPowerBody(v: PowerFormValues, alpha: number): PowerBody {
 }
 
 /** Sample size for the omnibus test: from an effect (Cohen's f, or expected means with a common SD) to n per group, or from n to power. */
-export function PowerCalculator({ study, editable }: { study: Study; editable: boolean }) {
+/** Saving the chosen sample size into the study's plan; the page passes the plan's mutation. */
+export interface PlanSaver {
+  mutate: (body: { power: { effectF: number; targetPower: number } }) => void;
+  isPending: boolean;
+  isSuccess: boolean;
+  error: Error | null;
+}
+
+export function PowerCalculator({
+  study,
+  editable,
+  save,
+}: {
+  study: Study;
+  editable: boolean;
+  save: PlanSaver;
+}) {
   const compute = useComputePower();
-  const save = useSavePlan(study.id);
   const [result, setResult] = useState<{ res: PowerResult; target: number; solveFor: "n" | "power" } | null>(
     null,
   );

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { ApprovedStudy } from "../types";
+import type { ReportStudy as ApprovedStudy } from "@waymark/contract";
 import { reportKeys } from "./keys";
 
 export function getStudies(): Promise<ApprovedStudy[]> {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { ReportExport } from "../types";
+import type { ReportExport } from "@waymark/contract";
 import { reportKeys } from "./keys";
 
 export function getReportExports(studyId: number): Promise<ReportExport[]> {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { ReportPreview } from "../types";
+import type { ReportPreview } from "@waymark/contract";
 import { reportKeys } from "./keys";
 
 export function getReportPreview(studyId: number, draft = false): Promise<ReportPreview> {

@@ -2,7 +2,7 @@ import { Link } from "react-router-dom";
 import { columnHelper, DataTable, timeOf } from "@/components/ui/data-table";
 import { reportPath } from "@/config/paths";
 import { formatDate } from "@/lib/format";
-import type { ApprovedStudy } from "../types";
+import type { ReportStudy as ApprovedStudy } from "@waymark/contract";
 
 const h = columnHelper<ApprovedStudy>();
 const columns = h.columns([

@@ -2,7 +2,7 @@ import { ClipboardCopy } from "lucide-react";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { methodsText } from "../report-text";
-import type { Block } from "../types";
+import type { Block } from "@waymark/contract";
 
 /** Copies the text of the Methods part as plain text, for pasting into a manuscript. */
 export function CopyMethodsButton({ blocks }: { blocks: Block[] }) {

@@ -2,7 +2,7 @@ import { fireEvent, screen, waitFor, within } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { renderWithProviders } from "@/test/render";
 import { methodsText } from "../report-text";
-import type { Block } from "../types";
+import type { Block } from "@waymark/contract";
 import { CopyMethodsButton } from "./copy-methods-button";
 import { ReportBlocks } from "./report-blocks";
 import { ReportPage } from "./report-page";
@@ -40,7 +40,7 @@ const BLOCKS: Block[] = [
       ["B", "11", "5.10", ""],
     ],
   },
-  { type: "figure", caption: "Figure 1. Each group's values", image: PNG },
+  { type: "figure", figure: "groups", caption: "Figure 1. Each group's values", image: PNG },
   { type: "caution", text: "The groups were not assigned at random; read differences as associations." },
   {
     type: "references",
@@ -78,7 +78,11 @@ describe("ReportBlocks", () => {
 
   it("does not load an image that is not an embedded PNG", () => {
     renderWithProviders(
-      <ReportBlocks blocks={[{ type: "figure", caption: "Figure 2", image: "https://example.org/x.png" }]} />,
+      <ReportBlocks
+        blocks={[
+          { type: "figure", figure: "intervals", caption: "Figure 2", image: "https://example.org/x.png" },
+        ]}
+      />,
     );
     expect(screen.queryByRole("img")).toBeNull();
     expect(screen.getByText("The figure is in the DOCX.")).toBeTruthy();

@@ -1,7 +1,7 @@
 import { TriangleAlert } from "lucide-react";
 import type { ReactNode } from "react";
 import { clean, cleanCell } from "../report-text";
-import type { Block, Run } from "../types";
+import type { Block, Run } from "@waymark/contract";
 
 const NUMERIC = /^[−\-–<>=≤≥.\d\s,%()[\]]+$|^[<>=]\s?[−\-.\d]/;
 const IMAGE = /^data:image\/png;base64,[A-Za-z0-9+/=]+$/;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client";
-import type { ReviewStudy } from "../types";
+import type { StudyDto as ReviewStudy } from "@waymark/contract";
 import { reviewKeys } from "./keys";
 
 export const DEFAULT_MEANING = "Approved as the analysis of record";

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { QueueItem } from "../types";
+import type { QueueItem } from "@waymark/contract";
 import { reviewKeys } from "./keys";
 
 export function getReviewQueue(): Promise<QueueItem[]> {

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { StudyHistory } from "../types";
+import type { StudyHistory } from "@waymark/contract";
 import { reviewKeys } from "./keys";
 
 export function getStudyHistory(studyId: number): Promise<StudyHistory> {

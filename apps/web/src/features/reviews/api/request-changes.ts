@@ -1,13 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { ReviewStep, ReviewStudy } from "../types";
+import type { RequestChangesBody, StudyDto as ReviewStudy } from "@waymark/contract";
 import { reviewKeys } from "./keys";
 
-export interface RequestChangesInput {
-  comment: string;
-  step?: ReviewStep | null;
-  stepComments?: { step: ReviewStep; body: string }[];
-}
+export type RequestChangesInput = RequestChangesBody;
 
 export function requestChanges(studyId: number, input: RequestChangesInput): Promise<ReviewStudy> {
   return api

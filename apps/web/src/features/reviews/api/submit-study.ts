@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Study } from "@/features/studies/types";
-import { storeStudy } from "@/features/studies/api/get-study";
+import type { StudyDto as Study } from "@waymark/contract";
+import { storeStudy } from "@/lib/study-cache";
 
 export function submitStudy(id: number, analysisId: number): Promise<Study> {
   return api.post<{ study: Study }>(`/studies/${id}/submit`, { analysisId }).then((r) => r.study);

@@ -1,6 +1,6 @@
 import { Check } from "lucide-react";
 import { AttentionMarker } from "@/components/ui/attention-marker";
-import type { CheckReading } from "../types";
+import type { Reading as CheckReading } from "@waymark/stats/result";
 
 const TITLES: Record<string, string> = {
   normality: "Shape of the data",

@@ -1,7 +1,7 @@
 import { AttentionMarker } from "@/components/ui/attention-marker";
 import { formatDateTime } from "@/lib/format";
-import { posthocLabel, testLabel } from "../labels";
-import type { ReviewAnalysis } from "../types";
+import { posthocName, sentenceStart, testName, testTitle } from "@/lib/labels";
+import type { AnalysisDto as ReviewAnalysis } from "@waymark/contract";
 
 /** The recommended test against the one used; an override and its justification stand out. */
 export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
@@ -13,8 +13,8 @@ export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
           <p className="flex flex-wrap items-center gap-2">
             <AttentionMarker>Override</AttentionMarker>
             <span className="font-semibold">
-              The analyst used {testLabel(analysis.chosenTest)} instead of the recommended{" "}
-              {testLabel(analysis.recommendedTest)}.
+              The analyst used {testName(analysis.chosenTest)} instead of {testName(analysis.recommendedTest)}
+              , the recommended test.
             </span>
           </p>
           {analysis.override?.justification ? (
@@ -28,14 +28,14 @@ export function ChoiceFacts({ analysis }: { analysis: ReviewAnalysis }) {
       )}
       <dl className="grid gap-x-4 gap-y-1.5 text-sm sm:grid-cols-[12rem_1fr]">
         <dt className="text-ink-soft">Recommended</dt>
-        <dd>{testLabel(analysis.recommendedTest)}</dd>
+        <dd>{testTitle(analysis.recommendedTest)}</dd>
         <dt className="text-ink-soft">Used</dt>
         <dd className="font-medium">
-          {testLabel(analysis.chosenTest)}
+          {testTitle(analysis.chosenTest)}
           {!overridden && <span className="font-normal text-ink-soft"> (as recommended)</span>}
         </dd>
         <dt className="text-ink-soft">Post-hoc</dt>
-        <dd>{posthocLabel(analysis.posthocMethod)}</dd>
+        <dd>{sentenceStart(posthocName(analysis.posthocMethod))}</dd>
         <dt className="text-ink-soft">Run</dt>
         <dd>
           <span className="num">{formatDateTime(analysis.createdAt)}</span>

@@ -1,7 +1,7 @@
 import { CheckCircle2, Undo2 } from "lucide-react";
 import { useState } from "react";
 import { formatDateTime } from "@/lib/format";
-import type { ReviewStudy, StudyHistory } from "../types";
+import type { StudyDto as ReviewStudy, StudyHistory } from "@waymark/contract";
 import { ApproveForm } from "./approve-form";
 import { RequestChangesForm } from "./request-changes-form";
 import { ShortHash } from "@/components/ui/short-hash";

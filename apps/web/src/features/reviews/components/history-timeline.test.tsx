@@ -1,7 +1,7 @@
 import { screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { renderWithProviders } from "@/test/render";
-import type { StudyHistory } from "../types";
+import type { StudyHistory } from "@waymark/contract";
 import { HistoryTimelineView } from "./history-timeline";
 
 const HASH = "9f2c4e1a7b3d5f60718293a4b5c6d7e8f90112233445566778899aabbccddeef";
@@ -10,7 +10,10 @@ const person = (id: number, displayName: string) => ({ id, displayName });
 const HISTORY: StudyHistory = {
   rounds: [
     {
+      id: 1,
       round: 1,
+      analysisId: 1,
+      datasetId: 1,
       submittedAt: "2025-12-01T09:00:00Z",
       submittedBy: person(1, "Ada Okafor"),
       decision: "changes_requested",
@@ -18,12 +21,14 @@ const HISTORY: StudyHistory = {
       decidedBy: person(2, "Rui Takahashi"),
       comments: [
         {
+          id: 1,
           step: null,
           body: "Explain the override.",
           author: person(2, "Rui Takahashi"),
           createdAt: "2025-12-02T09:00:00Z",
         },
         {
+          id: 2,
           step: "checks",
           body: "<b>Two</b> outliers are not discussed.",
           author: person(2, "Rui Takahashi"),
@@ -33,7 +38,10 @@ const HISTORY: StudyHistory = {
       signature: null,
     },
     {
+      id: 2,
       round: 2,
+      analysisId: 2,
+      datasetId: 1,
       submittedAt: "2025-12-03T09:00:00Z",
       submittedBy: person(1, "Ada Okafor"),
       decision: "approved",

@@ -3,7 +3,7 @@ import { ErrorPanel } from "@/components/errors/error-panel";
 import { formatDateTime } from "@/lib/format";
 import { useStudyHistory } from "../api/get-study-history";
 import { STEP_LABELS } from "../labels";
-import type { ReviewRound, StudyHistory } from "../types";
+import type { ReviewRound, StudyHistory } from "@waymark/contract";
 import { ShortHash } from "@/components/ui/short-hash";
 
 function DecisionLine({ round }: { round: ReviewRound }) {

@@ -1,7 +1,7 @@
 import { AttentionMarker } from "@/components/ui/attention-marker";
 import { formatAlpha, formatBounded, formatDateTime, formatStat } from "@/lib/format";
-import { ADJUST_LABELS, POLICY_LABELS, posthocLabel, testLabel } from "../labels";
-import type { ReviewAnalysis, ReviewStudy } from "../types";
+import { adjustmentTitle, policyTitle, posthocName, sentenceStart, testTitle } from "@/lib/labels";
+import type { AnalysisDto as ReviewAnalysis, StudyDto as ReviewStudy } from "@waymark/contract";
 import { ShortHash } from "@/components/ui/short-hash";
 
 function Row({ term, children }: { term: string; children: React.ReactNode }) {
@@ -28,13 +28,13 @@ export function PlanFacts({ study }: { study: ReviewStudy }) {
           <AttentionMarker>The plan is not locked</AttentionMarker>
         )}
       </Row>
-      <Row term="Test policy">{POLICY_LABELS[p.policy] ?? p.policy}</Row>
-      <Row term="Planned test">{testLabel(p.plannedTest)}</Row>
-      <Row term="Planned post-hoc">{posthocLabel(p.plannedPosthoc)}</Row>
+      <Row term="Test policy">{policyTitle(p.policy)}</Row>
+      <Row term="Planned test">{testTitle(p.plannedTest)}</Row>
+      <Row term="Planned post-hoc">{sentenceStart(posthocName(p.plannedPosthoc))}</Row>
       <Row term="Significance level">
         <span className="num">α = {formatAlpha(p.alpha)}</span>
       </Row>
-      <Row term="Adjustment">{ADJUST_LABELS[p.adjust] ?? p.adjust}</Row>
+      <Row term="Adjustment">{adjustmentTitle(p.adjust)}</Row>
       <Row term="Sample size plan">
         {p.power ? (
           <span>

@@ -7,21 +7,21 @@ import { SelectField } from "@/components/ui/select-field";
 import { TextArea } from "@/components/ui/text-area";
 import { useRequestChanges, type RequestChangesInput } from "../api/request-changes";
 import { STEP_LABELS } from "../labels";
-import { REVIEW_STEPS, type ReviewStep } from "../types";
+import { LIMITS, REVIEW_STEPS, type ReviewStep } from "@waymark/contract";
 
 const schema = z.object({
   comment: z
     .string()
     .trim()
     .min(1, "Say what needs to change")
-    .max(4000, "Keep the comment to 4,000 characters or fewer"),
+    .max(LIMITS.comment, `Keep the comment to ${LIMITS.comment.toLocaleString("en")} characters or fewer`),
   step: z.enum(["", ...REVIEW_STEPS] as [string, ...string[]]),
-  design: z.string().max(4000),
-  plan: z.string().max(4000),
-  data: z.string().max(4000),
-  checks: z.string().max(4000),
-  choice: z.string().max(4000),
-  results: z.string().max(4000),
+  design: z.string().max(LIMITS.comment),
+  plan: z.string().max(LIMITS.comment),
+  data: z.string().max(LIMITS.comment),
+  checks: z.string().max(LIMITS.comment),
+  choice: z.string().max(LIMITS.comment),
+  results: z.string().max(LIMITS.comment),
 });
 type Values = z.infer<typeof schema>;
 

@@ -1,7 +1,7 @@
 import { fireEvent, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { renderWithProviders } from "@/test/render";
-import type { QueueItem } from "../types";
+import type { QueueItem } from "@waymark/contract";
 import { ReviewQueueTable } from "./review-queue-table";
 
 const item = (studyId: number, title: string, daysWaiting: number, override = false): QueueItem => ({

@@ -3,8 +3,9 @@ import { Link } from "react-router-dom";
 import { columnHelper, DataTable, timeOf } from "@/components/ui/data-table";
 import { reviewPath } from "@/config/paths";
 import { formatDate } from "@/lib/format";
-import { daysLabel, testLabel } from "../labels";
-import type { QueueItem } from "../types";
+import { daysLabel } from "../labels";
+import { testTitle } from "@/lib/labels";
+import type { QueueItem } from "@waymark/contract";
 import { OverrideFlag } from "./override-flag";
 
 const h = columnHelper<QueueItem>();
@@ -29,7 +30,7 @@ const columns = h.columns([
     header: "Submitted",
     cell: (c) => <span className="num">{formatDate(c.row.original.submittedAt)}</span>,
   }),
-  h.accessor((r) => testLabel(r.chosenTest), {
+  h.accessor((r) => testTitle(r.chosenTest), {
     id: "test",
     header: "Recommended → chosen",
     sortFn: "text",
@@ -37,12 +38,12 @@ const columns = h.columns([
       const r = c.row.original;
       return r.recommendedTest === r.chosenTest ? (
         <span>
-          {testLabel(r.chosenTest)} <span className="text-ink-soft">(as recommended)</span>
+          {testTitle(r.chosenTest)} <span className="text-ink-soft">(as recommended)</span>
         </span>
       ) : (
         <span>
-          <span className="text-ink-soft">{testLabel(r.recommendedTest)}</span> →{" "}
-          <span className="font-medium">{testLabel(r.chosenTest)}</span>
+          <span className="text-ink-soft">{testTitle(r.recommendedTest)}</span> →{" "}
+          <span className="font-medium">{testTitle(r.chosenTest)}</span>
         </span>
       );
     },

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
 import { useSubmitStudy } from "../api/submit-study";
-import type { Study } from "@/features/studies/types";
+import type { StudyDto as Study } from "@waymark/contract";
 
 /** Sends the study to a reviewer, after a confirm step saying what the submission freezes. */
 export function SubmitPanel({ study, analysisId }: { study: Study; analysisId: number }) {

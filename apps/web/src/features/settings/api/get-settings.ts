@@ -1,17 +1,8 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { SettingsDto } from "@waymark/contract";
 import { api } from "@/lib/api-client";
 
-export type TestPolicy = "classic-first" | "welch-first";
-export type Adjustment = "holm" | "bonferroni" | "bh";
-export type PaperSize = "A4" | "Letter";
-
-export interface OrganizationSettings {
-  policy: TestPolicy;
-  defaultAlpha: number;
-  defaultAdjust: Adjustment;
-  paperSize: PaperSize;
-  updatedAt?: string;
-}
+export type OrganizationSettings = SettingsDto;
 
 export const settingsKey = ["organization", "settings"] as const;
 

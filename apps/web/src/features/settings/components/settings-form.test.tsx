@@ -1,4 +1,5 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
+import { ALPHA_MESSAGE } from "@waymark/contract";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { renderWithProviders } from "@/test/render";
 import { SettingsForm } from "./settings-form";
@@ -10,6 +11,7 @@ const SETTINGS = {
   defaultAlpha: 0.05,
   defaultAdjust: "holm",
   paperSize: "A4",
+  updatedAt: "2025-12-01T09:00:00.000Z",
 } as const;
 
 describe("SettingsForm", () => {
@@ -20,8 +22,11 @@ describe("SettingsForm", () => {
     );
     vi.stubGlobal("fetch", fetchMock);
     renderWithProviders(<SettingsForm settings={SETTINGS} />);
-    expect(screen.getByText(/unless the groups' spreads differ; then Welch's ANOVA/)).toBeTruthy();
-    expect(screen.getByText(/Delacre et al., 2019/)).toBeTruthy();
+    // The policies are described in the vocabulary's words (the plan form shows the same).
+    expect(
+      screen.getByText(/move to Welch's ANOVA only when the groups' spread clearly differs/),
+    ).toBeTruthy();
+    expect(screen.getByText(/holds its error rate when spreads differ/)).toBeTruthy();
     fireEvent.click(screen.getByLabelText(/Classic ANOVA first/));
     fireEvent.click(screen.getByLabelText(/Benjamini–Hochberg/));
     fireEvent.input(screen.getByLabelText("Default significance level (α)"), { target: { value: "0.01" } });
@@ -44,7 +49,7 @@ describe("SettingsForm", () => {
     renderWithProviders(<SettingsForm settings={SETTINGS} />);
     fireEvent.input(screen.getByLabelText("Default significance level (α)"), { target: { value: "0.5" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
-    await waitFor(() => expect(screen.getByText("Use an α above 0 and at most 0.20")).toBeTruthy());
+    await waitFor(() => expect(screen.getByText(ALPHA_MESSAGE)).toBeTruthy());
     expect(fetchMock).not.toHaveBeenCalled();
   });
 });

@@ -6,37 +6,9 @@ import { Form } from "@/components/ui/form";
 import { formatDateTime } from "@/lib/format";
 import type { OrganizationSettings } from "../api/get-settings";
 import { useUpdateSettings } from "../api/update-settings";
-
-const POLICIES = [
-  {
-    value: "classic-first",
-    title: "Classic ANOVA first",
-    line: "Classic one-way ANOVA, unless the groups' spreads differ; then Welch's ANOVA.",
-  },
-  {
-    value: "welch-first",
-    title: "Welch's ANOVA first",
-    line: "Welch's ANOVA by default (Delacre et al., 2019), unless the data call for the Kruskal–Wallis test.",
-  },
-] as const;
-
-const ADJUSTMENTS = [
-  {
-    value: "holm",
-    title: "Holm",
-    line: "Controls the family-wise error rate; never less powerful than Bonferroni.",
-  },
-  {
-    value: "bonferroni",
-    title: "Bonferroni",
-    line: "Controls the family-wise error rate; the simplest and most conservative.",
-  },
-  {
-    value: "bh",
-    title: "Benjamini–Hochberg",
-    line: "Controls the false discovery rate instead; for many comparisons in exploratory work.",
-  },
-] as const;
+import { ALPHA_MESSAGE, alpha, PAPER_SIZES } from "@waymark/contract";
+import { ADJUSTMENT_TERMS, ADJUSTMENTS, POLICIES, POLICY_TERMS } from "@waymark/stats/vocabulary";
+import { ADJUSTMENT_HINTS } from "@/lib/labels";
 
 const PAPER = [
   { value: "A4", title: "A4", line: "210 × 297 mm" },
@@ -44,15 +16,15 @@ const PAPER = [
 ] as const;
 
 const schema = z.object({
-  policy: z.enum(["classic-first", "welch-first"], "Choose a test policy"),
+  policy: z.enum(POLICIES, "Choose a test policy"),
   defaultAlpha: z
     .string()
     .trim()
     .min(1, "Enter the default significance level, such as 0.05")
     .refine((s) => /^(0?\.\d+|0|1)$/.test(s), "Write α as a decimal between 0 and 1, such as 0.05")
-    .refine((s) => Number(s) > 0 && Number(s) <= 0.2, "Use an α above 0 and at most 0.20"),
-  defaultAdjust: z.enum(["holm", "bonferroni", "bh"], "Choose an adjustment"),
-  paperSize: z.enum(["A4", "Letter"], "Choose a paper size"),
+    .refine((s) => alpha.safeParse(Number(s)).success, ALPHA_MESSAGE),
+  defaultAdjust: z.enum(ADJUSTMENTS, "Choose an adjustment"),
+  paperSize: z.enum(PAPER_SIZES, "Choose a paper size"),
 });
 type Values = z.infer<typeof schema>;
 
@@ -122,11 +94,11 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
             </p>
             {POLICIES.map((p) => (
               <Choice
-                key={p.value}
+                key={p}
                 name="policy"
-                value={p.value}
-                title={p.title}
-                line={p.line}
+                value={p}
+                title={POLICY_TERMS[p].title}
+                line={POLICY_TERMS[p].sentence}
                 register={form.register("policy")}
               />
             ))}
@@ -161,11 +133,11 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
             <legend className="mb-1 font-semibold">Default adjustment for multiple comparisons</legend>
             {ADJUSTMENTS.map((a) => (
               <Choice
-                key={a.value}
+                key={a}
                 name="defaultAdjust"
-                value={a.value}
-                title={a.title}
-                line={a.line}
+                value={a}
+                title={ADJUSTMENT_TERMS[a].title}
+                line={ADJUSTMENT_HINTS[a]}
                 register={form.register("defaultAdjust")}
               />
             ))}

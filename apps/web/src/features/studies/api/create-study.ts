@@ -1,33 +1,34 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "@/lib/api-client";
-import type { Study } from "../types";
-import { storeStudy } from "./get-study";
+import { alpha, LIMITS, studyContext, type CreateStudyBody, type StudyDto as Study } from "@waymark/contract";
+import { storeStudy } from "@/lib/study-cache";
 
-const text = (what: string, max = 200) =>
+const text = (what: string, max: number) =>
   z.string().trim().min(1, `Enter ${what}`).max(max, `Keep ${what} under ${max} characters`);
 
 export const createStudyInputSchema = z
   .object({
-    title: text("a title", 160),
-    objective: text("the objective", 2000),
-    outcomeName: text("the outcome's name", 120),
-    outcomeUnit: z.string().trim().max(40, "Keep the unit under 40 characters"),
-    factorName: text("the grouping factor's name", 120),
+    title: text("a title", LIMITS.title),
+    objective: text("the objective", LIMITS.objective),
+    outcomeName: text("the outcome's name", LIMITS.outcomeName),
+    outcomeUnit: z
+      .string()
+      .trim()
+      .max(LIMITS.outcomeUnit, `Keep the unit under ${LIMITS.outcomeUnit} characters`),
+    factorName: text("the grouping factor's name", LIMITS.factorName),
     levels: z.array(z.object({ name: z.string().trim() })),
     hasControl: z.boolean(),
     controlLevel: z.string(),
-    alpha: z
-      .number({ error: "Enter α as a number, for example 0.05" })
-      .gt(0, "α must be above 0")
-      .max(0.2, "α must be at most 0.2"),
-    context: z.enum(["general", "clinical", "safety-critical"]),
+    alpha,
+    context: studyContext,
   })
   .superRefine((v, ctx) => {
     const names = v.levels.map((l) => l.name).filter((n) => n.length > 0);
-    if (names.length < 2)
+    if (names.length < LIMITS.minLevels)
       ctx.addIssue({ code: "custom", path: ["levels"], message: "Name at least two groups" });
-    if (names.length > 20) ctx.addIssue({ code: "custom", path: ["levels"], message: "At most 20 groups" });
+    if (names.length > LIMITS.maxLevels)
+      ctx.addIssue({ code: "custom", path: ["levels"], message: `At most ${LIMITS.maxLevels} groups` });
     const dup = names.find((n, i) => names.indexOf(n) !== i);
     if (dup)
       ctx.addIssue({
@@ -40,17 +41,7 @@ export const createStudyInputSchema = z
   });
 export type CreateStudyForm = z.infer<typeof createStudyInputSchema>;
 
-export interface CreateStudyBody {
-  title: string;
-  objective: string;
-  outcomeName: string;
-  outcomeUnit: string;
-  factorName: string;
-  levels: string[];
-  controlLevel: string | null;
-  alpha: number;
-  context: Study["context"];
-}
+export type { CreateStudyBody };
 
 export function toCreateStudyBody(v: CreateStudyForm): CreateStudyBody {
   return {

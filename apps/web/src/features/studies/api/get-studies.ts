@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export function getStudies(): Promise<Study[]> {

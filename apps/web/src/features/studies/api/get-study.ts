@@ -1,6 +1,6 @@
-import { queryOptions, useQuery, type QueryClient } from "@tanstack/react-query";
+import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export function getStudy(id: number): Promise<Study> {
@@ -12,10 +12,4 @@ export const studyQueryOptions = (id: number) =>
 
 export function useStudy(id: number) {
   return useQuery(studyQueryOptions(id));
-}
-
-/** After a mutation answers with the study: update its detail and refresh the list. */
-export function storeStudy(qc: QueryClient, study: Study) {
-  qc.setQueryData(studyKeys.detail(study.id), study);
-  void qc.invalidateQueries({ queryKey: studyKeys.all, exact: true });
 }

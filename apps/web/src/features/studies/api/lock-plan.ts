@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Study } from "../types";
-import { storeStudy } from "./get-study";
+import type { StudyDto as Study } from "@waymark/contract";
+import { storeStudy } from "@/lib/study-cache";
 
 export function lockPlan(id: number): Promise<Study> {
   return api.post<{ study: Study }>(`/studies/${id}/plan/lock`).then((r) => r.study);

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { DesignAnswers, Study } from "../types";
-import { storeStudy } from "./get-study";
+import type { DesignAnswers, StudyDto as Study } from "@waymark/contract";
+import { storeStudy } from "@/lib/study-cache";
 
 /** Saves one or more design answers as they are given. */
 export function saveDesign(id: number, answers: DesignAnswers): Promise<Study> {

@@ -1,14 +1,9 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Adjustment, Policy, Study } from "../types";
-import { storeStudy } from "./get-study";
+import type { PlanBody, StudyDto as Study } from "@waymark/contract";
+import { storeStudy } from "@/lib/study-cache";
 
-export interface SavePlanBody {
-  policy?: Policy;
-  adjust?: Adjustment;
-  alpha?: number;
-  power?: { effectF: number; targetPower: number };
-}
+export type SavePlanBody = PlanBody;
 
 export function savePlan(id: number, body: SavePlanBody): Promise<Study> {
   return api.put<{ study: Study }>(`/studies/${id}/plan`, { ...body }).then((r) => r.study);

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 import type { CreateStudyBody } from "./create-study";
-import { storeStudy } from "./get-study";
+import { storeStudy } from "@/lib/study-cache";
 
 export type UpdateStudyBody = Partial<CreateStudyBody>;
 

@@ -9,7 +9,7 @@ import {
   type CreateStudyForm,
 } from "../api/create-study";
 import { CONTEXT_LABELS } from "@/lib/labels";
-import type { Study, StudyContext } from "../types";
+import type { StudyDto as Study, StudyContext } from "@waymark/contract";
 import { LevelsEditor } from "./levels-editor";
 
 const DEFAULTS: CreateStudyForm = {

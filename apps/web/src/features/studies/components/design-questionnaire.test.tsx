@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { DESIGN_QUESTIONS } from "../design-questions";
 import { makeStudy } from "@/test/make-study";
 import { renderWithStudy, routeFetch } from "@/test/study-harness";
-import type { DesignAnswers, Study } from "../types";
+import type { DesignAnswers, StudyDto as Study } from "@waymark/contract";
 import { DesignQuestionnaire } from "./design-questionnaire";
 
 afterEach(() => vi.unstubAllGlobals());

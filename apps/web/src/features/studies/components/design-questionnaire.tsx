@@ -6,7 +6,7 @@ import { studyPath } from "@/config/paths";
 import { useSaveDesign } from "../api/save-design";
 import { useUpdateStudy } from "../api/update-study";
 import { DESIGN_QUESTIONS, firstUnanswered } from "../design-questions";
-import type { DesignAnswers, Study } from "../types";
+import type { DesignAnswers, StudyDto as Study } from "@waymark/contract";
 import { ControlPicker } from "./control-picker";
 import { DesignQuestionCard } from "./design-question-card";
 import { DesignSummary } from "./design-summary";

@@ -1,6 +1,6 @@
 import { Button } from "@/components/ui/button";
 import { DESIGN_QUESTIONS } from "../design-questions";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 
 /** All design answers on one screen, each with a way back to its question while it can change. */
 export function DesignSummary({ study, onEdit }: { study: Study; onEdit?: (index: number) => void }) {

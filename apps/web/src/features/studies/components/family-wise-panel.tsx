@@ -1,6 +1,6 @@
 import { formatAlpha, formatPercent } from "@/lib/format";
 import { plannedComparisons } from "@/lib/labels";
-import type { ComparisonSet } from "../types";
+import type { Comparisons as ComparisonSet } from "@waymark/stats/vocabulary";
 
 /** Why the comparisons need protecting: the chance of at least one false alarm over m tests. */
 export function FamilyWisePanel({

@@ -1,5 +1,5 @@
 import { STATUS_LABELS } from "@/lib/labels";
-import type { StudyStatus } from "../types";
+import type { StudyStatus } from "@waymark/contract";
 
 const STYLES: Record<StudyStatus, string> = {
   draft: "bg-panel text-ink ring-ink/20",

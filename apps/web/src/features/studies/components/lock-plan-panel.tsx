@@ -2,7 +2,7 @@ import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
 import { useLockPlan } from "../api/lock-plan";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 
 /** Locks the plan, after a confirm step that says it cannot be undone. */
 export function LockPlanPanel({ study }: { study: Study }) {

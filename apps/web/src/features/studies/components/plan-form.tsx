@@ -4,24 +4,16 @@ import { Button } from "@/components/ui/button";
 import { Form } from "@/components/ui/form";
 import { TextField } from "@/components/ui/text-field";
 import { useSavePlan } from "../api/save-plan";
-import { ADJUST_NAMES, POLICY_TEXT } from "@/lib/labels";
-import type { Adjustment, Policy, Study } from "../types";
+import { ADJUSTMENT_TERMS, ADJUSTMENTS, POLICIES, POLICY_TERMS } from "@waymark/stats/vocabulary";
+import { ADJUSTMENT_HINTS } from "@/lib/labels";
+import { alpha, type StudyDto as Study } from "@waymark/contract";
 
 export const planFormSchema = z.object({
-  policy: z.enum(["classic-first", "welch-first"], { error: "Choose a test policy" }),
-  adjust: z.enum(["holm", "bonferroni", "bh"], { error: "Choose a p-value adjustment" }),
-  alpha: z
-    .number({ error: "Enter α as a number, for example 0.05" })
-    .gt(0, "α must be above 0")
-    .max(0.2, "α must be at most 0.2; a larger false-alarm rate would not be accepted as evidence"),
+  policy: z.enum(POLICIES, { error: "Choose a test policy" }),
+  adjust: z.enum(ADJUSTMENTS, { error: "Choose a p-value adjustment" }),
+  alpha,
 });
 export type PlanFormValues = z.infer<typeof planFormSchema>;
-
-const ADJUST_LINES: Record<Adjustment, string> = {
-  holm: "Controls the family-wise error rate like Bonferroni, but tests the smallest p first and is never less powerful.",
-  bonferroni: "Multiplies each p by the number of comparisons: simple and strict.",
-  bh: "Controls the expected share of false discoveries instead of the chance of any; suits screening, not confirmation.",
-};
 
 /** The rules of the analysis: test policy, p-value adjustment and α. Saved to the plan. */
 export function PlanForm({ study }: { study: Study }) {
@@ -38,12 +30,12 @@ export function PlanForm({ study }: { study: Study }) {
         <>
           <fieldset className="flex flex-col gap-2">
             <legend className="text-sm font-semibold">Test policy</legend>
-            {(Object.keys(POLICY_TEXT) as Policy[]).map((p) => (
+            {POLICIES.map((p) => (
               <label key={p} className="flex items-start gap-2 text-sm">
                 <input type="radio" value={p} className="mt-1 accent-spruce" {...register("policy")} />
                 <span>
-                  <span className="font-medium">{POLICY_TEXT[p].title}.</span>{" "}
-                  <span className="text-ink-soft">{POLICY_TEXT[p].line}</span>
+                  <span className="font-medium">{POLICY_TERMS[p].title}.</span>{" "}
+                  <span className="text-ink-soft">{POLICY_TERMS[p].sentence}</span>
                 </span>
               </label>
             ))}
@@ -59,12 +51,12 @@ export function PlanForm({ study }: { study: Study }) {
           </fieldset>
           <fieldset className="flex flex-col gap-2">
             <legend className="text-sm font-semibold">p-value adjustment</legend>
-            {(Object.keys(ADJUST_NAMES) as Adjustment[]).map((a) => (
+            {ADJUSTMENTS.map((a) => (
               <label key={a} className="flex items-start gap-2 text-sm">
                 <input type="radio" value={a} className="mt-1 accent-spruce" {...register("adjust")} />
                 <span>
-                  <span className="font-medium">{ADJUST_NAMES[a]}.</span>{" "}
-                  <span className="text-ink-soft">{ADJUST_LINES[a]}</span>
+                  <span className="font-medium">{ADJUSTMENT_TERMS[a].title}.</span>{" "}
+                  <span className="text-ink-soft">{ADJUSTMENT_HINTS[a]}</span>
                 </span>
               </label>
             ))}

@@ -1,6 +1,6 @@
 import { Lock } from "lucide-react";
 import { formatDateTime } from "@/lib/format";
-import type { Plan } from "../types";
+import type { PlanDto as Plan } from "@waymark/contract";
 
 /** "Plan locked <date time>", shown on every step once the plan is fixed. */
 export function PlanLockedNote({ plan }: { plan: Plan }) {

@@ -1,6 +1,13 @@
 import { formatAlpha } from "@/lib/format";
-import { ADJUST_NAMES, COMPARISON_TEXT, POLICY_TEXT, posthocName, testTitle } from "@/lib/labels";
-import type { Study } from "../types";
+import {
+  adjustmentTitle,
+  comparisonName,
+  policyTitle,
+  posthocName,
+  sentenceStart,
+  testTitle,
+} from "@/lib/labels";
+import type { StudyDto as Study } from "@waymark/contract";
 
 /** What the plan will run, as the server derived it from the design answers and the policy. */
 export function PlannedMethods({ study }: { study: Study }) {
@@ -13,16 +20,16 @@ export function PlannedMethods({ study }: { study: Study }) {
       <dt className="text-ink-soft">Planned test</dt>
       <dd className="font-semibold">{testTitle(p.plannedTest)}</dd>
       <dt className="text-ink-soft">Matched post-hoc method</dt>
-      <dd className="font-semibold">{posthocName(p.plannedPosthoc)}</dd>
+      <dd className="font-semibold">{sentenceStart(posthocName(p.plannedPosthoc))}</dd>
       <dt className="text-ink-soft">Comparisons</dt>
       <dd className="first-letter:uppercase">
-        {COMPARISON_TEXT[p.comparisons] ?? p.comparisons}
+        {comparisonName(p.comparisons)}
         {p.comparisons === "vs-control" && study.controlLevel ? ` (${study.controlLevel})` : ""}
       </dd>
       <dt className="text-ink-soft">Policy</dt>
-      <dd>{POLICY_TEXT[p.policy]?.title ?? p.policy}</dd>
+      <dd>{policyTitle(p.policy)}</dd>
       <dt className="text-ink-soft">p-value adjustment</dt>
-      <dd>{ADJUST_NAMES[p.adjust] ?? p.adjust}</dd>
+      <dd>{adjustmentTitle(p.adjust)}</dd>
       <dt className="text-ink-soft">Significance level</dt>
       <dd className="tabular-nums">α = {formatAlpha(p.alpha)}</dd>
       <dt className="text-ink-soft">Sample size</dt>

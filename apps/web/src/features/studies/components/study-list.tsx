@@ -3,7 +3,7 @@ import { studyPath } from "@/config/paths";
 import { formatDate } from "@/lib/format";
 import { CONTEXT_LABELS } from "@/lib/labels";
 import { studySteps } from "../step-status";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 import { LifecycleBadge } from "./lifecycle-badge";
 
 /** Every study the signed-in person may see, newest first, with where each one stands. */
@@ -33,7 +33,7 @@ export function StudyList({ studies }: { studies: Study[] }) {
             <p className="mt-1 text-sm text-ink-soft">
               {s.outcomeName}
               {s.outcomeUnit ? ` (${s.outcomeUnit})` : ""} across {s.levels.length} levels of {s.factorName} ·{" "}
-              {s.owner.displayName} · updated {formatDate(s.updatedAt)}
+              {s.owner?.displayName ?? "—"} · updated {formatDate(s.updatedAt)}
             </p>
             <p className="mt-2 text-sm">
               {next ? (

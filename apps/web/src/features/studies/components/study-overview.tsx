@@ -3,7 +3,7 @@ import { studyPath } from "@/config/paths";
 import { formatAlpha, formatDateTime } from "@/lib/format";
 import { CONTEXT_LABELS } from "@/lib/labels";
 import { currentStep, STEP_LABELS, type StepStatus } from "../step-status";
-import type { Study } from "../types";
+import type { StudyDto as Study } from "@waymark/contract";
 
 function Row({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -45,7 +45,7 @@ export function StudyOverview({ study, steps }: { study: Study; steps: StepStatu
           <span className="tabular-nums">α = {formatAlpha(study.plan?.alpha ?? study.alpha)}</span>
         </Row>
         <Row label="Setting">{CONTEXT_LABELS[study.context]}</Row>
-        <Row label="Owner">{study.owner.displayName}</Row>
+        <Row label="Owner">{study.owner?.displayName ?? "—"}</Row>
         <Row label="Created">{formatDateTime(study.createdAt)}</Row>
       </dl>
       <p className="mt-6">
