@@ -11,6 +11,8 @@ import { dunnettTest } from "./posthoc/dunnett-test.js";
 import { gamesHowell } from "./posthoc/games-howell.js";
 import { tukeyKramer } from "./posthoc/tukey-kramer.js";
 import { welchVsControlHolm } from "./posthoc/welch-vs-control-holm.js";
+import { welchControlIntervals } from "./posthoc/welch-control-intervals.js";
+import { withShiftIntervals } from "./posthoc/dunn-shift-intervals.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupSummary, Unavailable } from "./types/group-summary.js";
 
@@ -29,6 +31,27 @@ function pairsOf(
 ): object[] | Unavailable {
   if ("available" in result && result.available === false) return result as Unavailable;
   return [...(result as { pairs: readonly object[] }).pairs];
+}
+
+/** Welch t-tests against the control gain their simultaneous (Bonferroni) intervals. */
+function withWelchIntervals(
+  pairs: object[] | Unavailable,
+  intervals: object[] | Unavailable,
+): object[] | Unavailable {
+  if (!Array.isArray(pairs) || !Array.isArray(intervals)) return pairs;
+  const byName = new Map((intervals as { a: string }[]).map((x) => [x.a, x]));
+  return (pairs as { a: string }[]).map((p) => {
+    const i = byName.get(p.a) as Record<string, unknown> | undefined;
+    if (!i) return p;
+    if (i.available === false) return { ...p, intervalReason: i.reason };
+    return {
+      ...p,
+      lower: i.lower,
+      upper: i.upper,
+      intervalLevel: i.intervalLevel,
+      intervalAdjustment: i.intervalAdjustment,
+    };
+  });
 }
 
 /**
@@ -71,7 +94,8 @@ export function runPosthoc(
       midranks(sample),
     ),
   );
-  const dunnPairs = pairsOf(dunnResult);
+  const sortedByName = new Map(sample.groups.map((g) => [g.name, sortedValues(g)]));
+  const dunnPairs = withShiftIntervals(pairsOf(dunnResult), sortedByName, alpha);
 
   const posthoc: Record<string, unknown> = {
     tukey,
@@ -91,12 +115,19 @@ export function runPosthoc(
         withControl.map((x) => x.p),
         options.adjust,
       );
-      dunnVsControl = withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] }));
+      dunnVsControl = withShiftIntervals(
+        withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] })),
+        sortedByName,
+        alpha,
+      );
     } else dunnVsControl = dunnPairs;
     posthoc.control = {
       control,
       dunnett: pairsOf(attempt(() => dunnettTest(summaries, control, alpha))),
-      welchHolm: pairsOf(attempt(() => welchVsControlHolm(summaries, control, alpha))),
+      welchHolm: withWelchIntervals(
+        pairsOf(attempt(() => welchVsControlHolm(summaries, control, alpha))),
+        attempt(() => welchControlIntervals(summaries, control, alpha)),
+      ),
       dunn: dunnVsControl,
     };
   }

@@ -10,7 +10,7 @@ import {
 import { comparisonsOf } from "../studies/plan.js";
 import { paragraph, type Block } from "./report-blocks.js";
 import type { ReportInput } from "./report-input.js";
-import { posthocTable } from "./posthoc-table.js";
+import { intervalPairs, posthocTable } from "./posthoc-table.js";
 import { REFERENCES, type ReferenceKey } from "./references.js";
 
 const ASSIGNMENT: Record<string, string> = {
@@ -107,16 +107,19 @@ export function buildReport(input: ReportInput): Block[] {
       "methods",
     ),
   );
+  const simultaneous = (m: number) =>
+    m === 1
+      ? `${formatStat((1 - alpha) * 100, 0)}% level`
+      : `level 1 − α/${m} (${formatStat((1 - alpha / m) * 100, 2)}%) so that the ${m} intervals hold ${formatStat((1 - alpha) * 100, 0)}% together (Bonferroni)`;
   const posthocSentence: Record<string, string> = {
     "Tukey–Kramer HSD":
       "pairwise comparisons with the Tukey–Kramer honestly significant difference procedure, which controls the family-wise error rate with simultaneous 95% confidence intervals",
     "Games–Howell":
       "pairwise comparisons with the Games–Howell procedure, which does not assume equal variances and gives simultaneous 95% confidence intervals",
-    Dunn: `pairwise comparisons with Dunn's test on mean ranks (two-sided, tie-corrected), with ${ADJUST[study.plan.adjust]}`,
+    Dunn: `pairwise comparisons with Dunn's test on mean ranks (two-sided, tie-corrected), with ${ADJUST[study.plan.adjust]}, and the Hodges–Lehmann estimate of each pair's shift with a distribution-free interval from the Mann–Whitney statistic, each at the ${simultaneous((k * (k - 1)) / 2)}`,
     Dunnett: `comparisons of each group with the control by Dunnett's procedure, with simultaneous 95% confidence intervals`,
-    "Welch t-tests against the control, Holm-adjusted":
-      "Welch t-tests of each group against the control with Holm's adjustment",
-    "Dunn against the control": `Dunn's test of each group against the control with ${ADJUST[study.plan.adjust]}`,
+    "Welch t-tests against the control, Holm-adjusted": `Welch t-tests of each group against the control with Holm's adjustment, and Welch confidence intervals for each difference from the control, each at the ${simultaneous(k - 1)}`,
+    "Dunn against the control": `Dunn's test of each group against the control with ${ADJUST[study.plan.adjust]}, and the Hodges–Lehmann estimate of each group's shift from the control with a distribution-free interval from the Mann–Whitney statistic, each at the ${simultaneous(k - 1)}`,
   };
   blocks.push(
     paragraph(
@@ -131,9 +134,9 @@ export function buildReport(input: ReportInput): Block[] {
   if (m === "Tukey–Kramer HSD") (["tukey", "kramer", "hedges"] as const).forEach((x) => refs.add(x));
   if (m === "Games–Howell") (["gamesHowell", "hedges"] as const).forEach((x) => refs.add(x));
   if (m === "Dunnett") (["dunnett", "hedges"] as const).forEach((x) => refs.add(x));
-  if (m.startsWith("Welch t-tests")) (["welch", "holm"] as const).forEach((x) => refs.add(x));
+  if (m.startsWith("Welch t-tests")) (["welchT", "holm", "bonferroni"] as const).forEach((x) => refs.add(x));
   if (m.startsWith("Dunn") && !m.startsWith("Dunnett")) {
-    refs.add("dunn");
+    (["dunn", "hodgesLehmann", "bonferroni"] as const).forEach((x) => refs.add(x));
     if (study.plan.adjust === "holm") refs.add("holm");
     if (study.plan.adjust === "bh") refs.add("bh");
   }
@@ -189,26 +192,33 @@ export function buildReport(input: ReportInput): Block[] {
     );
   }
   blocks.push({ type: "heading", level: 3, text: "Post-hoc comparisons" });
-  const table = posthocTable(r.posthoc ?? {}, chosen, vsControl, unit);
+  const table = posthocTable(r.posthoc ?? {}, chosen, vsControl, unit, alpha);
   if ("reason" in table)
     blocks.push(paragraph(`The post-hoc comparisons could not be computed: ${table.reason}.`, "results"));
-  else
+  else {
     blocks.push({
       type: "table",
       caption: `Table 2. ${analysis.posthocMethod}`,
       header: table.header,
       rows: table.rows,
     });
+    table.notes.forEach((note, i) => blocks.push(paragraph(`Note ${i + 1}. ${note}`, "results")));
+  }
   blocks.push({
     type: "figure",
     figure: "groups",
     caption: `Figure 1. ${study.outcomeName} in each group: box (quartiles and median) with every value shown.`,
   });
-  if (chosen !== "kruskal-wallis" && !("reason" in table)) {
+  // The figure only when some pair has an interval, so the report never holds an empty figure.
+  if (!("reason" in table) && intervalPairs(r.posthoc ?? {}, chosen, vsControl).length > 0) {
+    const what =
+      chosen === "kruskal-wallis"
+        ? "Hodges–Lehmann shifts between groups with simultaneous"
+        : "Differences between group means with simultaneous";
     blocks.push({
       type: "figure",
       figure: "intervals",
-      caption: `Figure 2. Differences between group means with simultaneous 95% confidence intervals (${analysis.posthocMethod}); intervals that cross zero show no clear difference.`,
+      caption: `Figure 2. ${what} ${formatStat((1 - alpha) * 100, 0)}% confidence intervals (${analysis.posthocMethod}); intervals that cross zero show no clear difference.`,
     });
   }
   const fwer = r as unknown as { familyWiseError?: { m?: number; fwerIndependent?: number } };

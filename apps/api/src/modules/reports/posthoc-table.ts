@@ -35,13 +35,30 @@ export function familyFor(
   return { key, family: posthoc[key] };
 }
 
+const percent = (level: number) =>
+  `${formatStat(level * 100, level * 100 === Math.round(level * 100) ? 0 : 1)}%`;
+
+/**
+ * The interval cell of one pair; a pair without an interval says so in a note (the stored
+ * reason), never with a bare placeholder.
+ */
+function intervalCell(p: Pair, notes: string[]): string {
+  const lower = num(p.lower);
+  const upper = num(p.upper);
+  if (lower !== null && upper !== null) return `[${formatStat(lower)}, ${formatStat(upper)}]`;
+  const reason = typeof p.intervalReason === "string" ? p.intervalReason : "the interval was not computed";
+  notes.push(`No interval for ${p.a} vs ${p.b}: ${reason}.`);
+  return `none (note ${notes.length})`;
+}
+
 /** Header and rows of the post-hoc table for the chosen test, or the reason it is missing. */
 export function posthocTable(
   posthoc: Record<string, unknown>,
   chosenTest: string,
   vsControl: boolean,
   unit: string,
-): { header: string[]; rows: string[][] } | { reason: string } {
+  alpha = 0.05,
+): { header: string[]; rows: string[][]; notes: string[] } | { reason: string } {
   const { family } = familyFor(posthoc, chosenTest, vsControl);
   const pairs = pairsOf(family);
   if (!pairs) {
@@ -52,11 +69,16 @@ export function posthocTable(
     return { reason };
   }
   const u = unit ? ` (${unit})` : "";
+  const notes: string[] = [];
+  const ci = `Simultaneous ${percent(1 - alpha)} CI`;
   if (chosenTest === "kruskal-wallis") {
     return {
-      header: ["Comparison", "z", "p (unadjusted)", "Adjusted p", "Rank-biserial r"],
+      header: ["Comparison", `Shift${u}`, ci, "z", "p (unadjusted)", "Adjusted p", "Rank-biserial r"],
+      notes,
       rows: pairs.map((p) => [
         `${p.a} vs ${p.b}`,
+        fmt(p.shift),
+        intervalCell(p, notes),
         fmt(p.z),
         fmt(p.p, (v) => formatP(v).replace("= ", "")),
         fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
@@ -65,20 +87,19 @@ export function posthocTable(
     };
   }
   return {
-    header: ["Comparison", `Difference${u}`, "95% CI", "Adjusted p", "Hedges' g"],
+    header: ["Comparison", `Difference${u}`, ci, "Adjusted p", "Hedges' g"],
+    notes,
     rows: pairs.map((p) => [
       `${p.a} − ${p.b}`,
       fmt(p.diff),
-      num(p.lower) !== null && num(p.upper) !== null
-        ? `[${formatStat(num(p.lower)!)}, ${formatStat(num(p.upper)!)}]`
-        : "—",
+      intervalCell(p, notes),
       fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
       fmt(effect(p.hedgesG, "g")),
     ]),
   };
 }
 
-/** Pairs with an interval, for the simultaneous-intervals figure. */
+/** Pairs with an interval, for the simultaneous-intervals figure (mean differences, or Hodges–Lehmann shifts for rank comparisons). */
 export function intervalPairs(
   posthoc: Record<string, unknown>,
   chosenTest: string,
@@ -86,7 +107,8 @@ export function intervalPairs(
 ): { label: string; diff: number; lower: number; upper: number }[] {
   const pairs = pairsOf(familyFor(posthoc, chosenTest, vsControl).family) ?? [];
   return pairs
-    .filter((p) => num(p.diff) !== null && num(p.lower) !== null && num(p.upper) !== null)
+    .map((p): Pair & { diff: number | null } => ({ ...p, diff: num(p.diff) ?? num(p.shift) }))
+    .filter((p) => p.diff !== null && num(p.lower) !== null && num(p.upper) !== null)
     .map((p) => ({
       label: `${p.a} − ${p.b}`,
       diff: p.diff as number,
