@@ -106,9 +106,11 @@ function tieSumOf(a: Float64Array, b: Float64Array): number {
       i < a.length ? (a[i] as number) : Infinity,
       j < b.length ? (b[j] as number) : Infinity,
     );
-    let t = 0;
-    while (i < a.length && a[i] === x) (i++, t++);
-    while (j < b.length && b[j] === x) (j++, t++);
+    const i0 = i;
+    const j0 = j;
+    while (i < a.length && a[i] === x) i++;
+    while (j < b.length && b[j] === x) j++;
+    const t = i - i0 + (j - j0);
     s += t * t * t - t;
   }
   return s;
