@@ -161,7 +161,7 @@ describe("analyze", () => {
     expect(control.welchHolm).toHaveLength(2);
     expect(control.dunn).toHaveLength(2);
     expect(r.recommendation.posthoc).toBe("dunnett");
-    expect(r.familyWiseError).toMatchObject({ m: 3 });
+    expect(r.familyWiseError).toMatchObject({ m: 2, comparisons: "vs-control" }); // k − 1 comparisons with the control, as planned
     assertClean(r);
   });
 

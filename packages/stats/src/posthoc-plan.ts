@@ -60,7 +60,8 @@ function withWelchIntervals(
  * control with Holm, and Dunn vs the control (Dunn's pairs with the control, re-adjusted over
  * those k − 1 comparisons). Summaries are taken on the exactly centred values: every output
  * (differences, intervals, standardized effects) is shift-invariant, so large offsets cost no
- * digits. Also the family-wise error rate for the k(k − 1)/2 pairs.
+ * digits. Also the family-wise error rate of the planned comparisons (k − 1 against a control,
+ * else k(k − 1)/2 pairs).
  * Cost: O(k²) beyond the shared sums, plus Dunn's ranking.
  */
 export function runPosthoc(
@@ -131,6 +132,9 @@ export function runPosthoc(
       dunn: dunnVsControl,
     };
   }
-  const fwe = attempt(() => familyWiseError({ k: sample.groups.length, alpha }));
+  // The family the plan actually makes: k − 1 comparisons with the control, else every pair.
+  const comparisons =
+    options.comparisons === "vs-control" && control !== undefined ? "vs-control" : "all-pairs";
+  const fwe = attempt(() => familyWiseError({ k: sample.groups.length, alpha, comparisons }));
   return { posthoc, familyWiseError: fwe };
 }

@@ -1,5 +1,6 @@
 import {
   checkReadings,
+  familyWiseError,
   midSentence,
   formatStat,
   formatUnit,
@@ -221,18 +222,15 @@ export function buildReport(input: ReportInput): Block[] {
       caption: `Figure 2. ${what} ${formatStat((1 - alpha) * 100, 0)}% confidence intervals (${analysis.posthocMethod}); intervals that cross zero show no clear difference.`,
     });
   }
-  const fwer = r as unknown as { familyWiseError?: { m?: number; fwerIndependent?: number } };
-  if (
-    typeof fwer.familyWiseError?.m === "number" &&
-    typeof fwer.familyWiseError.fwerIndependent === "number"
-  ) {
-    blocks.push(
-      paragraph(
-        `With m = ${fwer.familyWiseError.m} comparisons, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwer.familyWiseError.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
-        "results",
-      ),
-    );
-  }
+  // From the plan's comparisons (k − 1 against a control, else all pairs), not from whatever
+  // family size an older stored analysis recorded.
+  const fwe = familyWiseError({ k, alpha, comparisons: vsControl ? "vs-control" : "all-pairs" });
+  blocks.push(
+    paragraph(
+      `With m = ${fwe.m} ${fwe.m === 1 ? "comparison" : "comparisons"}${vsControl ? ` against ${study.controlLevel}` : ""}, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwe.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
+      "results",
+    ),
+  );
 
   if (study.context !== "general") blocks.push({ type: "caution", text: CAUTION });
 
