@@ -4,12 +4,13 @@ import type { Actor } from "../../http/actor.js";
 import { HttpError } from "../../http/errors.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { loadEditableStudy } from "../studies/study.access.js";
-import type { Study } from "../studies/study.entity.js";
+import { Study } from "../studies/study.entity.js";
 import { Dataset } from "./dataset.entity.js";
 import { runTask } from "../../workers/task-pool.js";
 import { guessColumns, type ColumnChoice } from "./extract-groups.js";
 import { safeFileName } from "./upload-middleware.js";
 import { inTransaction } from "../../db/in-transaction.js";
+import { pauseAt } from "../../db/pause-points.js";
 
 export interface UploadedFile {
   originalname: string;
@@ -69,7 +70,10 @@ export async function storeDataset(
     );
   }
   const sha256 = createHash("sha256").update(file.buffer).digest("hex");
+  await pauseAt("dataset.before-store");
   const dataset = await inTransaction(ds, async (tx) => {
+    // Checked again inside the write: a submit or approval that landed during parsing wins.
+    await loadEditableStudy(tx, studyId, user);
     const repo = tx.getRepository(Dataset);
     const last = await repo.findOne({
       where: { studyId },
@@ -94,6 +98,8 @@ export async function storeDataset(
       uploadedAt: new Date(),
     });
     const saved = await repo.save(row);
+    // A new upload becomes the active version (an earlier one can be made active again).
+    await tx.getRepository(Study).update({ id: studyId }, { activeDatasetId: saved.id });
     await recordAudit(tx, actor, {
       action: "dataset.uploaded",
       studyId,

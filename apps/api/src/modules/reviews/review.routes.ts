@@ -9,6 +9,7 @@ import { AuditEvent } from "../audit/audit-event.entity.js";
 import { loadReadableStudy } from "../studies/study.access.js";
 import { Study } from "../studies/study.entity.js";
 import { studyDto } from "../studies/study.service.js";
+import { statusOf } from "../studies/study-status-records.js";
 import { ReviewComment } from "./review-comment.entity.js";
 import { ReviewRound } from "./review-round.entity.js";
 import { approveSchema, requestChangesSchema, submitSchema } from "./review.schema.js";
@@ -101,6 +102,7 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
             .find({ where: { studyId: study.id }, order: { id: "ASC" } });
           const approval = await verifyApproval(ds, study.id);
           res.json({
+            progress: await statusOf(ds, study),
             rounds: rounds.map((r) => ({
               id: r.id,
               round: r.round,
@@ -175,6 +177,7 @@ export function reviewQueueRoutes(ds: DataSource): RouteSpec[] {
                 chosenTest: analysis.chosenTest,
                 override: !!analysis.overrideJustification,
                 daysWaiting: Math.floor((Date.now() - new Date(round.submittedAt).getTime()) / DAY_MS),
+                progress: await statusOf(ds, s),
               };
             }),
           );

@@ -3,6 +3,7 @@ import { presentDataset } from "../datasets/dataset.presenter.js";
 import { missingDesignAnswer, outOfScopeReason } from "./design.js";
 import { comparisonsOf, matchedPosthoc, plannedTest } from "./plan.js";
 import type { Study } from "./study.entity.js";
+import type { StudyStatus } from "./study-status.js";
 
 const person = (u: { id: number; displayName: string } | null | undefined) =>
   u ? { id: u.id, displayName: u.displayName } : null;
@@ -10,7 +11,13 @@ const person = (u: { id: number; displayName: string } | null | undefined) =>
 /** The study as the API sends it, with what the web app needs to draw the trail of steps. */
 export function presentStudy(
   s: Study,
-  extras: { datasetCount: number; latestDataset: Dataset | null; latestAnalysisId: number | null },
+  extras: {
+    datasetCount: number;
+    latestDataset: Dataset | null;
+    latestAnalysisId: number | null;
+    activeDataset: Dataset | null;
+    progress: StudyStatus;
+  },
 ) {
   const test = plannedTest(s.plan, s.design);
   const comparisons = comparisonsOf(s.design);
@@ -44,6 +51,10 @@ export function presentStudy(
     datasetCount: extras.datasetCount,
     latestDataset: extras.latestDataset ? presentDataset(extras.latestDataset, s) : null,
     latestAnalysisId: extras.latestAnalysisId,
+    /** the version analyses and submissions use (chosen with "make active", else the newest) */
+    activeDataset: extras.activeDataset ? presentDataset(extras.activeDataset, s) : null,
+    /** the one status every page, list, queue and e-mail shows (study-status.ts) */
+    progress: extras.progress,
   };
 }
 
