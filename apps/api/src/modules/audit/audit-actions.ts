@@ -9,6 +9,7 @@ export const AUDIT_ACTIONS = [
   "study.plan-saved",
   "study.plan-locked",
   "dataset.uploaded",
+  "dataset.activated",
   "analysis.run",
   "analysis.override",
   "study.submitted",

@@ -10,6 +10,8 @@ import { Dataset } from "./dataset.entity.js";
 import { presentDataset } from "./dataset.presenter.js";
 import { columnChoiceSchema } from "./dataset.schema.js";
 import { loadDatasetForAnalysis, previewUpload, storeDataset } from "./dataset.service.js";
+import { activateDataset } from "./activate-dataset.js";
+import { parseLevelMap } from "./match-plan.js";
 import { singleFileUpload } from "./upload-middleware.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
@@ -46,6 +48,7 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
             Number(req.params.id),
             req.file!,
             choice,
+            parseLevelMap((req.body as Record<string, unknown>).levelMap),
           );
           res.status(201).json({ dataset: presentDataset(dataset, study) });
         },
@@ -63,6 +66,23 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
             .getRepository(Dataset)
             .find({ where: { studyId: study.id }, order: { version: "DESC" } });
           res.json({ datasets: rows.map((d) => presentDataset(d, study)) });
+        },
+      ],
+    },
+    {
+      method: "post",
+      path: "/:id/datasets/:datasetId/activate",
+      policy: ANALYST,
+      summary: "Make a dataset version the active one again (draft only)",
+      handlers: [
+        async (req, res) => {
+          const { dataset, study } = await activateDataset(
+            ds,
+            actorOf(req),
+            Number(req.params.id),
+            Number(req.params.datasetId),
+          );
+          res.json({ dataset: presentDataset(dataset, study) });
         },
       ],
     },

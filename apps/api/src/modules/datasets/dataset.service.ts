@@ -11,6 +11,7 @@ import { guessColumns, type ColumnChoice } from "./extract-groups.js";
 import { safeFileName } from "./upload-middleware.js";
 import { inTransaction } from "../../db/in-transaction.js";
 import { pauseAt } from "../../db/pause-points.js";
+import { applyLevelMap, levelsToRead, requirePlanMatch, type LevelMap } from "./match-plan.js";
 
 export interface UploadedFile {
   originalname: string;
@@ -44,6 +45,7 @@ export async function storeDataset(
   studyId: number,
   file: UploadedFile,
   choice: ColumnChoice,
+  levelMap: LevelMap = {},
 ): Promise<{ dataset: Dataset; study: Study }> {
   const user = actor.user;
   const study = await loadEditableStudy(ds, studyId, user);
@@ -55,12 +57,14 @@ export async function storeDataset(
     );
   const fileName = safeFileName(file.originalname);
   // Parsing a large file is CPU work: it runs off the request thread.
-  const { data, report, format } = await runTask("extractTask", {
+  const extracted = await runTask("extractTask", {
     fileName,
     bytes: file.buffer,
     choice,
-    levels: study.levels,
+    levels: levelsToRead(study.levels, levelMap),
   });
+  const { format } = extracted;
+  const { data, report } = applyLevelMap(extracted.data, extracted.report, study.levels, levelMap);
   if (!report.usable) {
     throw new HttpError(
       422,
@@ -69,6 +73,7 @@ export async function storeDataset(
       { report },
     );
   }
+  requirePlanMatch(report, study.levels, levelMap);
   const sha256 = createHash("sha256").update(file.buffer).digest("hex");
   await pauseAt("dataset.before-store");
   const dataset = await inTransaction(ds, async (tx) => {
