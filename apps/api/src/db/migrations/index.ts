@@ -3,6 +3,7 @@ import { CreateStudiesDatasetsAnalyses1764630000000 } from "./1764630000000-crea
 import { CreateAuditEvents1764633600000 } from "./1764633600000-create-audit-events.js";
 import { CreateReviewMailPeople1764637200000 } from "./1764637200000-create-review-mail-people.js";
 import { AddActiveDataset1764700000000 } from "./1764700000000-add-active-dataset.js";
+import { CreateReviewReplies1764700000001 } from "./1764700000001-create-review-replies.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   CreateAuditEvents1764633600000,
   CreateReviewMailPeople1764637200000,
   AddActiveDataset1764700000000,
+  CreateReviewReplies1764700000001,
 ];

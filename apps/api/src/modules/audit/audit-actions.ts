@@ -15,6 +15,7 @@ export const AUDIT_ACTIONS = [
   "study.submitted",
   "study.approved",
   "study.changes-requested",
+  "study.comment-answered",
   "invitation.sent",
   "invitation.accepted",
   "user.role-changed",

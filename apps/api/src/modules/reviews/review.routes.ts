@@ -15,9 +15,38 @@ import { ReviewRound } from "./review-round.entity.js";
 import { approveSchema, requestChangesSchema, submitSchema } from "./review.schema.js";
 import { approve, requestChanges, submitForReview, verifyApproval } from "./review.service.js";
 import { Signature } from "./signature.entity.js";
+import { ReviewReply } from "./review-reply.entity.js";
+import { replySchema, replyToComment } from "./comment-replies.js";
+import { roundChanges, type RoundRecord } from "./round-changes.js";
+import { Dataset } from "../datasets/dataset.entity.js";
 
 const REVIEWERS = policy.roles("reviewer", "admin");
 const DAY_MS = 86_400_000;
+
+/** What each round froze, for the "what changed" summary (one read of analyses and versions). */
+async function roundRecords(ds: DataSource, rounds: ReviewRound[]): Promise<RoundRecord[]> {
+  if (rounds.length < 2) return [];
+  const analyses = await ds.getRepository(Analysis).find({
+    where: rounds.map((r) => ({ id: r.analysisId })),
+    select: { id: true, chosenTest: true, posthocMethod: true, overrideJustification: true, result: true },
+  });
+  const datasets = await ds.getRepository(Dataset).find({
+    where: rounds.map((r) => ({ id: r.datasetId })),
+    select: { id: true, version: true },
+  });
+  return rounds.map((r) => {
+    const a = analyses.find((x) => x.id === r.analysisId)!;
+    return {
+      round: r.round,
+      analysisId: r.analysisId,
+      datasetVersion: datasets.find((d) => d.id === r.datasetId)?.version ?? 0,
+      chosenTest: a.chosenTest,
+      posthocMethod: a.posthocMethod,
+      deviation: a.overrideJustification,
+      result: a.result,
+    };
+  });
+}
 
 export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
   const reply = async (id: number, res: import("express").Response) =>
@@ -75,6 +104,32 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
       ],
     },
     {
+      method: "post",
+      path: "/:id/comments/:commentId/replies",
+      policy: policy.roles("analyst"),
+      summary: "Reply to a reviewer's comment (the study's analyst, after changes were requested)",
+      handlers: [
+        async (req, res) => {
+          const reply = await replyToComment(
+            ds,
+            actorOf(req),
+            Number(req.params.id),
+            Number(req.params.commentId),
+            parseBody(replySchema, req.body).body,
+          );
+          res.status(201).json({
+            reply: {
+              id: reply.id,
+              commentId: reply.commentId,
+              body: reply.body,
+              author: { id: reply.author.id, displayName: reply.author.displayName },
+              createdAt: reply.createdAt,
+            },
+          });
+        },
+      ],
+    },
+    {
       method: "get",
       path: "/:id/history",
       policy: policy.roles("analyst", "reviewer", "writer", "admin"),
@@ -94,6 +149,16 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
                 .orderBy("c.id")
                 .getMany()
             : [];
+          const replies = comments.length
+            ? await ds
+                .getRepository(ReviewReply)
+                .createQueryBuilder("r")
+                .leftJoinAndSelect("r.author", "a")
+                .where("r.comment_id IN (:...ids)", { ids: comments.map((c) => c.id) })
+                .orderBy("r.id")
+                .getMany()
+            : [];
+          const records = await roundRecords(ds, rounds);
           const signatures = await ds
             .getRepository(Signature)
             .find({ where: { studyId: study.id }, order: { id: "ASC" } });
@@ -103,7 +168,7 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
           const approval = await verifyApproval(ds, study.id);
           res.json({
             progress: await statusOf(ds, study),
-            rounds: rounds.map((r) => ({
+            rounds: rounds.map((r, i) => ({
               id: r.id,
               round: r.round,
               analysisId: r.analysisId,
@@ -121,7 +186,17 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
                   body: c.body,
                   author: { id: c.author.id, displayName: c.author.displayName },
                   createdAt: c.createdAt,
+                  replies: replies
+                    .filter((x) => x.commentId === c.id)
+                    .map((x) => ({
+                      id: x.id,
+                      body: x.body,
+                      author: { id: x.author.id, displayName: x.author.displayName },
+                      createdAt: x.createdAt,
+                    })),
                 })),
+              // From round 2 on: what changed since the round before (data, test, deviation, key numbers).
+              changes: i > 0 ? roundChanges(records[i - 1]!, records[i]!) : null,
               signature:
                 signatures
                   .filter((s) => s.roundId === r.id)
