@@ -1,9 +1,22 @@
+import { familyWiseError } from "@waymark/stats";
 import type { Dataset } from "../datasets/dataset.entity.js";
 import { presentDataset } from "../datasets/dataset.presenter.js";
 import { missingDesignAnswer, outOfScopeReason } from "./design.js";
 import { comparisonsOf, matchedPosthoc, plannedTest } from "./plan.js";
 import type { Study } from "./study.entity.js";
 import type { StudyStatus } from "./study-status.js";
+
+function plannedFamilyWise(k: number, alpha: number, comparisons: "all-pairs" | "vs-control") {
+  if (k < 2) return null;
+  const f = familyWiseError({ k, alpha, comparisons });
+  return {
+    m: f.m,
+    comparisons,
+    alpha: f.alpha,
+    fwerIndependent: f.fwerIndependent,
+    bonferroniAlpha: f.perComparisonAlphaBonferroni,
+  };
+}
 
 const person = (u: { id: number; displayName: string } | null | undefined) =>
   u ? { id: u.id, displayName: u.displayName } : null;
@@ -45,6 +58,8 @@ export function presentStudy(
       plannedTest: test,
       plannedPosthoc: matchedPosthoc(test, comparisons),
       comparisons,
+      /** the family-wise error of the comparisons this plan makes (k − 1 against a control, else all pairs) */
+      familyWise: plannedFamilyWise(s.levels.length, s.plan.alpha, comparisons),
       lockedAt: s.planLockedAt,
       lockedBy: person(s.planLockedBy),
     },
