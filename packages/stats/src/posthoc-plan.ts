@@ -96,7 +96,8 @@ export function runPosthoc(
     ),
   );
   const sortedByName = new Map(sample.groups.map((g) => [g.name, sortedValues(g)]));
-  const dunnPairs = withShiftIntervals(pairsOf(dunnResult), sortedByName, alpha);
+  const shiftEstimates = new Map<string, number>();
+  const dunnPairs = withShiftIntervals(pairsOf(dunnResult), sortedByName, alpha, shiftEstimates);
 
   const posthoc: Record<string, unknown> = {
     tukey,
@@ -120,6 +121,7 @@ export function runPosthoc(
         withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] })),
         sortedByName,
         alpha,
+        shiftEstimates,
       );
     } else dunnVsControl = dunnPairs;
     posthoc.control = {

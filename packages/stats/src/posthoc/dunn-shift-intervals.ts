@@ -1,5 +1,5 @@
 import type { Unavailable } from "../types/group-summary.js";
-import { hodgesLehmannShift } from "./hodges-lehmann-shift.js";
+import { hodgesLehmannEstimate, hodgesLehmannShift } from "./hodges-lehmann-shift.js";
 
 /**
  * Adds to each of Dunn's pairs the Hodges–Lehmann shift of a over b with its
@@ -19,6 +19,8 @@ export function withShiftIntervals(
   pairs: object[] | Unavailable,
   sortedByName: ReadonlyMap<string, Float64Array>,
   alpha: number,
+  /** shift estimates by "a\u0000b", shared between the all-pairs and the against-control families */
+  estimates: Map<string, number> = new Map(),
 ): object[] | Unavailable {
   if (!Array.isArray(pairs) || pairs.length === 0) return pairs;
   const level = 1 - alpha / pairs.length;
@@ -26,7 +28,10 @@ export function withShiftIntervals(
     const a = sortedByName.get(p.a);
     const b = sortedByName.get(p.b);
     if (!a || !b || a.length === 0 || b.length === 0) return p;
-    const hl = hodgesLehmannShift(a, b, level);
+    const key = `${p.a}\u0000${p.b}`;
+    const estimate = estimates.get(key) ?? hodgesLehmannEstimate(a, b);
+    estimates.set(key, estimate);
+    const hl = hodgesLehmannShift(a, b, level, { estimate });
     if (!hl.intervalAvailable)
       return {
         ...p,

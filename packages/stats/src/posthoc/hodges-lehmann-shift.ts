@@ -1,6 +1,6 @@
 import { normalQuantile } from "../distributions/normal.js";
 import { MANN_WHITNEY_EXACT_BELOW, mannWhitneyLowerTail } from "./mann-whitney-null.js";
-import { pairwiseDifferenceOrder } from "./pairwise-difference-order.js";
+import { pairwiseDifferenceAfter, pairwiseDifferenceOrder } from "./pairwise-difference-order.js";
 
 export type HodgesLehmannShift = {
   /** median of the n_a·n_b differences a_i − b_j */
@@ -45,17 +45,14 @@ export function hodgesLehmannShift(
   a: Float64Array,
   b: Float64Array,
   level: number,
-  /** Σ(t³ − t) over tied runs in the two groups pooled, when the caller knows it */
-  pooledTieSum?: number,
+  /** the estimate and Σ(t³ − t) over tied runs of the two groups pooled, when the caller has them */
+  known?: { estimate?: number; pooledTieSum?: number },
 ): HodgesLehmannShift {
   const n = a.length;
   const m = b.length;
   const nm = n * m;
-  const estimate =
-    nm % 2 === 1
-      ? pairwiseDifferenceOrder(a, b, (nm + 1) / 2)
-      : (pairwiseDifferenceOrder(a, b, nm / 2) + pairwiseDifferenceOrder(a, b, nm / 2 + 1)) / 2;
-  const tieSum = pooledTieSum ?? tieSumOf(a, b);
+  const estimate = known?.estimate ?? hodgesLehmannEstimate(a, b);
+  const tieSum = known?.pooledTieSum ?? tieSumOf(a, b);
   const tail = (1 - level) / 2;
   let c: number;
   let achieved: number;
@@ -94,6 +91,14 @@ export function hodgesLehmannShift(
     achievedLevel: achieved,
     intervalMethod,
   };
+}
+
+/** The Hodges–Lehmann shift alone: the median of the n·m differences a_i − b_j. */
+export function hodgesLehmannEstimate(a: Float64Array, b: Float64Array): number {
+  const nm = a.length * b.length;
+  if (nm % 2 === 1) return pairwiseDifferenceOrder(a, b, (nm + 1) / 2);
+  const lowMiddle = pairwiseDifferenceOrder(a, b, nm / 2);
+  return (lowMiddle + pairwiseDifferenceAfter(a, b, nm / 2, lowMiddle)) / 2;
 }
 
 /** Σ(t³ − t) over runs of equal values in the two sorted samples pooled (merge, O(n + m)). */

@@ -8,7 +8,7 @@
  * ascending x the qualifying y's form a suffix whose start only moves right). Each round
  * draws a fixed-seed sample of the differences inside the bracket, takes two sample order
  * statistics just below and above the target's expected position as the new bracket, and
- * keeps each side only if its count confirms it; once the bracket holds at most 2(n + m)
+ * keeps each side only if its count confirms it; once the bracket holds at most max(4096, (n + m)/64)
  * differences they are listed and the one needed is picked. A round that makes no progress
  * (heavy ties) checks whether the next distinct difference below hi falls short of r (then hi is the
  * answer) and otherwise moves hi down to it. Differences are compared exactly as computed
@@ -32,7 +32,8 @@ export function pairwiseDifferenceOrder(x: Float64Array, y: Float64Array, r: num
   let below = countAtMost(x, y, lo, startLo);
   if (r <= below) return lo; // r = 1, or the smallest difference repeated
   let upTo = countAtMost(x, y, hi, startHi);
-  const budget = 2 * (n + m);
+  // Listing and sorting is the costly step; a few more cheap rounds keep the list short.
+  const budget = Math.max(4096, (n + m) >> 6);
   const prefix = new Float64Array(n + 1);
   const SAMPLE = 8192;
   let seed = 0x2545f491;
@@ -106,6 +107,16 @@ export function pairwiseDifferenceOrder(x: Float64Array, y: Float64Array, r: num
   return inside[r - below - 1] as number;
 }
 
+/**
+ * The (r + 1)-th smallest difference given the r-th, d_r: d_r again when it is repeated past
+ * rank r, else the smallest difference above it. Two passes, O(n + m); the Hodges–Lehmann
+ * median of an even count needs both middle ranks.
+ */
+export function pairwiseDifferenceAfter(x: Float64Array, y: Float64Array, r: number, dr: number): number {
+  const atMost = countAtMost(x, y, dr, new Int32Array(x.length));
+  return atMost >= r + 1 ? dr : smallestAbove(x, y, dr);
+}
+
 /** #{x_i − y_j ≤ d}; writes each row's first qualifying j into start. O(n + m). */
 function countAtMost(x: Float64Array, y: Float64Array, d: number, start: Int32Array): number {
   const n = x.length;
@@ -132,6 +143,21 @@ function largestBelow(x: Float64Array, y: Float64Array, d: number): number {
     if (j === y.length) break;
     const v = xi - (y[j] as number);
     if (v > best) best = v;
+  }
+  return best;
+}
+
+/** The smallest difference x_i − y_j greater than d (two pointers, O(n + m)). */
+function smallestAbove(x: Float64Array, y: Float64Array, d: number): number {
+  let best = Infinity;
+  let j = y.length - 1;
+  // For descending x the largest y_j with x_i − y_j > d only moves down.
+  for (let i = x.length - 1; i >= 0; i--) {
+    const xi = x[i] as number;
+    while (j >= 0 && !(xi - (y[j] as number) > d)) j--;
+    if (j < 0) break;
+    const v = xi - (y[j] as number);
+    if (v < best) best = v;
   }
   return best;
 }

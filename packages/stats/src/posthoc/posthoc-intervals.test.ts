@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { hodgesLehmannShift } from "./hodges-lehmann-shift.js";
 import { mannWhitneyLowerTail } from "./mann-whitney-null.js";
-import { pairwiseDifferenceOrder } from "./pairwise-difference-order.js";
+import { pairwiseDifferenceAfter, pairwiseDifferenceOrder } from "./pairwise-difference-order.js";
 import { welchControlIntervals } from "./welch-control-intervals.js";
 
 /**
@@ -135,8 +135,11 @@ describe("order statistics of pairwise differences", () => {
       let k = 0;
       for (const a of x) for (const b of y) all[k++] = a - b;
       all.sort();
-      for (const r of [1, 2, 1000, 123457, 315000, 315001, 500000, all.length - 1, all.length])
-        expect(pairwiseDifferenceOrder(x, y, r)).toBe(all[r - 1]);
+      for (const r of [1, 2, 1000, 123457, 315000, 315001, 500000, all.length - 1, all.length]) {
+        const d = pairwiseDifferenceOrder(x, y, r);
+        expect(d).toBe(all[r - 1]);
+        if (r < all.length) expect(pairwiseDifferenceAfter(x, y, r, d)).toBe(all[r]);
+      }
     }
   });
 });
