@@ -50,3 +50,20 @@ describe("post-hoc table intervals", () => {
     expect(JSON.stringify(table.rows)).not.toMatch(/—|NaN|undefined/);
   });
 });
+
+describe("a pair the method cannot compute", () => {
+  it("is explained in a note, with no dashes in its row (Games–Howell, two constant groups)", () => {
+    const r = analyze({
+      groups: [
+        { name: "A", values: [5, 5, 5] },
+        { name: "B", values: [7, 7, 7] },
+        { name: "C", values: [4, 6, 8, 5] },
+      ],
+    }) as unknown as { posthoc: Record<string, unknown> };
+    const table = posthocTable(r.posthoc, "welch", false, "", 0.05);
+    if ("reason" in table) throw new Error(table.reason);
+    expect(table.rows[0]![1]).toBe("not computed (note 1)");
+    expect(table.notes[0]).toMatch(/^A vs B was not computed: .*0\/0/);
+    expect(JSON.stringify(table.rows)).not.toMatch(/—|NaN|undefined/);
+  });
+});

@@ -46,7 +46,8 @@ function intervalCell(p: Pair, notes: string[]): string {
   const lower = num(p.lower);
   const upper = num(p.upper);
   if (lower !== null && upper !== null) return `[${formatStat(lower)}, ${formatStat(upper)}]`;
-  const reason = typeof p.intervalReason === "string" ? p.intervalReason : "the interval was not computed";
+  const stated = p.intervalReason ?? p.reason;
+  const reason = typeof stated === "string" ? stated : "the interval was not computed";
   notes.push(`No interval for ${p.a} vs ${p.b}: ${reason}.`);
   return `none (note ${notes.length})`;
 }
@@ -70,32 +71,46 @@ export function posthocTable(
   }
   const u = unit ? ` (${unit})` : "";
   const notes: string[] = [];
+  /** A pair the method could not compute says why in a note instead of a row of dashes. */
+  const unavailable = (p: Pair, label: string, width: number): string[] | null => {
+    if (p.available !== false) return null;
+    notes.push(
+      `${p.a} vs ${p.b} was not computed: ${typeof p.reason === "string" ? p.reason : "no reason was recorded"}.`,
+    );
+    return [label, `not computed (note ${notes.length})`, ...Array<string>(width - 2).fill("")];
+  };
   const ci = `Simultaneous ${percent(1 - alpha)} CI`;
   if (chosenTest === "kruskal-wallis") {
     return {
       header: ["Comparison", `Shift${u}`, ci, "z", "p (unadjusted)", "Adjusted p", "Rank-biserial r"],
       notes,
-      rows: pairs.map((p) => [
-        `${p.a} vs ${p.b}`,
-        fmt(p.shift),
-        intervalCell(p, notes),
-        fmt(p.z),
-        fmt(p.p, (v) => formatP(v).replace("= ", "")),
-        fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
-        fmt(effect(p.rankBiserial, "r"), (v) => formatUnit(v)),
-      ]),
+      rows: pairs.map(
+        (p) =>
+          unavailable(p, `${p.a} vs ${p.b}`, 7) ?? [
+            `${p.a} vs ${p.b}`,
+            fmt(p.shift),
+            intervalCell(p, notes),
+            fmt(p.z),
+            fmt(p.p, (v) => formatP(v).replace("= ", "")),
+            fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
+            fmt(effect(p.rankBiserial, "r"), (v) => formatUnit(v)),
+          ],
+      ),
     };
   }
   return {
     header: ["Comparison", `Difference${u}`, ci, "Adjusted p", "Hedges' g"],
     notes,
-    rows: pairs.map((p) => [
-      `${p.a} − ${p.b}`,
-      fmt(p.diff),
-      intervalCell(p, notes),
-      fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
-      fmt(effect(p.hedgesG, "g")),
-    ]),
+    rows: pairs.map(
+      (p) =>
+        unavailable(p, `${p.a} − ${p.b}`, 5) ?? [
+          `${p.a} − ${p.b}`,
+          fmt(p.diff),
+          intervalCell(p, notes),
+          fmt(p.pAdj, (v) => formatP(v).replace("= ", "")),
+          fmt(effect(p.hedgesG, "g")),
+        ],
+    ),
   };
 }
 
