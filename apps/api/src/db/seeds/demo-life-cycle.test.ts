@@ -56,5 +56,13 @@ describe("demo data on first sign-in", () => {
       "results",
     ]);
     expect(history.progress.detail).toMatch(/^The reviewer sent round 1 back with 3 comments\./);
+    // The study itself carries them, so each shows at its step.
+    const study = (await who.analyst.get(`/api/studies/${back.id}`).expect(200)).body.study;
+    expect(study.openReview.comments.map((c: { step: string | null }) => c.step)).toEqual([
+      null,
+      "data",
+      "results",
+    ]);
+    expect(study.progress.label).toBe("Changes requested");
   });
 });

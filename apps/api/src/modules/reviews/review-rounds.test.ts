@@ -39,6 +39,9 @@ describe("review rounds people can work in", () => {
       .post(`/api/studies/${studyId}/comments/${dataComment.id}/replies`)
       .send({ body: "It was mistyped; version 2 drops that row." })
       .expect(201);
+    const open = (await analyst.get(`/api/studies/${studyId}`).expect(200)).body.study.openReview;
+    expect(open.round).toBe(1);
+    expect(open.comments.find((c: { step: string }) => c.step === "data").replies).toHaveLength(1);
 
     const v2 = await analyst
       .post(`/api/studies/${studyId}/datasets`)

@@ -3,6 +3,7 @@ import { Analysis } from "../analyses/analysis.entity.js";
 import { Dataset } from "../datasets/dataset.entity.js";
 import { ReviewComment } from "../reviews/review-comment.entity.js";
 import { ReviewRound } from "../reviews/review-round.entity.js";
+import { ReviewReply } from "../reviews/review-reply.entity.js";
 import { missingDesignAnswer, outOfScopeReason } from "./design.js";
 import type { Study } from "./study.entity.js";
 import { studyStatus, type StudyStatus, type StudyStatusRecords } from "./study-status.js";
@@ -72,4 +73,38 @@ export async function loadStatusRecords(
 /** The study's one status, read from the database. */
 export async function statusOf(db: DataSource | EntityManager, study: Study): Promise<StudyStatus> {
   return studyStatus(await loadStatusRecords(db, study));
+}
+
+/**
+ * The comments of the round that sent the study back, with the analyst's replies, so each can
+ * be shown at the step it concerns; null unless the latest round requested changes.
+ */
+export async function openReviewComments(db: DataSource | EntityManager, studyId: number) {
+  const round = await db.getRepository(ReviewRound).findOne({ where: { studyId }, order: { round: "DESC" } });
+  if (!round || round.decision !== "changes_requested") return null;
+  const comments = await db
+    .getRepository(ReviewComment)
+    .find({ where: { roundId: round.id }, order: { id: "ASC" } });
+  const replies = comments.length
+    ? await db.getRepository(ReviewReply).find({
+        where: comments.map((c) => ({ commentId: c.id })),
+        order: { id: "ASC" },
+      })
+    : [];
+  const person = (u: { id: number; displayName: string }) => ({ id: u.id, displayName: u.displayName });
+  return {
+    round: round.round,
+    decidedAt: round.decidedAt,
+    decidedBy: round.decidedBy ? person(round.decidedBy) : null,
+    comments: comments.map((c) => ({
+      id: c.id,
+      step: c.step,
+      body: c.body,
+      author: person(c.author),
+      createdAt: c.createdAt,
+      replies: replies
+        .filter((r) => r.commentId === c.id)
+        .map((r) => ({ id: r.id, body: r.body, author: person(r.author), createdAt: r.createdAt })),
+    })),
+  };
 }

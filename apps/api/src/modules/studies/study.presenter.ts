@@ -5,6 +5,9 @@ import { missingDesignAnswer, outOfScopeReason } from "./design.js";
 import { comparisonsOf, matchedPosthoc, plannedTest } from "./plan.js";
 import type { Study } from "./study.entity.js";
 import type { StudyStatus } from "./study-status.js";
+import type { openReviewComments } from "./study-status-records.js";
+
+type OpenReview = Awaited<ReturnType<typeof openReviewComments>>;
 
 function plannedFamilyWise(k: number, alpha: number, comparisons: "all-pairs" | "vs-control") {
   if (k < 2) return null;
@@ -30,6 +33,7 @@ export function presentStudy(
     latestAnalysisId: number | null;
     activeDataset: Dataset | null;
     progress: StudyStatus;
+    openReview?: OpenReview;
   },
 ) {
   const test = plannedTest(s.plan, s.design);
@@ -70,6 +74,8 @@ export function presentStudy(
     activeDataset: extras.activeDataset ? presentDataset(extras.activeDataset, s) : null,
     /** the one status every page, list, queue and e-mail shows (study-status.ts) */
     progress: extras.progress,
+    /** after "request changes": that round's comments (each with its step) and the analyst's replies */
+    openReview: extras.openReview ?? null,
   };
 }
 

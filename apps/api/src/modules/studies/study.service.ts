@@ -11,7 +11,7 @@ import { DEFAULT_PLAN, type PlanSettings } from "./plan.js";
 import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
 import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
-import { loadStatusRecords } from "./study-status-records.js";
+import { loadStatusRecords, openReviewComments } from "./study-status-records.js";
 import { studyStatus } from "./study-status.js";
 import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
 import { inTransaction } from "../../db/in-transaction.js";
@@ -40,6 +40,7 @@ export async function studyDto(ds: DataSource, study: Study) {
     latestAnalysisId: latestAnalysis?.id ?? null,
     activeDataset: records.activeDatasetRow,
     progress: studyStatus(records),
+    openReview: await openReviewComments(ds, study.id),
   });
 }
 
