@@ -12,6 +12,7 @@ import { columnChoiceSchema } from "./dataset.schema.js";
 import { loadDatasetForAnalysis, previewUpload, storeDataset } from "./dataset.service.js";
 import { activateDataset } from "./activate-dataset.js";
 import { parseLevelMap } from "./match-plan.js";
+import { activeDataset } from "../studies/study-status-records.js";
 import { singleFileUpload } from "./upload-middleware.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
@@ -65,7 +66,11 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
           const rows = await ds
             .getRepository(Dataset)
             .find({ where: { studyId: study.id }, order: { version: "DESC" } });
-          res.json({ datasets: rows.map((d) => presentDataset(d, study)) });
+          const active = await activeDataset(ds, study);
+          // `active`: the version analyses and submissions use (see studies/study-status-records.ts).
+          res.json({
+            datasets: rows.map((d) => ({ ...presentDataset(d, study), active: d.id === active?.id })),
+          });
         },
       ],
     },

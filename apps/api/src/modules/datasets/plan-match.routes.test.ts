@@ -76,6 +76,11 @@ describe("any version can be made active again", () => {
     await analyst.post(`/api/studies/${studyId}/datasets/${v1}/activate`).expect(200);
     s = (await analyst.get(`/api/studies/${studyId}`).expect(200)).body.study;
     expect(s.activeDataset.id).toBe(v1);
+    const listed = (await analyst.get(`/api/studies/${studyId}/datasets`).expect(200)).body.datasets;
+    expect(listed.map((d: { version: number; active: boolean }) => [d.version, d.active])).toEqual([
+      [2, false],
+      [1, true],
+    ]);
     expect(s.progress.state).toBe("ready-to-submit");
     const sub = await analyst.post(`/api/studies/${studyId}/submit`).send({}).expect(200);
     expect(sub.body.study.progress.detail).toBe(
