@@ -57,11 +57,17 @@ export function reviewRequestedMessage(
   analyst: Person,
   baseUrl: string,
   status?: StudyStatus,
+  /** from round 2: what changed since the last round, one sentence each */
+  changes?: string[],
 ): MailContent {
   return compose(
     reviewer,
     `review requested for "${study.title}"`,
-    [`${analyst.displayName} submitted "${study.title}" for review.`, ...statusParagraph(status)],
+    [
+      `${analyst.displayName} submitted "${study.title}" for review.`,
+      ...(changes?.length ? [`What changed since the last round: ${changes.join(" ")}`] : []),
+      ...statusParagraph(status),
+    ],
     {
       href: `${baseUrl}/reviews/${study.id}`,
       label: "Open the review",

@@ -3,6 +3,7 @@ import { signedIn } from "../../test-support/agents.js";
 import { YIELD_CSV, analysedStudy } from "../../test-support/analysed-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
 import { roundChanges, type RoundRecord } from "./round-changes.js";
+import { OutboxMessage } from "../mail/outbox-message.entity.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let analyst: Awaited<ReturnType<typeof signedIn>>;
@@ -75,6 +76,12 @@ describe("review rounds people can work in", () => {
       after: "14",
     });
     expect(history.events.map((e: { action: string }) => e.action)).toContain("study.comment-answered");
+    // The reviewers' e-mail for round 2 says what changed, and carries the one status.
+    const mail = await t.ds
+      .getRepository(OutboxMessage)
+      .find({ where: { to: "reviewer@waymark.test" }, order: { id: "DESC" }, take: 1 });
+    expect(mail[0]!.text).toContain("What changed since the last round: Data version 1 → 2.");
+    expect(mail[0]!.text).toContain("Status: Awaiting review. Round 2 was submitted with analysis");
   });
 });
 

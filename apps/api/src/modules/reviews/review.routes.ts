@@ -17,36 +17,11 @@ import { approve, requestChanges, submitForReview, verifyApproval } from "./revi
 import { Signature } from "./signature.entity.js";
 import { ReviewReply } from "./review-reply.entity.js";
 import { replySchema, replyToComment } from "./comment-replies.js";
-import { roundChanges, type RoundRecord } from "./round-changes.js";
-import { Dataset } from "../datasets/dataset.entity.js";
+import { roundChanges } from "./round-changes.js";
+import { roundRecords } from "./round-records.js";
 
 const REVIEWERS = policy.roles("reviewer", "admin");
 const DAY_MS = 86_400_000;
-
-/** What each round froze, for the "what changed" summary (one read of analyses and versions). */
-async function roundRecords(ds: DataSource, rounds: ReviewRound[]): Promise<RoundRecord[]> {
-  if (rounds.length < 2) return [];
-  const analyses = await ds.getRepository(Analysis).find({
-    where: rounds.map((r) => ({ id: r.analysisId })),
-    select: { id: true, chosenTest: true, posthocMethod: true, overrideJustification: true, result: true },
-  });
-  const datasets = await ds.getRepository(Dataset).find({
-    where: rounds.map((r) => ({ id: r.datasetId })),
-    select: { id: true, version: true },
-  });
-  return rounds.map((r) => {
-    const a = analyses.find((x) => x.id === r.analysisId)!;
-    return {
-      round: r.round,
-      analysisId: r.analysisId,
-      datasetVersion: datasets.find((d) => d.id === r.datasetId)?.version ?? 0,
-      chosenTest: a.chosenTest,
-      posthocMethod: a.posthocMethod,
-      deviation: a.overrideJustification,
-      result: a.result,
-    };
-  });
-}
 
 export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
   const reply = async (id: number, res: import("express").Response) =>

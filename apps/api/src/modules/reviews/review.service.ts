@@ -20,6 +20,8 @@ import { approvalContent, contentHash } from "./approval-content.js";
 import { ReviewComment, type ReviewStep } from "./review-comment.entity.js";
 import { ReviewRound } from "./review-round.entity.js";
 import { Signature } from "./signature.entity.js";
+import { roundChanges, type RoundRecord } from "./round-changes.js";
+import { roundRecords } from "./round-records.js";
 import { inTransaction } from "../../db/in-transaction.js";
 
 const activeWithRole = (tx: EntityManager, roles: string[]) =>
@@ -111,8 +113,12 @@ export async function submitForReview(
       after: { status: "in_review", analysisId: analysis.id, datasetId: analysis.datasetId },
     });
     const status = await statusAfter(tx, studyId);
+    // From round 2 on, the reviewers hear what changed since the round they sent back.
+    const changes = last
+      ? roundChanges(...((await roundRecords(tx, [last, round])) as [RoundRecord, RoundRecord]))
+      : null;
     for (const r of await activeWithRole(tx, ["reviewer"]))
-      await enqueueMail(tx, reviewRequestedMessage(r, study, actor.user, baseUrl, status));
+      await enqueueMail(tx, reviewRequestedMessage(r, study, actor.user, baseUrl, status, changes?.summary));
   });
 }
 
