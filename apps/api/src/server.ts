@@ -12,7 +12,7 @@ async function main(): Promise<void> {
   const ds = await openDatabase(env.DATABASE_PATH);
   if (env.WAYMARK_DEMO) {
     await seedDemoUsers(ds, env.demoPassword, env.BCRYPT_COST);
-    await seedDemoStudies(ds);
+    await seedDemoStudies(ds, env.demoPassword);
   }
   const services = await startServices(ds, env);
   const { app, sessionStore } = createApp(ds, env, services);

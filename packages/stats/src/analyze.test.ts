@@ -164,7 +164,7 @@ describe("analyze", () => {
     expect(control.dunn).toHaveLength(2);
     // No planned sizes given: the cautious reading (unequal) puts a means question on Welch's ANOVA.
     expect(r.recommendation.posthoc).toBe("welch-vs-control-holm");
-    expect(r.familyWiseError).toMatchObject({ m: 3 });
+    expect(r.familyWiseError).toMatchObject({ m: 2, comparisons: "vs-control" }); // k − 1 comparisons with the control, as planned
     assertClean(r);
   });
 

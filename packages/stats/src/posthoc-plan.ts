@@ -11,6 +11,8 @@ import { dunnettTest } from "./posthoc/dunnett-test.js";
 import { gamesHowell } from "./posthoc/games-howell.js";
 import { tukeyKramer } from "./posthoc/tukey-kramer.js";
 import { welchVsControlHolm } from "./posthoc/welch-vs-control-holm.js";
+import { welchControlIntervals } from "./posthoc/welch-control-intervals.js";
+import { withShiftIntervals } from "./posthoc/dunn-shift-intervals.js";
 import { StatsInputError } from "./errors.js";
 import type { GroupSummary, Unavailable } from "./types/group-summary.js";
 import type {
@@ -35,13 +37,35 @@ function pairsOf<P>(result: Unavailable | { pairs: readonly P[] }): P[] | Unavai
   return [...(result as { pairs: readonly P[] }).pairs];
 }
 
+/** Welch t-tests against the control gain their simultaneous (Bonferroni) intervals. */
+function withWelchIntervals<P extends { a: string }>(
+  pairs: P[] | Unavailable,
+  intervals: object[] | Unavailable,
+): P[] | Unavailable {
+  if (!Array.isArray(pairs) || !Array.isArray(intervals)) return pairs;
+  const byName = new Map((intervals as { a: string }[]).map((x) => [x.a, x]));
+  return pairs.map((p): P => {
+    const i = byName.get(p.a) as Record<string, unknown> | undefined;
+    if (!i) return p;
+    if (i.available === false) return { ...p, intervalReason: i.reason };
+    return {
+      ...p,
+      lower: i.lower,
+      upper: i.upper,
+      intervalLevel: i.intervalLevel,
+      intervalAdjustment: i.intervalAdjustment,
+    };
+  });
+}
+
 /**
  * Runs the post-hoc families for analyze(): Tukey–Kramer and Games–Howell on the group
  * summaries, Dunn's rank comparisons, and, when a control is named, Dunnett, Welch t vs the
  * control with Holm, and Dunn vs the control (Dunn's pairs with the control, re-adjusted over
  * those k − 1 comparisons). Summaries are taken on the exactly centred values: every output
  * (differences, intervals, standardized effects) is shift-invariant, so large offsets cost no
- * digits. Also the family-wise error rate for the k(k − 1)/2 pairs.
+ * digits. Also the family-wise error rate of the planned comparisons (k − 1 against a control,
+ * else k(k − 1)/2 pairs).
  * Cost: O(k²) beyond the shared sums, plus Dunn's ranking.
  */
 export function runPosthoc(
@@ -74,7 +98,9 @@ export function runPosthoc(
       midranks(sample),
     ),
   );
-  const dunnPairs = pairsOf(dunnResult);
+  const sortedByName = new Map(sample.groups.map((g) => [g.name, sortedValues(g)]));
+  const shiftEstimates = new Map<string, number>();
+  const dunnPairs = withShiftIntervals(pairsOf(dunnResult), sortedByName, alpha, shiftEstimates);
 
   const posthoc: PosthocPart = {
     tukey,
@@ -92,18 +118,29 @@ export function runPosthoc(
         withControl.map((x) => x.p),
         options.adjust,
       );
-      dunnVsControl = withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] as number }));
+      dunnVsControl = withShiftIntervals(
+        withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] as number })),
+        sortedByName,
+        alpha,
+        shiftEstimates,
+      );
     } else dunnVsControl = dunnPairs;
     posthoc.control = {
       control,
       dunnett: pairsOf(attempt(() => dunnettTest(summaries, control, alpha))),
-      welchHolm: pairsOf(attempt(() => welchVsControlHolm(summaries, control, alpha))),
+      welchHolm: withWelchIntervals(
+        pairsOf(attempt(() => welchVsControlHolm(summaries, control, alpha))),
+        attempt(() => welchControlIntervals(summaries, control, alpha)),
+      ),
       dunn: dunnVsControl,
     };
   }
+  // The family the plan actually makes: k − 1 comparisons with the control, else every pair.
+  const comparisons =
+    options.comparisons === "vs-control" && control !== undefined ? "vs-control" : "all-pairs";
   const fwe = attempt(() => ({
     available: true as const,
-    ...familyWiseError({ k: sample.groups.length, alpha }),
+    ...familyWiseError({ k: sample.groups.length, alpha, comparisons }),
   }));
   return { posthoc, familyWiseError: fwe };
 }

@@ -7,6 +7,7 @@ import { ReceivedMessage } from "../modules/mail/received-message.entity.js";
 import { OrganizationSettings } from "../modules/organization/organization-settings.entity.js";
 import { ReviewComment } from "../modules/reviews/review-comment.entity.js";
 import { ReviewRound } from "../modules/reviews/review-round.entity.js";
+import { ReviewReply } from "../modules/reviews/review-reply.entity.js";
 import { Signature } from "../modules/reviews/signature.entity.js";
 import { Session } from "../modules/sessions/session.entity.js";
 import { Study } from "../modules/studies/study.entity.js";
@@ -22,6 +23,7 @@ export const entities = [
   AuditEvent,
   ReviewRound,
   ReviewComment,
+  ReviewReply,
   Signature,
   OutboxMessage,
   ReceivedMessage,

@@ -1,7 +1,17 @@
 import { StatsInputError } from "../errors.js";
 
+/** Which comparisons the plan makes: every pair, or each group against one control. */
+export type PlannedComparisons = "all-pairs" | "vs-control";
+
+/** The number of comparisons a plan makes among k groups: k − 1 against a control, k(k − 1)/2 for all pairs. */
+export function plannedComparisonCount(k: number, comparisons: PlannedComparisons): number {
+  return comparisons === "vs-control" ? k - 1 : (k * (k - 1)) / 2;
+}
+
 export interface FamilyWiseErrorResult {
   m: number;
+  /** the comparisons m counts (as planned); absent when m was given directly */
+  comparisons?: PlannedComparisons;
   alpha: number;
   /** 1 − (1 − α)^m: chance of at least one false positive over m independent tests */
   fwerIndependent: number;
@@ -17,17 +27,24 @@ export interface FamilyWiseErrorResult {
  * Family-wise error rate of m unadjusted comparisons, and the per-comparison levels that
  * hold it at α.
  *
- * In words: with k groups there are m = k(k − 1)/2 pairwise comparisons (or give m
- * directly). For m independent tests at level α the chance of one or more false positives
+ * In words: m is the number of comparisons actually planned: with k groups, k − 1 when
+ * each group is compared with a control and k(k − 1)/2 for all pairs (the default when
+ * only k is given), or m given directly. For m independent tests at level α the chance of one or more false positives
  * is 1 − (1 − α)^m; Boole's inequality bounds it by m·α under any dependence. Testing each
  * at α/m (Bonferroni) or at 1 − (1 − α)^{1/m} (Šidák) keeps it at or below α.
  * Computed with log1p/expm1 so tiny α stays exact.
  *
  * Reference: Šidák (1967), JASA 62, 626–633; Dunn (1961), JASA 56, 52–64 (Bonferroni).
- * Example: familyWiseError({ k: 7, alpha: 0.05 }) → m = 21, FWER ≈ 0.6594.
+ * Example: familyWiseError({ k: 7, alpha: 0.05 }) → m = 21, FWER ≈ 0.6594;
+ * familyWiseError({ k: 4, comparisons: "vs-control" }) → m = 3, FWER = 1 − 0.95³ = 0.142625.
  * Cost: O(1).
  */
-export function familyWiseError(input: { k?: number; m?: number; alpha?: number }): FamilyWiseErrorResult {
+export function familyWiseError(input: {
+  k?: number;
+  m?: number;
+  alpha?: number;
+  comparisons?: PlannedComparisons;
+}): FamilyWiseErrorResult {
   const alpha = input.alpha ?? 0.05;
   if (!(alpha > 0 && alpha < 1))
     throw new StatsInputError(`The family-wise error rate needs alpha between 0 and 1; got ${alpha}`);
@@ -38,9 +55,11 @@ export function familyWiseError(input: { k?: number; m?: number; alpha?: number 
       throw new StatsInputError(
         `The family-wise error rate needs m, the number of comparisons, to be a whole number of at least 1; got ${m}`,
       );
-    if (input.k !== undefined && (input.k * (input.k - 1)) / 2 !== m) {
+    if (input.k !== undefined && plannedComparisonCount(input.k, input.comparisons ?? "all-pairs") !== m) {
       throw new StatsInputError(
-        `The family-wise error rate got k = ${input.k} and m = ${m}, which disagree (k groups give k(k − 1)/2 pairs)`,
+        input.comparisons === "vs-control"
+          ? `The family-wise error rate got k = ${input.k} and m = ${m}, which disagree (k groups give k − 1 comparisons with a control)`
+          : `The family-wise error rate got k = ${input.k} and m = ${m}, which disagree (k groups give k(k − 1)/2 pairs)`,
       );
     }
   } else if (input.k !== undefined) {
@@ -49,7 +68,7 @@ export function familyWiseError(input: { k?: number; m?: number; alpha?: number 
         `The family-wise error rate needs k, the number of groups, to be a whole number of at least 2; got ${input.k}`,
       );
     }
-    m = (input.k * (input.k - 1)) / 2;
+    m = plannedComparisonCount(input.k, input.comparisons ?? "all-pairs");
   } else {
     throw new StatsInputError(
       "The family-wise error rate needs k (number of groups) or m (number of comparisons)",
@@ -58,6 +77,9 @@ export function familyWiseError(input: { k?: number; m?: number; alpha?: number 
   const log1mAlpha = Math.log1p(-alpha);
   return {
     m,
+    ...(input.comparisons !== undefined || input.m === undefined
+      ? { comparisons: input.comparisons ?? "all-pairs" }
+      : {}),
     alpha,
     fwerIndependent: -Math.expm1(m * log1mAlpha),
     bonferroniBound: Math.min(1, m * alpha),

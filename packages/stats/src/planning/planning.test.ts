@@ -51,6 +51,21 @@ describe("family-wise error", () => {
   it("m = 1 is α itself; k and m must agree", () => {
     expect(familyWiseError({ m: 1, alpha: 0.05 }).fwerIndependent).toBeCloseTo(0.05, 15);
     expect(() => familyWiseError({ k: 4, m: 5 })).toThrow(/disagree/);
+    expect(() => familyWiseError({ k: 4, m: 6, comparisons: "vs-control" })).toThrow(/k − 1 comparisons/);
     expect(() => familyWiseError({})).toThrow(/needs k/);
+  });
+});
+
+describe("family-wise error of the comparisons actually planned", () => {
+  it("each group against the control, k = 4: m = 3, 1 − 0.95³ = .142625 (arithmetic)", () => {
+    const r = familyWiseError({ k: 4, alpha: 0.05, comparisons: "vs-control" });
+    expect(r.m).toBe(3);
+    expect(r.comparisons).toBe("vs-control");
+    expect(r.fwerIndependent).toBeCloseTo(0.142625, 15);
+  });
+  it("all pairs, k = 4: m = 6, 1 − 0.95⁶ = .264908109375 (arithmetic)", () => {
+    const r = familyWiseError({ k: 4, alpha: 0.05, comparisons: "all-pairs" });
+    expect(r.m).toBe(6);
+    expect(r.fwerIndependent).toBeCloseTo(0.264908109375, 15);
   });
 });

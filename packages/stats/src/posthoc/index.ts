@@ -3,3 +3,8 @@ export * from "./tukey-kramer.js";
 export * from "./games-howell.js";
 export * from "./dunn.js";
 export * from "./control-comparisons.js";
+export * from "./welch-control-intervals.js";
+export * from "./hodges-lehmann-shift.js";
+export * from "./pairwise-difference-order.js";
+export * from "./mann-whitney-null.js";
+export * from "./dunn-shift-intervals.js";

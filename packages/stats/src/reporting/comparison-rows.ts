@@ -17,6 +17,10 @@ export type ComparisonRow =
       /** Simultaneous limits for mean_a − mean_b (Tukey–Kramer, Games–Howell, Dunnett). */
       lower?: number;
       upper?: number;
+      /** Hodges–Lehmann shift estimate of b subtracted from a (rank families), with lower/upper its interval. */
+      shift?: number;
+      /** Why a pair has no interval (e.g. too few values for the adjusted level). */
+      intervalReason?: string;
       /** Dunn's z and unadjusted two-sided p; Welch t's unadjusted p. */
       z?: number;
       p?: number;
@@ -60,10 +64,16 @@ export function comparisonRows(posthoc: PosthocPart, family: PosthocFamily): Com
       return { available: false, a: x.a, b: x.b, reason: x.reason };
     if ("rankBiserial" in x) {
       const rb = x.rankBiserial;
+      const shift = x as { shift?: number; lower?: number; upper?: number; intervalReason?: string };
       return {
         available: true,
         a: x.a,
         b: x.b,
+        ...(shift.shift !== undefined ? { shift: shift.shift } : {}),
+        ...(shift.lower !== undefined && shift.upper !== undefined
+          ? { lower: shift.lower, upper: shift.upper }
+          : {}),
+        ...(shift.intervalReason !== undefined ? { intervalReason: shift.intervalReason } : {}),
         z: x.z,
         p: x.p,
         pAdj: x.pAdj,
@@ -71,12 +81,16 @@ export function comparisonRows(posthoc: PosthocPart, family: PosthocFamily): Com
       };
     }
     const g = x.hedgesG;
+    const extra = x as { lower?: number; upper?: number; intervalReason?: string };
     return {
       available: true,
       a: x.a,
       b: x.b,
       diff: x.diff,
-      ...("lower" in x ? { lower: x.lower, upper: x.upper } : {}),
+      ...(extra.lower !== undefined && extra.upper !== undefined
+        ? { lower: extra.lower, upper: extra.upper }
+        : {}),
+      ...(extra.intervalReason !== undefined ? { intervalReason: extra.intervalReason } : {}),
       ...("p" in x ? { p: x.p } : {}),
       pAdj: x.pAdj,
       effect: g.available ? { available: true, kind: "hedges-g", value: g.g } : g,

@@ -2,6 +2,8 @@ import { CreateUsersAndSessions1764626400000 } from "./1764626400000-create-user
 import { CreateStudiesDatasetsAnalyses1764630000000 } from "./1764630000000-create-studies-datasets-analyses.js";
 import { CreateAuditEvents1764633600000 } from "./1764633600000-create-audit-events.js";
 import { CreateReviewMailPeople1764637200000 } from "./1764637200000-create-review-mail-people.js";
+import { AddActiveDataset1764700000000 } from "./1764700000000-add-active-dataset.js";
+import { CreateReviewReplies1764700000001 } from "./1764700000001-create-review-replies.js";
 import { PosthocMethodIds1764806400000 } from "./1764806400000-posthoc-method-ids.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
@@ -10,5 +12,7 @@ export const migrations = [
   CreateStudiesDatasetsAnalyses1764630000000,
   CreateAuditEvents1764633600000,
   CreateReviewMailPeople1764637200000,
+  AddActiveDataset1764700000000,
+  CreateReviewReplies1764700000001,
   PosthocMethodIds1764806400000,
 ];

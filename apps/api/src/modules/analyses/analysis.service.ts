@@ -13,6 +13,7 @@ import { Analysis } from "./analysis.entity.js";
 import { analysisOptions } from "./analysis-options.js";
 import { MIN_JUSTIFICATION } from "./analysis.schema.js";
 import { inTransaction } from "../../db/in-transaction.js";
+import { pauseAt } from "../../db/pause-points.js";
 
 /** Runs the engine on a stored dataset under the study's plan, off the request thread. */
 async function runEngine(study: Study, dataset: Dataset) {
@@ -93,7 +94,10 @@ export async function runAnalysis(
       `Running ${testName(chosen)} instead of the plan's primary test, ${testName(planned)}, is a deviation from the locked plan and needs a written justification of at least ${MIN_JUSTIFICATION} characters; the reviewer will see it.`,
     );
   }
+  await pauseAt("analysis.before-store");
   const id = await inTransaction(ds, async (tx) => {
+    // Checked again inside the write: a submit or approval that landed while the engine ran wins.
+    await loadEditableStudy(tx, studyId, user);
     const repo = tx.getRepository(Analysis);
     const saved = await repo.save(
       repo.create({

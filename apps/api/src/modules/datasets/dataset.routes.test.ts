@@ -69,6 +69,7 @@ describe("dataset upload", () => {
       .field("layout", "long")
       .field("groupColumn", "Line")
       .field("outcomeColumn", "Yield (g)")
+      .field("levelMap", JSON.stringify({ West: null })) // the unplanned group is left out on purpose
       .attach("file", Buffer.from(GOOD), "yield.csv")
       .expect(201);
     const d = res.body.dataset;
@@ -95,6 +96,7 @@ describe("dataset upload", () => {
       .post(`/api/studies/${id}/datasets`)
       .field("groupColumn", "Line")
       .field("outcomeColumn", "Yield (g)")
+      .field("levelMap", JSON.stringify({ West: null }))
       .attach("file", Buffer.from(GOOD), "yield-v2.csv")
       .expect(201);
     expect(again.body.dataset.version).toBe(2);

@@ -10,6 +10,9 @@ import { Dataset } from "./dataset.entity.js";
 import { presentDataset } from "./dataset.presenter.js";
 import { columnChoiceSchema } from "./dataset.schema.js";
 import { loadDatasetForAnalysis, previewUpload, storeDataset } from "./dataset.service.js";
+import { activateDataset } from "./activate-dataset.js";
+import { parseLevelMap } from "./match-plan.js";
+import { activeDataset } from "../studies/study-status-records.js";
 import { singleFileUpload } from "./upload-middleware.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
@@ -46,6 +49,7 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
             Number(req.params.id),
             req.file!,
             choice,
+            parseLevelMap((req.body as Record<string, unknown>).levelMap),
           );
           res.status(201).json({ dataset: presentDataset(dataset, study) });
         },
@@ -62,7 +66,28 @@ export function datasetRoutes(ds: DataSource, env: Env): RouteSpec[] {
           const rows = await ds
             .getRepository(Dataset)
             .find({ where: { studyId: study.id }, order: { version: "DESC" } });
-          res.json({ datasets: rows.map((d) => presentDataset(d, study)) });
+          const active = await activeDataset(ds, study);
+          // `active`: the version analyses and submissions use (see studies/study-status-records.ts).
+          res.json({
+            datasets: rows.map((d) => ({ ...presentDataset(d, study), active: d.id === active?.id })),
+          });
+        },
+      ],
+    },
+    {
+      method: "post",
+      path: "/:id/datasets/:datasetId/activate",
+      policy: ANALYST,
+      summary: "Make a dataset version the active one again (draft only)",
+      handlers: [
+        async (req, res) => {
+          const { dataset, study } = await activateDataset(
+            ds,
+            actorOf(req),
+            Number(req.params.id),
+            Number(req.params.datasetId),
+          );
+          res.json({ dataset: presentDataset(dataset, study) });
         },
       ],
     },

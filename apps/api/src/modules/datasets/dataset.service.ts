@@ -4,12 +4,14 @@ import type { Actor } from "../../http/actor.js";
 import { HttpError } from "../../http/errors.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { loadEditableStudy } from "../studies/study.access.js";
-import type { Study } from "../studies/study.entity.js";
+import { Study } from "../studies/study.entity.js";
 import { Dataset } from "./dataset.entity.js";
 import { runTask } from "../../workers/task-pool.js";
 import { guessColumns, type ColumnChoice } from "./extract-groups.js";
 import { safeFileName } from "./upload-middleware.js";
 import { inTransaction } from "../../db/in-transaction.js";
+import { pauseAt } from "../../db/pause-points.js";
+import { applyLevelMap, levelsToRead, requirePlanMatch, type LevelMap } from "./match-plan.js";
 
 export interface UploadedFile {
   originalname: string;
@@ -43,6 +45,7 @@ export async function storeDataset(
   studyId: number,
   file: UploadedFile,
   choice: ColumnChoice,
+  levelMap: LevelMap = {},
 ): Promise<{ dataset: Dataset; study: Study }> {
   const user = actor.user;
   const study = await loadEditableStudy(ds, studyId, user);
@@ -54,12 +57,14 @@ export async function storeDataset(
     );
   const fileName = safeFileName(file.originalname);
   // Parsing a large file is CPU work: it runs off the request thread.
-  const { data, report, format } = await runTask("extractTask", {
+  const extracted = await runTask("extractTask", {
     fileName,
     bytes: file.buffer,
     choice,
-    levels: study.levels,
+    levels: levelsToRead(study.levels, levelMap),
   });
+  const { format } = extracted;
+  const { data, report } = applyLevelMap(extracted.data, extracted.report, study.levels, levelMap);
   if (!report.usable) {
     throw new HttpError(
       422,
@@ -68,8 +73,12 @@ export async function storeDataset(
       { report },
     );
   }
+  requirePlanMatch(report, study.levels, levelMap);
   const sha256 = createHash("sha256").update(file.buffer).digest("hex");
+  await pauseAt("dataset.before-store");
   const dataset = await inTransaction(ds, async (tx) => {
+    // Checked again inside the write: a submit or approval that landed during parsing wins.
+    await loadEditableStudy(tx, studyId, user);
     const repo = tx.getRepository(Dataset);
     const last = await repo.findOne({
       where: { studyId },
@@ -94,6 +103,8 @@ export async function storeDataset(
       uploadedAt: new Date(),
     });
     const saved = await repo.save(row);
+    // A new upload becomes the active version (an earlier one can be made active again).
+    await tx.getRepository(Study).update({ id: studyId }, { activeDatasetId: saved.id });
     await recordAudit(tx, actor, {
       action: "dataset.uploaded",
       studyId,

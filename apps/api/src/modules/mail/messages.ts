@@ -1,10 +1,15 @@
 import type { Study } from "../studies/study.entity.js";
+import type { StudyStatus } from "../studies/study-status.js";
 import type { MailContent } from "./outbox.js";
 
 interface Person {
   email: string;
   displayName: string;
 }
+
+/** The study's one status (study-status.ts), as the last paragraph of every study e-mail. */
+const statusParagraph = (status?: StudyStatus) =>
+  status ? [`Status: ${status.label}. ${status.detail} Next: ${status.nextStep.action}.`] : [];
 
 const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
@@ -51,11 +56,18 @@ export function reviewRequestedMessage(
   study: Study,
   analyst: Person,
   baseUrl: string,
+  status?: StudyStatus,
+  /** from round 2: what changed since the last round, one sentence each */
+  changes?: string[],
 ): MailContent {
   return compose(
     reviewer,
     `review requested for "${study.title}"`,
-    [`${analyst.displayName} submitted "${study.title}" for review.`],
+    [
+      `${analyst.displayName} submitted "${study.title}" for review.`,
+      ...(changes?.length ? [`What changed since the last round: ${changes.join(" ")}`] : []),
+      ...statusParagraph(status),
+    ],
     {
       href: `${baseUrl}/reviews/${study.id}`,
       label: "Open the review",
@@ -69,11 +81,16 @@ export function changesRequestedMessage(
   reviewer: Person,
   comment: string,
   baseUrl: string,
+  status?: StudyStatus,
 ): MailContent {
   return compose(
     analyst,
     `changes requested on "${study.title}"`,
-    [`${reviewer.displayName} sent "${study.title}" back with this comment:`, comment],
+    [
+      `${reviewer.displayName} sent "${study.title}" back with this comment:`,
+      comment,
+      ...statusParagraph(status),
+    ],
     {
       href: `${baseUrl}/studies/${study.id}`,
       label: "Open the study",
@@ -86,11 +103,15 @@ export function approvedMessage(
   study: Study,
   reviewer: Person,
   baseUrl: string,
+  status?: StudyStatus,
 ): MailContent {
   return compose(
     analyst,
     `"${study.title}" was approved`,
-    [`${reviewer.displayName} approved "${study.title}" with an electronic signature.`],
+    [
+      `${reviewer.displayName} approved "${study.title}" with an electronic signature.`,
+      ...statusParagraph(status),
+    ],
     {
       href: `${baseUrl}/studies/${study.id}`,
       label: "Open the study",
@@ -98,11 +119,19 @@ export function approvedMessage(
   );
 }
 
-export function reportReadyMessage(writer: Person, study: Study, baseUrl: string): MailContent {
+export function reportReadyMessage(
+  writer: Person,
+  study: Study,
+  baseUrl: string,
+  status?: StudyStatus,
+): MailContent {
   return compose(
     writer,
     `report ready for "${study.title}"`,
-    [`"${study.title}" was approved; its methods-and-results section can now be downloaded.`],
+    [
+      `"${study.title}" was approved; its methods-and-results section can now be downloaded.`,
+      ...statusParagraph(status),
+    ],
     {
       href: `${baseUrl}/reports/${study.id}`,
       label: "Open the report",

@@ -5,6 +5,7 @@ import {
   sensitivitySentences,
   ADJUSTMENT_TERMS,
   checkReadings,
+  familyWiseError,
   formatStat,
   formatUnit,
   isAvailable,
@@ -19,7 +20,7 @@ import {
 import { comparisonsOf } from "../studies/plan.js";
 import { paragraph, type Block } from "./report-blocks.js";
 import type { ReportInput } from "./report-input.js";
-import { posthocTable } from "./posthoc-table.js";
+import { intervalPairs, posthocTable } from "./posthoc-table.js";
 import { REFERENCES, type ReferenceKey } from "./references.js";
 
 const ASSIGNMENT: Record<string, string> = {
@@ -48,9 +49,9 @@ const FAMILY_REFERENCES: Record<PosthocFamily, readonly ReferenceKey[]> = {
   "tukey-kramer": ["tukey", "kramer", "hedges"],
   "games-howell": ["gamesHowell", "hedges"],
   dunnett: ["dunnett", "hedges"],
-  "welch-vs-control-holm": ["welch", "holm", "hedges"],
-  dunn: ["dunn"],
-  "dunn-vs-control": ["dunn"],
+  "welch-vs-control-holm": ["welchT", "holm", "bonferroni", "hedges"],
+  dunn: ["dunn", "hodgesLehmann", "bonferroni"],
+  "dunn-vs-control": ["dunn", "hodgesLehmann", "bonferroni"],
 };
 
 const list = (xs: string[]) =>
@@ -108,10 +109,7 @@ export function buildReport(input: ReportInput): Block[] {
   const decision = r.recommendation;
   // The plan decided the primary test from the design; the checks informed, never switched it.
   blocks.push(
-    paragraph(
-      `${primaryTestSentence(decision)} ${decision.reasons.map((x) => x.text).join(" ")}`,
-      "methods",
-    ),
+    paragraph(`${primaryTestSentence(decision)} ${decision.reasons.map((x) => x.text).join(" ")}`, "methods"),
   );
   refs.add("zimmerman");
   if (decision.test === "welch" || decision.planned === "welch") refs.add("delacre");
@@ -123,7 +121,8 @@ export function buildReport(input: ReportInput): Block[] {
     ),
   );
   refs.add("grubbs");
-  for (const line of errorRateSentences(r.errorRateCheck, decision.test)) blocks.push(paragraph(line, "methods"));
+  for (const line of errorRateSentences(r.errorRateCheck, decision.test))
+    blocks.push(paragraph(line, "methods"));
   if (r.errorRateCheck.available) refs.add("efron");
   for (const line of sensitivitySentences(r.sensitivity)) blocks.push(paragraph(line, "methods"));
   if (isAvailable(r.trimmedMeans)) refs.add("yuen");
@@ -131,9 +130,20 @@ export function buildReport(input: ReportInput): Block[] {
   if (analysis.overrideJustification && planned !== chosen) {
     blocks.push(paragraph(deviationSentence(planned, chosen, analysis.overrideJustification), "methods"));
   }
+  const simultaneous = (m: number) =>
+    m === 1
+      ? `${formatStat((1 - alpha) * 100, 0)}% level`
+      : `level 1 − α/${m} (${formatStat((1 - alpha / m) * 100, 2)}%) so that the ${m} intervals hold ${formatStat((1 - alpha) * 100, 0)}% together (Bonferroni)`;
+  const pairsInFamily = vsControl ? k - 1 : (k * (k - 1)) / 2;
+  // The intervals each family adds beyond the vocabulary's description of the test itself.
+  const intervalWords: Partial<Record<PosthocFamily, string>> = {
+    "welch-vs-control-holm": `, and Welch confidence intervals for each difference from the control, each at the ${simultaneous(k - 1)}`,
+    dunn: `, and the Hodges–Lehmann estimate of each pair's shift with a distribution-free interval from the Mann–Whitney statistic, each at the ${simultaneous(pairsInFamily)}`,
+    "dunn-vs-control": `, and the Hodges–Lehmann estimate of each group's shift from the control with a distribution-free interval from the Mann–Whitney statistic, each at the ${simultaneous(k - 1)}`,
+  };
   blocks.push(
     paragraph(
-      `The omnibus test reported below is ${TEST_TERMS[chosen].name}${planned === chosen ? ", the plan's primary test" : ""}, followed by ${posthocSentence(family, study.plan.adjust)}. Effect sizes are reported with each result.`,
+      `The omnibus test reported below is ${TEST_TERMS[chosen].name}${planned === chosen ? ", the plan's primary test" : ""}, followed by ${posthocSentence(family, study.plan.adjust)}${intervalWords[family] ?? ""}. Effect sizes are reported with each result.`,
       "methods",
     ),
   );
@@ -189,37 +199,44 @@ export function buildReport(input: ReportInput): Block[] {
   blocks.push(paragraph(`${TEST_TERMS[chosen].title}: ${omni}.`, "results"));
   for (const line of analysis.summary) blocks.push(paragraph(line, "results"));
   blocks.push({ type: "heading", level: 3, text: "Post-hoc comparisons" });
-  const table = posthocTable(r.posthoc, family, unit);
+  const table = posthocTable(r.posthoc, family, unit, alpha);
   if ("reason" in table)
     blocks.push(paragraph(`The post-hoc comparisons could not be computed: ${table.reason}.`, "results"));
-  else
+  else {
     blocks.push({
       type: "table",
       caption: `Table 2. ${POSTHOC_TERMS[family].title}`,
       header: table.header,
       rows: table.rows,
     });
+    table.notes.forEach((note, i) => blocks.push(paragraph(`Note ${i + 1}. ${note}`, "results")));
+  }
   blocks.push({
     type: "figure",
     figure: "groups",
     caption: `Figure 1. ${study.outcomeName} in each group: box (quartiles and median) with every value shown.`,
   });
-  if (chosen !== "kruskal-wallis" && !("reason" in table)) {
+  // The figure only when some pair has an interval, so the report never holds an empty figure.
+  if (!("reason" in table) && intervalPairs(r.posthoc, family).length > 0) {
+    const what =
+      chosen === "kruskal-wallis"
+        ? "Hodges–Lehmann shifts between groups with simultaneous"
+        : "Differences between group means with simultaneous";
     blocks.push({
       type: "figure",
       figure: "intervals",
-      caption: `Figure 2. Differences between group means with simultaneous 95% confidence intervals (${POSTHOC_TERMS[family].short}); intervals that cross zero show no clear difference.`,
+      caption: `Figure 2. ${what} ${formatStat((1 - alpha) * 100, 0)}% confidence intervals (${POSTHOC_TERMS[family].short}); intervals that cross zero show no clear difference.`,
     });
   }
-  const fwer = r.familyWiseError;
-  if (isAvailable(fwer)) {
-    blocks.push(
-      paragraph(
-        `With m = ${fwer.m} comparisons, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwer.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
-        "results",
-      ),
-    );
-  }
+  // From the plan's comparisons (k − 1 against a control, else all pairs), not from whatever
+  // family size an older stored analysis recorded.
+  const fwe = familyWiseError({ k, alpha, comparisons: vsControl ? "vs-control" : "all-pairs" });
+  blocks.push(
+    paragraph(
+      `With m = ${fwe.m} ${fwe.m === 1 ? "comparison" : "comparisons"}${vsControl ? ` against ${study.controlLevel}` : ""}, unadjusted tests at α = ${formatUnit(alpha)} would have a family-wise error rate of up to ${formatUnit(fwe.fwerIndependent, 3)} (1 − (1 − α)^m for independent tests); the post-hoc method above keeps it at α.`,
+      "results",
+    ),
+  );
 
   if (study.context !== "general") blocks.push({ type: "caution", text: CAUTION });
 

@@ -80,12 +80,8 @@ function table(b: Extract<Block, { type: "table" }>): (Paragraph | Table)[] {
 
 function figure(b: Extract<Block, { type: "figure" }>, images: Map<string, Buffer>): Paragraph[] {
   const png = images.get(b.figure);
-  if (!png)
-    return [
-      new Paragraph({
-        children: [new TextRun({ text: `${b.caption} (figure not available)`, italics: true })],
-      }),
-    ];
+  // build-report adds a figure only when it can be drawn; without an image, print nothing rather than a placeholder.
+  if (!png) return [];
   // PNG header: width and height at bytes 16–23.
   const w = png.readUInt32BE(16);
   const h = png.readUInt32BE(20);

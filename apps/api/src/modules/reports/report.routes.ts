@@ -6,6 +6,7 @@ import { AuditEvent } from "../audit/audit-event.entity.js";
 import { recordAudit } from "../audit/audit.service.js";
 import { loadSettings } from "../organization/organization.routes.js";
 import { loadReadableStudy } from "../studies/study.access.js";
+import { statusOf } from "../studies/study-status-records.js";
 import { renderDocx } from "./render-docx.js";
 import { generateReport, previewBlocks } from "./report.service.js";
 
@@ -31,7 +32,13 @@ export function reportRoutes(ds: DataSource): RouteSpec[] {
         async (req, res) => {
           const draft = isDraft(req.query) || req.user!.role === "analyst";
           const r = await generateReport(ds, actorOf(req), Number(req.params.id), draft);
-          res.json({ report: { blocks: previewBlocks(r) }, approved: !r.draft, draft: r.draft });
+          const study = await loadReadableStudy(ds, Number(req.params.id), req.user!);
+          res.json({
+            report: { blocks: previewBlocks(r) },
+            approved: !r.draft,
+            draft: r.draft,
+            progress: await statusOf(ds, study),
+          });
         },
       ],
     },

@@ -10,6 +10,8 @@ import { buildReport } from "./build-report.js";
 import { groupsFigure, intervalsFigure } from "./figures.js";
 import { intervalPairs } from "./posthoc-table.js";
 import type { Block } from "./report-blocks.js";
+import { comparisonsOf } from "../studies/plan.js";
+import { activeDataset } from "../studies/study-status-records.js";
 
 export interface GeneratedReport {
   blocks: Block[];
@@ -34,8 +36,19 @@ export async function generateReport(
   if (draft) {
     if (actor.user.role !== "analyst" || study.ownerId !== actor.user.id)
       throw new ForbiddenError("Drafts are for the study's own analyst; others read the approved report.");
-    analysis = await ds.getRepository(Analysis).findOne({ where: { studyId }, order: { id: "DESC" } });
-    if (!analysis) throw new ConflictError("Run the analysis before asking for a draft report.");
+    // The draft shows what would be submitted: the newest analysis of the active data version.
+    const active = await activeDataset(ds, study);
+    analysis = active
+      ? await ds
+          .getRepository(Analysis)
+          .findOne({ where: { studyId, datasetId: active.id }, order: { id: "DESC" } })
+      : null;
+    if (!analysis)
+      throw new ConflictError(
+        active
+          ? `Data version ${active.version} is the active version and has no analysis yet; run the analysis on it before asking for a draft report.`
+          : "Run the analysis before asking for a draft report.",
+      );
   } else {
     if (actor.user.role === "analyst")
       throw new ForbiddenError(

@@ -9,11 +9,16 @@ import { AuditEvent } from "../audit/audit-event.entity.js";
 import { loadReadableStudy } from "../studies/study.access.js";
 import { Study } from "../studies/study.entity.js";
 import { studyDto } from "../studies/study.service.js";
+import { statusOf } from "../studies/study-status-records.js";
 import { ReviewComment } from "./review-comment.entity.js";
 import { ReviewRound } from "./review-round.entity.js";
 import { approveSchema, requestChangesSchema, submitSchema } from "./review.schema.js";
 import { approve, requestChanges, submitForReview, verifyApproval } from "./review.service.js";
 import { Signature } from "./signature.entity.js";
+import { ReviewReply } from "./review-reply.entity.js";
+import { replySchema, replyToComment } from "./comment-replies.js";
+import { roundChanges } from "./round-changes.js";
+import { roundRecords } from "./round-records.js";
 
 const REVIEWERS = policy.roles("reviewer", "admin");
 const DAY_MS = 86_400_000;
@@ -74,6 +79,32 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
       ],
     },
     {
+      method: "post",
+      path: "/:id/comments/:commentId/replies",
+      policy: policy.roles("analyst"),
+      summary: "Reply to a reviewer's comment (the study's analyst, after changes were requested)",
+      handlers: [
+        async (req, res) => {
+          const reply = await replyToComment(
+            ds,
+            actorOf(req),
+            Number(req.params.id),
+            Number(req.params.commentId),
+            parseBody(replySchema, req.body).body,
+          );
+          res.status(201).json({
+            reply: {
+              id: reply.id,
+              commentId: reply.commentId,
+              body: reply.body,
+              author: { id: reply.author.id, displayName: reply.author.displayName },
+              createdAt: reply.createdAt,
+            },
+          });
+        },
+      ],
+    },
+    {
       method: "get",
       path: "/:id/history",
       policy: policy.roles("analyst", "reviewer", "writer", "admin"),
@@ -93,6 +124,16 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
                 .orderBy("c.id")
                 .getMany()
             : [];
+          const replies = comments.length
+            ? await ds
+                .getRepository(ReviewReply)
+                .createQueryBuilder("r")
+                .leftJoinAndSelect("r.author", "a")
+                .where("r.comment_id IN (:...ids)", { ids: comments.map((c) => c.id) })
+                .orderBy("r.id")
+                .getMany()
+            : [];
+          const records = await roundRecords(ds, rounds);
           const signatures = await ds
             .getRepository(Signature)
             .find({ where: { studyId: study.id }, order: { id: "ASC" } });
@@ -101,7 +142,8 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
             .find({ where: { studyId: study.id }, order: { id: "ASC" } });
           const approval = await verifyApproval(ds, study.id);
           res.json({
-            rounds: rounds.map((r) => ({
+            progress: await statusOf(ds, study),
+            rounds: rounds.map((r, i) => ({
               id: r.id,
               round: r.round,
               analysisId: r.analysisId,
@@ -119,7 +161,17 @@ export function studyReviewRoutes(ds: DataSource, env: Env): RouteSpec[] {
                   body: c.body,
                   author: { id: c.author.id, displayName: c.author.displayName },
                   createdAt: c.createdAt,
+                  replies: replies
+                    .filter((x) => x.commentId === c.id)
+                    .map((x) => ({
+                      id: x.id,
+                      body: x.body,
+                      author: { id: x.author.id, displayName: x.author.displayName },
+                      createdAt: x.createdAt,
+                    })),
                 })),
+              // From round 2 on: what changed since the round before (data, test, deviation, key numbers).
+              changes: i > 0 ? roundChanges(records[i - 1]!, records[i]!) : null,
               signature:
                 signatures
                   .filter((s) => s.roundId === r.id)
@@ -175,6 +227,7 @@ export function reviewQueueRoutes(ds: DataSource): RouteSpec[] {
                 chosenTest: analysis.chosenTest,
                 override: !!analysis.overrideJustification,
                 daysWaiting: Math.floor((Date.now() - new Date(round.submittedAt).getTime()) / DAY_MS),
+                progress: await statusOf(ds, s),
               };
             }),
           );

@@ -14,11 +14,14 @@ import {
 } from "../mail/messages.js";
 import { loadReadableStudy } from "../studies/study.access.js";
 import { Study } from "../studies/study.entity.js";
+import { activeDataset, statusOf } from "../studies/study-status-records.js";
 import { User } from "../users/user.entity.js";
 import { approvalContent, contentHash } from "./approval-content.js";
 import { ReviewComment, type ReviewStep } from "./review-comment.entity.js";
 import { ReviewRound } from "./review-round.entity.js";
 import { Signature } from "./signature.entity.js";
+import { roundChanges, type RoundRecord } from "./round-changes.js";
+import { roundRecords } from "./round-records.js";
 import { inTransaction } from "../../db/in-transaction.js";
 
 const activeWithRole = (tx: EntityManager, roles: string[]) =>
@@ -28,6 +31,11 @@ const activeWithRole = (tx: EntityManager, roles: string[]) =>
     .where("u.role IN (:...roles) AND u.active = 1", { roles })
     .getMany();
 
+/** The study's status once this transaction's writes are in, for the e-mails it sends. */
+async function statusAfter(tx: EntityManager, studyId: number) {
+  return statusOf(tx, await tx.getRepository(Study).findOneByOrFail({ id: studyId }));
+}
+
 async function openRound(tx: EntityManager, studyId: number): Promise<ReviewRound> {
   const round = await tx.getRepository(ReviewRound).findOne({ where: { studyId }, order: { round: "DESC" } });
   if (!round || round.decision) throw new ConflictError("The study has no open review round.");
@@ -35,8 +43,10 @@ async function openRound(tx: EntityManager, studyId: number): Promise<ReviewRoun
 }
 
 /**
- * Sends a study for review: needs a locked plan and a stored analysis; freezes that analysis and
- * its dataset version in a new review round, and tells the reviewers.
+ * Sends a study for review: needs a locked plan and an analysis of the active data version (the
+ * one named, else the newest on that version); freezes that analysis and its dataset version in
+ * a new review round, and tells the reviewers. Every check runs inside the write transaction,
+ * so a run or upload that finishes first is seen and one that finishes later is refused.
  */
 export async function submitForReview(
   ds: DataSource,
@@ -55,15 +65,33 @@ export async function submitForReview(
       );
     if (!study.planLockedAt)
       throw new ConflictError("Lock the analysis plan and run the analysis before submitting.");
+    // Checked inside the write transaction: what is submitted is the active version's analysis.
+    const active = await activeDataset(tx, study);
+    if (!active)
+      throw new ConflictError(
+        "Run the analysis before submitting: no data have been uploaded yet, so upload them first.",
+      );
     const analysis = analysisId
       ? await tx.getRepository(Analysis).findOneBy({ id: analysisId, studyId })
-      : await tx.getRepository(Analysis).findOne({ where: { studyId }, order: { id: "DESC" } });
+      : await tx
+          .getRepository(Analysis)
+          .findOne({ where: { studyId, datasetId: active.id }, order: { id: "DESC" } });
     if (!analysis)
-      throw new ConflictError(
+      throw new HttpError(
+        409,
+        analysisId ? "analysis_not_found" : "active_version_not_analysed",
         analysisId
           ? `Study ${studyId} has no analysis ${analysisId}.`
-          : "Run the analysis before submitting the study for review.",
+          : `Data version ${active.version} is the active version and has no analysis yet. Run the analysis on version ${active.version}, then submit.`,
       );
+    if (analysis.datasetId !== active.id) {
+      const used = await tx.getRepository(Dataset).findOneByOrFail({ id: analysis.datasetId });
+      throw new HttpError(
+        409,
+        "analysis_not_on_active_version",
+        `Analysis ${analysis.id} used data version ${used.version}, but the active version is ${active.version}. Run the analysis on version ${active.version} and submit that, or make version ${used.version} active again first.`,
+      );
+    }
     const last = await tx
       .getRepository(ReviewRound)
       .findOne({ where: { studyId }, order: { round: "DESC" } });
@@ -84,8 +112,13 @@ export async function submitForReview(
       before: { status: "draft" },
       after: { status: "in_review", analysisId: analysis.id, datasetId: analysis.datasetId },
     });
+    const status = await statusAfter(tx, studyId);
+    // From round 2 on, the reviewers hear what changed since the round they sent back.
+    const changes = last
+      ? roundChanges(...((await roundRecords(tx, [last, round])) as [RoundRecord, RoundRecord]))
+      : null;
     for (const r of await activeWithRole(tx, ["reviewer"]))
-      await enqueueMail(tx, reviewRequestedMessage(r, study, actor.user, baseUrl));
+      await enqueueMail(tx, reviewRequestedMessage(r, study, actor.user, baseUrl, status, changes?.summary));
   });
 }
 
@@ -169,9 +202,10 @@ export async function approve(
       after: { status: "approved", contentHash: hash, analysisId: analysis.id },
     });
     const owner = await tx.getRepository(User).findOneByOrFail({ id: study.ownerId });
-    await enqueueMail(tx, approvedMessage(owner, study, actor.user, baseUrl));
+    const status = await statusAfter(tx, studyId);
+    await enqueueMail(tx, approvedMessage(owner, study, actor.user, baseUrl, status));
     for (const w of await activeWithRole(tx, ["writer"]))
-      await enqueueMail(tx, reportReadyMessage(w, study, baseUrl));
+      await enqueueMail(tx, reportReadyMessage(w, study, baseUrl, status));
   });
 }
 
@@ -209,7 +243,8 @@ export async function requestChanges(
       after: { status: "draft", comment: input.comment },
     });
     const owner = await tx.getRepository(User).findOneByOrFail({ id: study.ownerId });
-    await enqueueMail(tx, changesRequestedMessage(owner, study, actor.user, input.comment, baseUrl));
+    const status = await statusAfter(tx, studyId);
+    await enqueueMail(tx, changesRequestedMessage(owner, study, actor.user, input.comment, baseUrl, status));
   });
 }
 

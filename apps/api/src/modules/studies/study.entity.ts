@@ -75,6 +75,10 @@ export class Study {
   @JoinColumn({ name: "plan_locked_by_id" })
   planLockedBy: Relation<User> | null;
 
+  /** The data version analyses and submissions use; null means the newest upload. */
+  @Column("integer", { name: "active_dataset_id", nullable: true })
+  activeDatasetId: number | null;
+
   @CreateDateColumn({ name: "created_at", type: DATETIME })
   createdAt: Date;
 

@@ -11,6 +11,8 @@ import { DEFAULT_PLAN, testPlanOf, type PlanSettings } from "./plan.js";
 import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
 import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
+import { loadStatusRecords, openReviewComments } from "./study-status-records.js";
+import { studyStatus } from "./study-status.js";
 import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
 import { inTransaction } from "../../db/in-transaction.js";
 
@@ -26,14 +28,22 @@ const QUESTION_LABELS: Record<string, string> = {
 
 export async function studyDto(ds: DataSource, study: Study) {
   const datasets = ds.getRepository(Dataset);
-  const [datasetCount, latestDataset, latestAnalysis] = await Promise.all([
+  const [datasetCount, latestDataset, latestAnalysis, records] = await Promise.all([
     datasets.countBy({ studyId: study.id }),
     datasets.findOne({ where: { studyId: study.id }, order: { version: "DESC" } }),
     ds
       .getRepository(Analysis)
       .findOne({ where: { studyId: study.id }, order: { id: "DESC" }, select: { id: true } }),
+    loadStatusRecords(ds, study),
   ]);
-  return presentStudy(study, { datasetCount, latestDataset, latestAnalysisId: latestAnalysis?.id ?? null });
+  return presentStudy(study, {
+    datasetCount,
+    latestDataset,
+    latestAnalysisId: latestAnalysis?.id ?? null,
+    activeDataset: records.activeDatasetRow,
+    progress: studyStatus(records),
+    openReview: await openReviewComments(ds, study.id),
+  });
 }
 
 /** Re-reads a study with its relations after a write. */
