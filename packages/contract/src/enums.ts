@@ -71,3 +71,34 @@ export const DESIGN_ANSWERS = {
 } as const satisfies Record<string, readonly string[]>;
 export type DesignQuestion = keyof typeof DESIGN_ANSWERS;
 export const DESIGN_QUESTIONS = Object.keys(DESIGN_ANSWERS) as DesignQuestion[];
+
+/** Every action the audit trail records, named once. */
+export const AUDIT_ACTIONS = [
+  "auth.sign-in",
+  "auth.sign-in-failed",
+  "auth.sign-out",
+  "study.created",
+  "study.updated",
+  "study.design-saved",
+  "study.plan-saved",
+  "study.plan-locked",
+  "dataset.uploaded",
+  "dataset.activated",
+  "analysis.run",
+  "analysis.override",
+  "study.submitted",
+  "study.approved",
+  "study.changes-requested",
+  "study.comment-answered",
+  "invitation.sent",
+  "invitation.accepted",
+  "user.role-changed",
+  "user.deactivated",
+  "user.reactivated",
+  "user.password-changed",
+  "organization.settings-changed",
+  "report.downloaded",
+  "mail.failed",
+] as const;
+
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];

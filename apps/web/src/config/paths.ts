@@ -1,3 +1,5 @@
+import { REVIEW_STEPS } from "@waymark/contract";
+
 /** Every route path of the web app, in one place. */
 export const paths = {
   signIn: "/sign-in",
@@ -16,8 +18,8 @@ export const paths = {
   report: "/reports/:studyId",
 } as const;
 
-/** The steps of a study, each a sub-route of the study page. */
-export const STUDY_STEP_SEGMENTS = ["design", "plan", "data", "checks", "choice", "results"] as const;
+/** The steps of a study, each a sub-route of the study page: the steps a reviewer comments on. */
+export const STUDY_STEP_SEGMENTS = REVIEW_STEPS;
 export type StudyStepSegment = (typeof STUDY_STEP_SEGMENTS)[number];
 
 /** Links into one study: the overview, or one of its steps. */

@@ -8,6 +8,9 @@ function why(x: Unavailable | unknown): string {
   return `not available: ${reasonOf(x, "no reason given")}`;
 }
 
+/** "Largest SD / smallest SD" → "largest SD / smallest SD": only the first letter changes. */
+const lowerFirst = (s: string) => s.charAt(0).toLowerCase() + s.slice(1);
+
 /** A number with about four significant digits, plain for ordinary magnitudes. */
 function num(x: unknown, digits = 4): string {
   if (typeof x !== "number") return "—";
@@ -138,7 +141,7 @@ export function textReport(
     `  equal variances, ${CHECK_TERMS.bartlett.title}: ${isAvailable(b) ? `statistic ${num(b.statistic)} on ${b.df} df, p ${pval(b.p)}` : why(b)}`,
   );
   out.push(
-    `  ${CHECK_TERMS["sd-ratio"].title.toLowerCase()}: ${typeof result.sdRatio === "number" ? num(result.sdRatio, 3) : why(result.sdRatio)}`,
+    `  ${lowerFirst(CHECK_TERMS["sd-ratio"].title)}: ${typeof result.sdRatio === "number" ? num(result.sdRatio, 3) : why(result.sdRatio)}`,
   );
   const o = result.outliers;
   if (isAvailable(o)) {

@@ -1,5 +1,7 @@
-/** The actions the audit trail records (the server's list), each in plain words. */
-export const ACTION_LABELS: Record<string, string> = {
+import type { AuditAction } from "@waymark/contract";
+
+/** The actions the audit trail records (the contract's list), each in plain words. */
+export const ACTION_LABELS: Record<AuditAction, string> = {
   "auth.sign-in": "Signed in",
   "auth.sign-in-failed": "Sign-in refused",
   "auth.sign-out": "Signed out",
@@ -19,6 +21,7 @@ export const ACTION_LABELS: Record<string, string> = {
   "user.role-changed": "Role changed",
   "user.deactivated": "Account deactivated",
   "user.reactivated": "Account reactivated",
+  "user.password-changed": "Password changed",
   "organization.settings-changed": "Settings changed",
   "report.downloaded": "Report downloaded",
   "mail.failed": "E-mail not delivered",
@@ -32,5 +35,5 @@ export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set([
 ]);
 
 export function actionLabel(action: string): string {
-  return ACTION_LABELS[action] ?? action;
+  return Object.hasOwn(ACTION_LABELS, action) ? ACTION_LABELS[action as AuditAction] : action;
 }
