@@ -189,7 +189,7 @@ describe("dataset upload", () => {
     },
   );
 
-  it("reads a semicolon-delimited file with a byte-order mark, and lists NaN text as non-numeric", async () => {
+  it("reads a semicolon-delimited file with a byte-order mark, and lists NaN text as missing, as the command line does", async () => {
     const id = await lockedStudy(analyst);
     const csv =
       "\uFEFFLine;Yield (g)\nNorth;10.5\nNorth;11\nNorth;NaN\nSouth;12\nSouth;12.5\nEast;9\nEast;9.5\n";
@@ -205,7 +205,7 @@ describe("dataset upload", () => {
       { name: "East", n: 2 },
     ]);
     expect(res.body.dataset.report.excluded).toEqual([
-      { row: 4, reason: "non-numeric", value: "NaN", column: "Yield (g)" },
+      { row: 4, reason: "missing", value: "NaN", column: "Yield (g)" },
     ]);
   });
 
