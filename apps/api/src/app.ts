@@ -65,23 +65,38 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   app.use(compression());
   app.use(express.json({ limit: "1mb" }));
 
+  // Health answers before any session work: no cookie parsing, no store read, no write.
+  const early = Router();
+  const healthMounted = mountRoutes(early, "/health", healthRoutes());
+  app.use("/api", early);
+
   const sessionStore = new TypeormSessionStore(ds);
-  app.use(
-    session({
-      name: SESSION_COOKIE,
-      secret: env.sessionSecret,
-      store: sessionStore,
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      // Idle timeout: the cookie and the stored session expire after SESSION_IDLE_MINUTES without a request.
-      cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
-    }),
-  );
+  const sessions = session({
+    name: SESSION_COOKIE,
+    secret: env.sessionSecret,
+    store: sessionStore,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    // Idle timeout: the cookie and the stored session expire after SESSION_IDLE_MINUTES without a request.
+    cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+  });
+  // A read without a session cookie has no session to load and makes none: only /api/auth, where
+  // a CSRF token is asked for, and changes (refused without a token) need one.
+  app.use((req, res, next) => {
+    const safe = req.method === "GET" || req.method === "HEAD";
+    const hasCookie = req.headers.cookie?.includes(`${SESSION_COOKIE}=`) ?? false;
+    if (safe && !hasCookie && !req.path.startsWith("/api/auth/")) return next();
+    sessions(req, res, next);
+  });
   const pp = createPassport(ds, env.BCRYPT_COST);
   app.use(pp.initialize());
-  app.use(absoluteSessionLimit(env.SESSION_MAX_HOURS));
-  app.use(pp.session());
+  const sessionLimit = absoluteSessionLimit(env.SESSION_MAX_HOURS);
+  const restoreUser = pp.session();
+  app.use((req, res, next) => {
+    if (!req.session) return next(); // a cookie-less read: nobody is signed in
+    sessionLimit(req, res, (err?: unknown) => (err ? next(err) : restoreUser(req, res, next)));
+  });
   // Mail queued by a request goes out right after it, without the request waiting for it.
   app.use((req, res, next) => {
     if (req.method !== "GET") res.on("finish", () => void services.mail.kick());
@@ -91,7 +106,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   const api = Router();
   api.use(csrfSynchronisedProtection);
   const routes = [
-    ...mountRoutes(api, "/health", healthRoutes()),
+    ...healthMounted,
     ...mountRoutes(api, "/config", configRoutes(env)),
     ...mountRoutes(api, "/auth", authRoutes(pp, ds, env, sessionStore)),
     ...mountRoutes(api, "/studies", studyRoutes(ds)),

@@ -15,20 +15,22 @@ beforeAll(async () => {
   // A fifth account, deactivated after signing in: its session must stop working at once.
   for (const role of ROLES) {
     const a = await anon(t.app);
-    await a
+    const login = await a
       .post("/api/auth/login")
       .send({ email: `${role}@waymark.test`, password: t.env.demoPassword })
       .expect(200);
+    a.set("x-csrf-token", login.headers["x-csrf-token"] as string); // sign-in replaces the token
     agents.set(role, a);
   }
   const gone = await anon(t.app);
   await t.ds.query(
     `INSERT INTO users (email, display_name, role, password_hash, active) SELECT 'gone@waymark.test', 'Former Analyst', 'analyst', password_hash, 1 FROM users WHERE email = 'analyst@waymark.test'`,
   );
-  await gone
+  const goneLogin = await gone
     .post("/api/auth/login")
     .send({ email: "gone@waymark.test", password: t.env.demoPassword })
     .expect(200);
+  gone.set("x-csrf-token", goneLogin.headers["x-csrf-token"] as string);
   await t.ds.query(`UPDATE users SET active = 0 WHERE email = 'gone@waymark.test'`);
   agents.set("deactivated", gone);
   agents.set("signed-out", await anon(t.app));

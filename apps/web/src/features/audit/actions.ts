@@ -3,6 +3,7 @@ export const ACTION_LABELS: Record<string, string> = {
   "auth.sign-in": "Signed in",
   "auth.sign-in-failed": "Sign-in refused",
   "auth.sign-out": "Signed out",
+  "auth.reauth-failed": "Password re-entry refused",
   "study.created": "Study created",
   "study.updated": "Study details changed",
   "study.design-saved": "Design answers saved",
@@ -28,6 +29,7 @@ export const ACTION_LABELS: Record<string, string> = {
 export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set([
   "analysis.override",
   "auth.sign-in-failed",
+  "auth.reauth-failed",
   "mail.failed",
 ]);
 
