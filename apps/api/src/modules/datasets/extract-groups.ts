@@ -1,4 +1,5 @@
 import { readValue, type ValueReading } from "@waymark/stats";
+import { controlCharacterIn, printable } from "../../text/printable.js";
 import type { Table } from "./parse-upload.js";
 
 export interface ExtractedGroups {
@@ -76,6 +77,13 @@ export function extractGroups(
     else refusals.set(r.problem, { row, column, message: r.message, count: 1 });
     exclude(row, "non-numeric", r.text, column);
   };
+  // A group name is printed in figures, the report and e-mail: one with a control character is refused.
+  let controlProblem: string | null = null;
+  const controlIn = (name: string, where: string) => {
+    const c = controlProblem ? null : controlCharacterIn(name);
+    if (c)
+      controlProblem = `${where}: the group name "${clip(printable(name, { singleLine: true }))}" contains the control character ${c}; remove it and upload again.`;
+  };
   const byName = new Map<string, { values: string[]; rows: number[] }>();
   const add = (name: string, value: string, row: number) => {
     let g = byName.get(name);
@@ -104,6 +112,7 @@ export function extractGroups(
         const group = (cells[gi] ?? "").trim();
         const value = cells[oi] ?? "";
         const r = readValue(value);
+        controlIn(group, `Row ${row}, column "${clip(table.columns[gi]!)}"`);
         if (group === "") exclude(row, "missing-group", value, table.columns[gi]!);
         else if (r.kind === "missing") exclude(row, "missing", value, table.columns[oi]!);
         else if (r.kind === "refused") refuse(row, table.columns[oi]!, r);
@@ -116,6 +125,7 @@ export function extractGroups(
   } else {
     table.columns.forEach((col, ci) => {
       if (col === "") return;
+      controlIn(col, `Column ${ci + 1} of the header row`);
       if (known.size > 0 && !known.has(col)) {
         if (unknown.size < MAX_UNKNOWN_LISTED) unknown.add(clip(col));
         return;
@@ -153,7 +163,11 @@ export function extractGroups(
     (BLOCKING_PROBLEMS.has(problem) ? blockingRefusals : refusalMessages).push(text);
   }
   // Problems that stop the analysis come first, so a refusal names the one that matters.
-  const blocking = [...blockingRefusals, ...messages.filter((m) => m.startsWith("The "))];
+  const blocking = [
+    ...(controlProblem ? [controlProblem] : []),
+    ...blockingRefusals,
+    ...messages.filter((m) => m.startsWith("The ")),
+  ];
   const small = groups.filter((g) => g.values.length < 2);
   for (const g of small) {
     blocking.push(

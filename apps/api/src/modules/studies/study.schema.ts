@@ -1,10 +1,23 @@
 import { z } from "zod";
+import { controlCharacterIn } from "../../text/printable.js";
+
+/** Names and units are printed in figures, the DOCX and e-mail: control characters are refused. */
+const printableName = (label: string, max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `${label} must be at most ${max} characters`)
+    .superRefine((s, ctx) => {
+      const c = controlCharacterIn(s);
+      if (c)
+        ctx.addIssue({ code: "custom", message: `${label} contains the control character ${c}; remove it` });
+    });
 
 const text = (label: string, max: number) =>
-  z.string().trim().min(1, `${label} is required`).max(max, `${label} must be at most ${max} characters`);
+  printableName(label, max).refine((s) => s.length >= 1, `${label} is required`);
 
 const levels = z
-  .array(z.string().trim().min(1, "A level name cannot be empty").max(120))
+  .array(printableName("A level name", 120).refine((s) => s.length >= 1, "A level name cannot be empty"))
   .min(2, "List at least two levels of the grouping factor")
   .max(20, "Waymark compares at most 20 groups")
   .refine((l) => new Set(l).size === l.length, "Level names must be different from each other");
@@ -18,10 +31,13 @@ export const studyFields = {
   title: text("Title", 200),
   objective: text("Objective", 4000),
   outcomeName: text("Outcome name", 120),
-  outcomeUnit: z.string().trim().max(40, "Unit must be at most 40 characters"),
+  outcomeUnit: printableName("Unit", 40),
   factorName: text("Grouping factor", 120),
   levels,
-  controlLevel: z.string().trim().min(1).max(120).nullable().optional(),
+  controlLevel: printableName("The control level", 120)
+    .refine((s) => s.length >= 1)
+    .nullable()
+    .optional(),
   alpha: alphaSchema.optional(),
   context: z.enum(["general", "clinical", "safety-critical"], "Choose general, clinical or safety-critical"),
 };
