@@ -7,8 +7,8 @@
  * (controlCharacterIn), so this only guards what was stored before and text built from it.
  * Character classes only: linear on any input.
  */
-// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const UNPRINTABLE =
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point
   /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
 const LINE_BREAKS = /[\t\n\r]/g;
 
@@ -18,8 +18,8 @@ export function printable(text: string, { singleLine = false } = {}): string {
   return singleLine ? clean.replace(LINE_BREAKS, " ") : clean;
 }
 
-// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const CONTROL =
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point
   /[\u0000-\u001F\u007F-\u009F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
 
 /** The first control character in a name or unit, as "U+0007", or null. Tabs and line breaks count. */
