@@ -2,7 +2,7 @@ import "reflect-metadata";
 import fs from "node:fs";
 import path from "node:path";
 import compression from "compression";
-import express, { Router } from "express";
+import express, { Router, type RequestParamHandler } from "express";
 import session from "express-session";
 import helmet from "helmet";
 import type { DataSource } from "typeorm";
@@ -11,6 +11,7 @@ import { csrfSynchronisedProtection } from "./auth/csrf.js";
 import { absoluteSessionLimit } from "./auth/session-limit.js";
 import type { Env } from "./config/env.js";
 import { errorHandler, notFoundHandler } from "./http/error-handler.js";
+import { HttpError } from "./http/errors.js";
 import { mountRoutes, type MountedRoute } from "./http/route-table.js";
 import { analysisRoutes } from "./modules/analyses/analysis.routes.js";
 import { auditRoutes } from "./modules/audit/audit.routes.js";
@@ -105,6 +106,8 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
 
   const api = Router();
   api.use(csrfSynchronisedProtection);
+  // Ids in the address are checked before any handler, so no "NaN" or "1e3" reaches SQL.
+  for (const name of ["id", "datasetId", "analysisId"]) api.param(name, checkId);
   const routes = [
     ...healthMounted,
     ...mountRoutes(api, "/config", configRoutes(env)),
@@ -130,6 +133,18 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   // The table records full paths, as a client sees them.
   return { app, routes: routes.map((r) => ({ ...r, path: `/api${r.path}` })), sessionStore };
 }
+
+/** A row id in the address: a whole number from 1 to 2^31 − 1, written plainly. */
+const checkId: RequestParamHandler = (_req, _res, next, value: string, name: string) => {
+  if (/^[1-9][0-9]{0,9}$/.test(value) && Number(value) <= 2 ** 31 - 1) return next();
+  next(
+    new HttpError(
+      400,
+      "invalid_id",
+      `"${value.slice(0, 40)}" is not a valid ${name === "id" ? "id" : name} in the address; ids are whole numbers.`,
+    ),
+  );
+};
 
 /** Serves the built web app (one port for both) with the SPA fallback, when a build exists. */
 function serveWebApp(app: express.Express, dist: string): void {
