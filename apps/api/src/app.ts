@@ -29,6 +29,7 @@ import { reviewQueueRoutes, studyReviewRoutes } from "./modules/reviews/review.r
 import { TypeormSessionStore } from "./modules/sessions/typeorm-session-store.js";
 import { studyRoutes } from "./modules/studies/study.routes.js";
 import { userRoutes } from "./modules/users/user.routes.js";
+import { configureTaskPool } from "./workers/task-pool.js";
 
 export const SESSION_COOKIE = "waymark.sid";
 
@@ -44,6 +45,7 @@ export interface BuiltApp {
 
 /** Builds the Express app around an open data source; server.ts listens, tests use supertest. */
 export function createApp(ds: DataSource, env: Env, services: AppServices): BuiltApp {
+  configureTaskPool({ timeoutMs: env.TASK_TIMEOUT_SECONDS * 1000, memoryMb: env.WORKER_MEMORY_MB });
   const app = express();
   app.disable("x-powered-by");
   if (env.TRUST_PROXY) app.set("trust proxy", 1);

@@ -30,6 +30,10 @@ const schema = z.object({
   SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).default(120),
   SESSION_MAX_HOURS: z.coerce.number().int().min(1).default(12),
   UPLOAD_LIMIT_MB: z.coerce.number().positive().max(1024).default(50),
+  /** A parse or analysis running longer is stopped (its worker ended and replaced) and answered 503. */
+  TASK_TIMEOUT_SECONDS: z.coerce.number().positive().max(3600).default(60),
+  /** Heap one worker may use; past it the worker dies, is replaced, and the request gets 413. */
+  WORKER_MEMORY_MB: z.coerce.number().int().min(64).max(16384).default(1024),
   /** Set by npm to the folder the command was typed in; scripts resolve file arguments against it. */
   INIT_CWD: z.string().optional(),
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),
