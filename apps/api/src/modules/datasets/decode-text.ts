@@ -17,10 +17,11 @@ export function decodeText(bytes: Buffer): string {
   let start = 0;
   if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) start = 3;
   const body = bytes.subarray(start);
+  // Zero bytes are valid UTF-8 but never in a text table: here they mean UTF-16 without a mark.
+  if (body.includes(0)) throw utf16();
   try {
     return new TextDecoder("utf-8", { fatal: true }).decode(body);
   } catch {
-    if (body.includes(0)) throw utf16();
     const at = firstInvalidUtf8(body);
     const line = countLines(body, at);
     const b = body[at]!;

@@ -162,25 +162,24 @@ export function extractGroups(
     const text = `Row ${r.row}, column "${clip(r.column)}": ${r.message}${more}.`;
     (BLOCKING_PROBLEMS.has(problem) ? blockingRefusals : refusalMessages).push(text);
   }
-  // Problems that stop the analysis come first, so a refusal names the one that matters.
-  const blocking = [
-    ...(controlProblem ? [controlProblem] : []),
-    ...blockingRefusals,
-    ...messages.filter((m) => m.startsWith("The ")),
-  ];
+  // Problems that stop the analysis come first, so a refusal names the one that matters:
+  // a control character or a value that cannot be held, then the rest.
+  const refused = [...(controlProblem ? [controlProblem] : []), ...blockingRefusals];
+  const blocking = messages.filter((m) => m.startsWith("The "));
   const small = groups.filter((g) => g.values.length < 2);
   for (const g of small) {
     blocking.push(
       `Group "${clip(g.name)}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
     );
   }
-  if (groups.length < 2 && blocking.length === 0) {
+  if (groups.length < 2 && blocking.length === 0 && refused.length === 0) {
     blocking.push(
       `Only ${groups.length} group${groups.length === 1 ? "" : "s"} with data; a comparison needs at least two.`,
     );
   }
-  // When refused values are why the data cannot be used, they are the cause to name first.
+  // When refused values are why too little data is left, they are the cause to name first.
   if (blocking.length > 0) blocking.unshift(...refusalMessages);
+  blocking.unshift(...refused);
   const others = [...refusalMessages, ...messages.filter((m) => !m.startsWith("The "))];
   const rowsUsed = groups.reduce((s, g) => s + g.values.length, 0);
   const usable = blocking.length === 0;
