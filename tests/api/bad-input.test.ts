@@ -6,7 +6,6 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { anon, signedIn } from "../../apps/api/src/test-support/agents.js";
 import { lockedStudy } from "../../apps/api/src/test-support/locked-study.js";
 import { makeTestApp } from "../../apps/api/src/test-support/test-app.js";
-// @ts-expect-error -- a plain ES module without types, shared with the benchmark
 import { hostileCases } from "../fixtures/bad-input/generate-hostile.mjs";
 
 const corpus = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../fixtures/bad-input");

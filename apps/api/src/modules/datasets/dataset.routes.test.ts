@@ -98,7 +98,9 @@ describe("dataset upload", () => {
       .attach("file", Buffer.from(GOOD), "yield-v2.csv")
       .expect(201);
     expect(again.body.dataset.version).toBe(2);
-    const list = await writer.get(`/api/studies/${id}/datasets`).expect(200);
+    // Writers see approved studies only; the analyst lists the draft's versions.
+    await writer.get(`/api/studies/${id}/datasets`).expect(403);
+    const list = await analyst.get(`/api/studies/${id}/datasets`).expect(200);
     expect(list.body.datasets.map((x: { version: number }) => x.version)).toEqual([2, 1]);
   });
 
