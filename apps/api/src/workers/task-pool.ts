@@ -25,7 +25,11 @@ export function configureTaskPool(next: TaskLimits): void {
  * (tests, tsx) they run in-process, because workers cannot load .ts files by themselves.
  */
 const compiled = import.meta.url.endsWith(".js");
-let pool: Piscina | null = null;
+/**
+ * Uploads and analyses have a pool each, so a hostile file being read (up to the time bound)
+ * never queues another user's analysis behind it.
+ */
+const pools = new Map<"upload" | "analysis", Piscina>();
 
 /**
  * A pool whose tasks are bounded: a task past `timeoutMs` is aborted, which ends its worker
@@ -63,9 +67,10 @@ export async function runBounded(p: Piscina, name: string, input: unknown, l: Ta
   }
 }
 
-function getPool(): Piscina {
-  pool ??= createBoundedPool(new URL("./worker.js", import.meta.url).href, limits);
-  return pool;
+function getPool(kind: "upload" | "analysis"): Piscina {
+  let p = pools.get(kind);
+  if (!p) pools.set(kind, (p = createBoundedPool(new URL("./worker.js", import.meta.url).href, limits)));
+  return p;
 }
 
 export async function runTask<N extends TaskName>(
@@ -74,7 +79,7 @@ export async function runTask<N extends TaskName>(
 ): Promise<Exclude<Awaited<ReturnType<Tasks[N]>>, tasks.TaskError>> {
   const out = (
     compiled
-      ? await runBounded(getPool(), name, input, limits)
+      ? await runBounded(getPool(name === "analyzeTask" ? "analysis" : "upload"), name, input, limits)
       : await (tasks[name] as (i: unknown) => unknown)(input)
   ) as Awaited<ReturnType<Tasks[N]>>;
   if (out && typeof out === "object" && "error" in out) {
@@ -85,6 +90,6 @@ export async function runTask<N extends TaskName>(
 }
 
 export async function closeTaskPool(): Promise<void> {
-  await pool?.destroy();
-  pool = null;
+  await Promise.all([...pools.values()].map((p) => p.destroy()));
+  pools.clear();
 }

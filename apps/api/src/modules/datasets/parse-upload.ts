@@ -76,12 +76,25 @@ function guessDelimiter(text: string): string {
 export function parseCsv(bytes: Buffer): Table {
   const text = decodeText(bytes);
   if (text.trim() === "") throw invalid("The file is empty.");
+  // Without quotes every line break ends a row: a file with far too many lines is refused
+  // before it is parsed (with quotes, a line break may sit inside a cell, so rows are counted below).
+  if (text.indexOf('"') < 0 && lineCountAbove(text, TABLE_LIMITS.maxRows + 1))
+    throw invalid(
+      `The file has more than ${TABLE_LIMITS.maxRows.toLocaleString("en")} data rows; Waymark reads at most that many.`,
+    );
+  const delimiter = guessDelimiter(text);
+  // A header far too wide is refused before any row is split into cells.
+  const firstLine = text.slice(0, Math.max(0, text.indexOf("\n")) || text.length);
+  if (firstLine.indexOf('"') < 0 && occurrencesAbove(firstLine, delimiter, TABLE_LIMITS.maxColumns - 1))
+    throw invalid(
+      `The header row has more than ${TABLE_LIMITS.maxColumns} columns; Waymark reads at most ${TABLE_LIMITS.maxColumns}.`,
+    );
   let header: string[] | null = null;
   const rows: Table["rows"] = [];
   let problem: HttpError | null = null;
   // Rows are checked as the parser produces them and parsing stops at the first bound passed.
   Papa.parse<string[]>(text, {
-    delimiter: guessDelimiter(text),
+    delimiter,
     skipEmptyLines: "greedy",
     step: (result, parser) => {
       const cells = result.data;
@@ -119,6 +132,28 @@ export function parseCsv(bytes: Buffer): Table {
   return { columns: checkHeader(header), rows, format: "csv" };
 }
 
+/** True when `needle` occurs more than `limit` times in `text`, stopping as soon as it knows. */
+function occurrencesAbove(text: string, needle: string, limit: number): boolean {
+  let n = 0;
+  for (let at = text.indexOf(needle); at >= 0; at = text.indexOf(needle, at + 1))
+    if (++n > limit) return true;
+  return false;
+}
+
+/** True when the text has more than `limit` non-blank lines, stopping as soon as it knows. */
+function lineCountAbove(text: string, limit: number): boolean {
+  let lines = 0;
+  let from = 0;
+  while (from < text.length) {
+    let to = text.indexOf("\n", from);
+    if (to < 0) to = text.length;
+    if (to - from > 1 || (to - from === 1 && text.charCodeAt(from) !== 13)) lines++;
+    if (lines > limit) return true;
+    from = to + 1;
+  }
+  return false;
+}
+
 /** UTF-16 text without a byte-order mark: ASCII letters each followed (or preceded) by a zero byte. */
 function looksUtf16(bytes: Buffer): boolean {
   const n = Math.min(bytes.length, 512) & ~1;
@@ -133,7 +168,7 @@ function looksUtf16(bytes: Buffer): boolean {
 }
 
 export async function parseXlsx(bytes: Buffer): Promise<Table> {
-  const table = readXlsx(bytes);
+  const table = await readXlsx(bytes);
   return { ...table, columns: checkHeader(table.columns) };
 }
 

@@ -37,17 +37,19 @@ function letters(col: number): string {
 }
 
 /** Streams one part through the XML reader as it inflates; `maxCarry` bounds an unfinished tag. */
-function parsePart(
+async function parsePart(
   bytes: Buffer,
   entry: ZipEntry,
   budget: InflateBudget,
   handlers: XmlHandlers,
   maxCarry: number,
-): void {
+): Promise<void> {
   const scanner = new XmlScanner(handlers, maxCarry);
   const decoder = new TextDecoder("utf-8");
   try {
-    inflateEntry(bytes, entry, budget, (chunk) => scanner.write(decoder.decode(chunk, { stream: true })));
+    await inflateEntry(bytes, entry, budget, (chunk) =>
+      scanner.write(decoder.decode(chunk, { stream: true })),
+    );
     scanner.write(decoder.decode());
     scanner.end();
   } catch (e) {
@@ -56,7 +58,7 @@ function parsePart(
   }
 }
 
-export function readXlsx(bytes: Buffer): Table {
+export async function readXlsx(bytes: Buffer): Promise<Table> {
   const limits = TABLE_LIMITS;
   const entries = new Map<string, ZipEntry>();
   for (const e of listZipEntries(bytes)) entries.set(e.name.replace(/^\//, ""), e);
@@ -67,7 +69,7 @@ export function readXlsx(bytes: Buffer): Table {
   if (!workbook) throw invalid(DAMAGED);
   let sheets = 0;
   let firstSheetRel: string | null = null;
-  parsePart(
+  await parsePart(
     bytes,
     workbook,
     budget,
@@ -90,7 +92,7 @@ export function readXlsx(bytes: Buffer): Table {
   let sheetPath = "xl/worksheets/sheet1.xml";
   const rels = entries.get("xl/_rels/workbook.xml.rels");
   if (rels && firstSheetRel) {
-    parsePart(
+    await parsePart(
       bytes,
       rels,
       budget,
@@ -114,7 +116,7 @@ export function readXlsx(bytes: Buffer): Table {
     let inT = false;
     let skip = 0; // inside phonetic runs, which are not part of the cell's text
     let text = "";
-    parsePart(
+    await parsePart(
       bytes,
       sst,
       budget,
@@ -163,7 +165,7 @@ export function readXlsx(bytes: Buffer): Table {
   let skip = 0;
   let value = "";
   const where = () => `cell ${letters(col)}${rowNo}`;
-  parsePart(
+  await parsePart(
     bytes,
     sheet,
     budget,
