@@ -19,8 +19,9 @@ type Json = Record<string, unknown> | unknown[];
 
 /**
  * The session's CSRF token. The server sends it as an `x-csrf-token` response header (on
- * /auth/me and sign-in, and on /config once a session has one) or at /auth/csrf when asked;
- * every state-changing request echoes it back.
+ * /auth/me and sign-in, and on /config once a session has one); every state-changing request
+ * echoes it back. An anonymous visitor has none until the first change is refused and the
+ * token is fetched below, because the server makes tokens only when asked for them.
  */
 const CSRF_HEADER = "x-csrf-token";
 let csrfToken: string | null = null;
@@ -56,8 +57,6 @@ export async function apiRequest<T>(
     body && !isForm
       ? { "content-type": "application/json", accept: "application/json" }
       : { accept: "application/json" };
-  // The server makes a token only when asked for it, so ask before the first change.
-  if (method !== "GET" && !csrfToken) await refreshToken();
   if (method !== "GET" && csrfToken) headers[CSRF_HEADER] = csrfToken;
   let res: Response;
   try {

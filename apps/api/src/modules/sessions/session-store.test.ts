@@ -105,6 +105,20 @@ describe("session work only where a request needs it", () => {
     }
   });
 
+  it("refuses a first sign-in without a token as csrf_invalid; with the token asked for, it succeeds (the web client's retry)", async () => {
+    const browser = request.agent(t.app);
+    const first = await browser
+      .post("/api/auth/login")
+      .send({ email: "reviewer@waymark.test", password: t.env.demoPassword });
+    expect([first.status, first.body.error.code]).toEqual([403, "csrf_invalid"]);
+    const { token } = (await browser.get("/api/auth/csrf").expect(200)).body;
+    await browser
+      .post("/api/auth/login")
+      .set("x-csrf-token", token)
+      .send({ email: "reviewer@waymark.test", password: t.env.demoPassword })
+      .expect(200);
+  });
+
   it("gives a new CSRF token at sign-in and refuses the one from before", async () => {
     const agent = await anon(t.app);
     const before = (await agent.get("/api/auth/csrf")).body.token as string;
