@@ -283,6 +283,9 @@ function cellText(type: string, raw: string, shared: string[]): string {
     case "b":
       return raw === "1" ? "true" : raw === "0" ? "false" : raw;
     case "n": {
+      // Spreadsheets write numbers in their shortest form already; only long or exponent forms
+      // are rewritten (as the number they stand for), which also spares a conversion per cell.
+      if (raw.length <= 15 && raw.indexOf("E") < 0 && raw.indexOf("e") < 0) return raw;
       if (raw.length > 40) return raw;
       const n = Number(raw);
       return raw.trim() !== "" && Number.isFinite(n) ? String(n) : raw;

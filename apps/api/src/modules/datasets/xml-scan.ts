@@ -15,6 +15,8 @@ export interface XmlHandlers {
 
 export class XmlSyntaxError extends Error {}
 
+const NO_ATTRIBUTES: Record<string, string> = Object.freeze({}) as Record<string, string>;
+
 const ENTITY = /&(#x[0-9a-fA-F]{1,6}|#[0-9]{1,7}|amp|lt|gt|quot|apos);/g;
 const NAMED: Record<string, string> = { amp: "&", lt: "<", gt: ">", quot: '"', apos: "'" };
 
@@ -124,6 +126,11 @@ export class XmlScanner {
     }
     const selfClosing = body.charCodeAt(body.length - 1) === 47;
     const inner = selfClosing ? body.slice(0, -1) : body;
+    // Most tags in a sheet (<v>, <row>, <is>, <t>) carry no attributes: no object for them.
+    if (!selfClosing && body.indexOf(" ") < 0 && body.indexOf("\t") < 0 && body.indexOf("\n") < 0) {
+      this.h.open?.(localName(body), NO_ATTRIBUTES);
+      return;
+    }
     let k = 0;
     while (k < inner.length && !isSpace(inner.charCodeAt(k))) k++;
     const name = localName(inner.slice(0, k));

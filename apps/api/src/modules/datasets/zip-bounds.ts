@@ -19,7 +19,7 @@ const EOCD_SIGNATURE = 0x06054b50;
 const CENTRAL_SIGNATURE = 0x02014b50;
 const LOCAL_SIGNATURE = 0x04034b50;
 /** Inflated bytes per piece handed on: the count is checked after each. */
-const INFLATE_CHUNK = 64 * 1024;
+const INFLATE_CHUNK = 256 * 1024;
 
 const DAMAGED = "The workbook could not be read; it may be damaged or not an .xlsx file.";
 
@@ -106,7 +106,7 @@ export class InflateBudget {
 }
 
 /**
- * Inflates one part with Node's zlib (native), handing each 64 KB piece to `onChunk` and charging
+ * Inflates one part with Node's zlib (native), handing each 256 KB piece to `onChunk` and charging
  * it to `budget` as it comes; a bomb is stopped within one piece of passing the bound.
  */
 export async function inflateEntry(
