@@ -107,6 +107,40 @@ describe("bad requests get a 4xx in the one error shape, never a 500", () => {
     expect(tiny.body.error.message).toMatch(/too small to reach power/);
     const alpha = await analyst.post("/api/power").send({ k: 3, effectF: 0.25, alpha: 5e-324, power: 0.8 });
     expect(alpha.status).toBe(422);
+    // The plan's power, computed when the plan is saved, goes through the same mapping.
+    const { body } = await analyst
+      .post("/api/studies")
+      .send({
+        title: "Power plan",
+        objective: "Test fixture.",
+        outcomeName: "Yield",
+        outcomeUnit: "g",
+        factorName: "Line",
+        levels: ["North", "South", "East"],
+        controlLevel: null,
+        context: "general",
+      })
+      .expect(201);
+    const plan = await analyst
+      .put(`/api/studies/${body.study.id}/plan`)
+      .send({ power: { effectF: 1e-6, targetPower: 0.8 } });
+    expect(plan.status).toBe(422);
+    expect(plan.body.error.message).toMatch(/too small to reach power/);
+  });
+
+  it("refuses names and units with control characters where a study is saved", async () => {
+    const res = await analyst.post("/api/studies").send({
+      title: "Bell",
+      objective: "Test fixture.",
+      outcomeName: "Yield",
+      outcomeUnit: "g\u0007",
+      factorName: "Line",
+      levels: ["North", "So\u0000uth", "East"],
+      controlLevel: null,
+      context: "general",
+    });
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).toMatch(/control character U\+0007/);
   });
 
   it("a file name in UTF-8 is kept as written; a 300-character name keeps its extension", async () => {
