@@ -94,7 +94,7 @@ export async function startApi({ timeoutMs = 60_000, extraEnv = {}, nodeArgs = [
     }
     await new Promise((r) => setTimeout(r, 200));
   }
-  return { baseUrl, port, stop, logFile };
+  return { baseUrl, port, stop, logFile, pid: child.pid };
 }
 
 /** The `name=value` pairs of a response's Set-Cookie headers, merged over `jar`. */

@@ -2,7 +2,7 @@ import "reflect-metadata";
 import fs from "node:fs";
 import path from "node:path";
 import compression from "compression";
-import express, { Router } from "express";
+import express, { Router, type RequestParamHandler } from "express";
 import session from "express-session";
 import helmet from "helmet";
 import type { DataSource } from "typeorm";
@@ -11,6 +11,7 @@ import { csrfSynchronisedProtection } from "./auth/csrf.js";
 import { absoluteSessionLimit } from "./auth/session-limit.js";
 import type { Env } from "./config/env.js";
 import { errorHandler, notFoundHandler } from "./http/error-handler.js";
+import { HttpError } from "./http/errors.js";
 import { mountRoutes, type MountedRoute } from "./http/route-table.js";
 import { analysisRoutes } from "./modules/analyses/analysis.routes.js";
 import { auditRoutes } from "./modules/audit/audit.routes.js";
@@ -28,6 +29,7 @@ import { reviewQueueRoutes, studyReviewRoutes } from "./modules/reviews/review.r
 import { TypeormSessionStore } from "./modules/sessions/typeorm-session-store.js";
 import { studyRoutes } from "./modules/studies/study.routes.js";
 import { userRoutes } from "./modules/users/user.routes.js";
+import { configureTaskPool } from "./workers/task-pool.js";
 
 export const SESSION_COOKIE = "waymark.sid";
 
@@ -43,6 +45,7 @@ export interface BuiltApp {
 
 /** Builds the Express app around an open data source; server.ts listens, tests use supertest. */
 export function createApp(ds: DataSource, env: Env, services: AppServices): BuiltApp {
+  configureTaskPool({ timeoutMs: env.TASK_TIMEOUT_SECONDS * 1000, memoryMb: env.WORKER_MEMORY_MB });
   const app = express();
   app.disable("x-powered-by");
   if (env.TRUST_PROXY) app.set("trust proxy", 1);
@@ -65,23 +68,38 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   app.use(compression());
   app.use(express.json({ limit: "1mb" }));
 
+  // Health answers before any session work: no cookie parsing, no store read, no write.
+  const early = Router();
+  const healthMounted = mountRoutes(early, "/health", healthRoutes());
+  app.use("/api", early);
+
   const sessionStore = new TypeormSessionStore(ds);
-  app.use(
-    session({
-      name: SESSION_COOKIE,
-      secret: env.sessionSecret,
-      store: sessionStore,
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      // Idle timeout: the cookie and the stored session expire after SESSION_IDLE_MINUTES without a request.
-      cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
-    }),
-  );
+  const sessions = session({
+    name: SESSION_COOKIE,
+    secret: env.sessionSecret,
+    store: sessionStore,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    // Idle timeout: the cookie and the stored session expire after SESSION_IDLE_MINUTES without a request.
+    cookie: { httpOnly: true, sameSite: "lax", secure: "auto", maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+  });
+  // A read without a session cookie has no session to load and makes none: only /api/auth, where
+  // a CSRF token is asked for, and changes (refused without a token) need one.
+  app.use((req, res, next) => {
+    const safe = req.method === "GET" || req.method === "HEAD";
+    const hasCookie = req.headers.cookie?.includes(`${SESSION_COOKIE}=`) ?? false;
+    if (safe && !hasCookie && !req.path.startsWith("/api/auth/")) return next();
+    sessions(req, res, next);
+  });
   const pp = createPassport(ds, env.BCRYPT_COST);
   app.use(pp.initialize());
-  app.use(absoluteSessionLimit(env.SESSION_MAX_HOURS));
-  app.use(pp.session());
+  const sessionLimit = absoluteSessionLimit(env.SESSION_MAX_HOURS);
+  const restoreUser = pp.session();
+  app.use((req, res, next) => {
+    if (!req.session) return next(); // a cookie-less read: nobody is signed in
+    sessionLimit(req, res, (err?: unknown) => (err ? next(err) : restoreUser(req, res, next)));
+  });
   // Mail queued by a request goes out right after it, without the request waiting for it.
   app.use((req, res, next) => {
     if (req.method !== "GET") res.on("finish", () => void services.mail.kick());
@@ -90,8 +108,10 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
 
   const api = Router();
   api.use(csrfSynchronisedProtection);
+  // Ids in the address are checked before any handler, so no "NaN" or "1e3" reaches SQL.
+  for (const name of ["id", "datasetId", "analysisId"]) api.param(name, checkId);
   const routes = [
-    ...mountRoutes(api, "/health", healthRoutes()),
+    ...healthMounted,
     ...mountRoutes(api, "/config", configRoutes(env)),
     ...mountRoutes(api, "/auth", authRoutes(pp, ds, env, sessionStore)),
     ...mountRoutes(api, "/studies", studyRoutes(ds)),
@@ -115,6 +135,18 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   // The table records full paths, as a client sees them.
   return { app, routes: routes.map((r) => ({ ...r, path: `/api${r.path}` })), sessionStore };
 }
+
+/** A row id in the address: a whole number from 1 to 2^31 − 1, written plainly. */
+const checkId: RequestParamHandler = (_req, _res, next, value: string, name: string) => {
+  if (/^[1-9][0-9]{0,9}$/.test(value) && Number(value) <= 2 ** 31 - 1) return next();
+  next(
+    new HttpError(
+      400,
+      "invalid_id",
+      `"${value.slice(0, 40)}" is not a valid ${name === "id" ? "id" : name} in the address; ids are whole numbers.`,
+    ),
+  );
+};
 
 /** Serves the built web app (one port for both) with the SPA fallback, when a build exists. */
 function serveWebApp(app: express.Express, dist: string): void {

@@ -77,6 +77,7 @@ export const AUDIT_ACTIONS = [
   "auth.sign-in",
   "auth.sign-in-failed",
   "auth.sign-out",
+  "auth.reauth-failed",
   "study.created",
   "study.updated",
   "study.design-saved",

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { POWER_METHODS } from "@waymark/stats/vocabulary";
-import { alpha, codedText, person, text, timestamp } from "./common.js";
+import { alpha, codedText, person, printableText, text, timestamp } from "./common.js";
 import {
   adjustment,
   comparisons,
@@ -15,7 +15,12 @@ import { LIMITS } from "./limits.js";
 import { datasetDto } from "./datasets.js";
 
 const levels = z
-  .array(z.string().trim().min(1, "A level name cannot be empty").max(LIMITS.levelName))
+  .array(
+    printableText("A level name", LIMITS.levelName).refine(
+      (s) => s.length >= 1,
+      "A level name cannot be empty",
+    ),
+  )
   .min(LIMITS.minLevels, "List at least two levels of the grouping factor")
   .max(LIMITS.maxLevels, `Waymark compares at most ${LIMITS.maxLevels} groups`)
   .refine((l) => new Set(l).size === l.length, "Level names must be different from each other");
@@ -23,15 +28,15 @@ const levels = z
 /** The study's details, as a person types them. */
 export const studyFields = {
   title: text("Title", LIMITS.title),
-  objective: text("Objective", LIMITS.objective),
+  objective: text("Objective", LIMITS.objective, { allowBreaks: true }),
   outcomeName: text("Outcome name", LIMITS.outcomeName),
-  outcomeUnit: z
-    .string()
-    .trim()
-    .max(LIMITS.outcomeUnit, `Unit must be at most ${LIMITS.outcomeUnit} characters`),
+  outcomeUnit: printableText("Unit", LIMITS.outcomeUnit),
   factorName: text("Grouping factor", LIMITS.factorName),
   levels,
-  controlLevel: z.string().trim().min(1).max(LIMITS.levelName).nullable().optional(),
+  controlLevel: printableText("The control level", LIMITS.levelName)
+    .refine((s) => s.length >= 1, "The control level cannot be empty")
+    .nullable()
+    .optional(),
   alpha: alpha.optional(),
   context: studyContext,
 };
@@ -82,7 +87,6 @@ export const powerPlan = powerPlanInput.extend({
   note: z.string().optional(),
 });
 export type PowerPlan = z.infer<typeof powerPlan>;
-
 
 /** The primary test the plan decides from the design before any data (stored at lock time). */
 export const testPlan = z.object({

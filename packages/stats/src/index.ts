@@ -150,3 +150,12 @@ export * from "./effect-sizes/index.js";
 // Post-hoc comparisons and planning (power, sample size, family-wise error).
 export * from "./posthoc/index.js";
 export * from "./planning/index.js";
+
+// Reading data values typed into files: one rule set for uploads and the command line.
+export {
+  readValue,
+  MISSING_VALUE_TOKENS,
+  MAX_VALUE_CHARS,
+  type ValueReading,
+  type ValueProblem,
+} from "./input/read-value.js";

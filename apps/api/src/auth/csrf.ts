@@ -1,3 +1,4 @@
+import type { Request } from "express";
 import { csrfSync } from "csrf-sync";
 
 /**
@@ -13,3 +14,9 @@ export const { csrfSynchronisedProtection, generateToken } = csrfSync({
     return Array.isArray(v) ? v[0] : v;
   },
 });
+
+/** The session's token when it already has one; never creates one (and so never writes a session). */
+export function existingToken(req: Request): string | undefined {
+  const token = (req.session as { csrfToken?: unknown } | undefined)?.csrfToken;
+  return typeof token === "string" ? token : undefined;
+}

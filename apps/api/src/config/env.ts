@@ -30,6 +30,10 @@ const schema = z.object({
   SESSION_IDLE_MINUTES: z.coerce.number().int().min(1).default(120),
   SESSION_MAX_HOURS: z.coerce.number().int().min(1).default(12),
   UPLOAD_LIMIT_MB: z.coerce.number().positive().max(1024).default(50),
+  /** A parse or analysis running longer is stopped (its worker ended and replaced) and answered 503. */
+  TASK_TIMEOUT_SECONDS: z.coerce.number().positive().max(3600).default(60),
+  /** Heap one worker may use; past it the worker dies, is replaced, and the request gets 413. */
+  WORKER_MEMORY_MB: z.coerce.number().int().min(64).max(16384).default(1024),
   /** Set by npm to the folder the command was typed in; scripts resolve file arguments against it. */
   INIT_CWD: z.string().optional(),
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),
@@ -42,24 +46,37 @@ export type Env = z.infer<typeof schema> & {
   fakeMail: boolean;
 };
 
-/** The one place the API reads process.env. Invalid settings stop start-up with a clear message. */
-export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+/**
+ * The one place the API reads process.env. Invalid settings stop start-up with a clear message.
+ * `purpose: "script"` (backup, restore) skips what only a serving process needs.
+ */
+export function loadEnv(
+  source: NodeJS.ProcessEnv = process.env,
+  { purpose }: { purpose: "server" | "script" } = { purpose: "server" },
+): Env {
   const parsed = schema.safeParse(source);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
     throw new Error(`Invalid configuration:\n${lines.join("\n")}`);
   }
   const env = parsed.data;
-  if (env.NODE_ENV === "production" && !env.SESSION_SECRET && !env.WAYMARK_DEMO) {
-    throw new Error("Invalid configuration:\n  SESSION_SECRET: required in production");
+  // Demo mode and the test suites run on throwaway data; everything else is treated as real use.
+  const throwaway = env.WAYMARK_DEMO || env.NODE_ENV === "test";
+  if (purpose === "server" && !throwaway && !env.SESSION_SECRET) {
+    throw new Error(
+      "Invalid configuration:\n  SESSION_SECRET: required outside demo mode (16+ random characters, e.g. from `openssl rand -hex 32`); for a demo with throwaway data, start with WAYMARK_DEMO=1 (`npm run demo`)",
+    );
   }
   return {
     ...env,
-    // Demo and development get a fixed, clearly non-secret value; production must set its own.
-    sessionSecret: env.SESSION_SECRET ?? "waymark-development-only-session-secret",
+    // Only demo mode and tests get this fixed, clearly non-secret value.
+    sessionSecret: env.SESSION_SECRET ?? "waymark-demo-only-session-secret",
     publicUrl: (env.PUBLIC_URL ?? `http://localhost:${env.PORT}`).replace(/\/$/, ""),
-    /** Demo, development and test start the local fake mail server; production never does. */
-    fakeMail: !env.SMTP_URL && (env.WAYMARK_DEMO || env.NODE_ENV !== "production"),
+    /**
+     * The local fake mail server and the dev mailbox exist in demo mode and tests only: anywhere
+     * else the mailbox would hand invitation links to anonymous callers.
+     */
+    fakeMail: !env.SMTP_URL && throwaway,
     demoPassword: DEMO_PASSWORD,
   };
 }

@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../auth/roles.js";
 import { decide } from "../auth/policy.js";
 import { makeTestApp } from "../test-support/test-app.js";
+import { analysedStudy } from "../test-support/analysed-study.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 type Caller = Role | "signed-out" | "deactivated";
@@ -15,20 +16,22 @@ beforeAll(async () => {
   // A fifth account, deactivated after signing in: its session must stop working at once.
   for (const role of ROLES) {
     const a = await anon(t.app);
-    await a
+    const login = await a
       .post("/api/auth/login")
       .send({ email: `${role}@waymark.test`, password: t.env.demoPassword })
       .expect(200);
+    a.set("x-csrf-token", login.headers["x-csrf-token"] as string); // sign-in replaces the token
     agents.set(role, a);
   }
   const gone = await anon(t.app);
   await t.ds.query(
     `INSERT INTO users (email, display_name, role, password_hash, active) SELECT 'gone@waymark.test', 'Former Analyst', 'analyst', password_hash, 1 FROM users WHERE email = 'analyst@waymark.test'`,
   );
-  await gone
+  const goneLogin = await gone
     .post("/api/auth/login")
     .send({ email: "gone@waymark.test", password: t.env.demoPassword })
     .expect(200);
+  gone.set("x-csrf-token", goneLogin.headers["x-csrf-token"] as string);
   await t.ds.query(`UPDATE users SET active = 0 WHERE email = 'gone@waymark.test'`);
   agents.set("deactivated", gone);
   agents.set("signed-out", await anon(t.app));
@@ -71,4 +74,31 @@ describe("authorization matrix (generated from the route table)", () => {
     }
     expect(failures).toEqual([]);
   }, 120_000);
+
+  it("lets writers read a study and its datasets, checks and analyses only once it is approved", async () => {
+    const { studyId, datasetId, analysisId } = await analysedStudy(agents.get("analyst")!);
+    // Every study-scoped read route, with this study's ids.
+    const reads = t.routes
+      .filter((r) => r.method === "get" && r.path.startsWith("/api/studies/:id"))
+      .map((r) =>
+        r.path
+          .replace(":id", String(studyId))
+          .replace(":datasetId", String(datasetId))
+          .replace(":analysisId", String(analysisId)),
+      );
+    expect(reads.length).toBeGreaterThan(5);
+    const writer = agents.get("writer")!;
+    const asWriter = async () =>
+      Object.fromEntries(await Promise.all(reads.map(async (p) => [p, (await writer.get(p)).status])));
+    const draft = await asWriter();
+    for (const p of reads) expect([p, draft[p]]).toEqual([p, 403]);
+    const list = await writer.get("/api/studies").expect(200);
+    expect(list.body.studies.map((s: { id: number }) => s.id)).not.toContain(studyId);
+
+    await t.ds.query(`UPDATE studies SET status = 'approved' WHERE id = ?`, [studyId]);
+    const approved = await asWriter();
+    for (const p of reads) expect([p, approved[p] === 403 || approved[p] === 401]).toEqual([p, false]);
+    const after = await writer.get("/api/studies").expect(200);
+    expect(after.body.studies.map((s: { id: number }) => s.id)).toContain(studyId);
+  });
 });

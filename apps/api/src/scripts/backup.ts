@@ -25,7 +25,7 @@ export async function backupDatabase(
 }
 
 async function main() {
-  const env = loadEnv();
+  const env = loadEnv(undefined, { purpose: "script" });
   const stamp = new Date().toISOString().replace(/[:.]/g, "-");
   const target =
     process.argv[2] ?? path.join(path.dirname(env.DATABASE_PATH), "backups", `waymark-${stamp}.sqlite`);

@@ -26,7 +26,7 @@ export function restoreDatabase(backup: string, target: string): { kept: string 
 }
 
 function main() {
-  const env = loadEnv();
+  const env = loadEnv(undefined, { purpose: "script" });
   const file = process.argv[2];
   if (!file) {
     console.error("usage: npm run restore -- <backup file>");

@@ -19,9 +19,11 @@ export async function signedIn(
   password: string,
 ) {
   const agent = await anon(app);
-  await agent
+  const res = await agent
     .post("/api/auth/login")
     .send({ email: `${role}@waymark.test`, password })
     .expect(200);
+  // Sign-in replaces the CSRF token; carry the new one, as the web app's API client does.
+  agent.set("x-csrf-token", res.headers["x-csrf-token"] as string);
   return agent;
 }

@@ -19,7 +19,9 @@ type Json = Record<string, unknown> | unknown[];
 
 /**
  * The session's CSRF token. The server sends it as an `x-csrf-token` response header (on
- * /auth/me, /config and sign-in); every state-changing request echoes it back.
+ * /auth/me and sign-in, and on /config once a session has one); every state-changing request
+ * echoes it back. An anonymous visitor has none until the first change is refused and the
+ * token is fetched below, because the server makes tokens only when asked for them.
  */
 const CSRF_HEADER = "x-csrf-token";
 let csrfToken: string | null = null;

@@ -41,6 +41,14 @@ export function analyzeCommand(args: AnalyzeArgs): CommandOutput {
     );
   }
   const csv = readGroupedCsv(text, args.group, args.outcome);
+  if (csv.refused.length > 0) {
+    const named = csv.refused
+      .slice(0, 3)
+      .map((r) => `line ${r.line}: ${r.reading.message}`)
+      .join("; ");
+    const more = csv.refused.length > 3 ? `; and ${csv.refused.length - 3} more` : "";
+    throw new CliError(`'${args.outcome}' holds values that cannot be read as numbers: ${named}${more}`);
+  }
   const warnings: string[] = [];
   if (csv.skippedNoGroup.length) {
     warnings.push(

@@ -65,7 +65,7 @@ describe("waymark-stats analyze", () => {
     const r = await run("analyze", f, "--group", "g", "--outcome", "y");
     expect(r.code).toBe(1);
     oneLine(r);
-    expect(r.err).toContain("line 4 ('three')");
+    expect(r.err).toContain('line 4: "three" is not a number');
   });
 
   it("infinite values → exit 1", async () => {

@@ -1,5 +1,6 @@
 import Papa from "papaparse";
 import type { GroupInput } from "../numeric/centred-sample.js";
+import { readValue, type ValueReading } from "../input/read-value.js";
 import { CliError } from "./cli-error.js";
 
 export interface GroupedCsv {
@@ -9,6 +10,8 @@ export interface GroupedCsv {
   /** Rows skipped because the group cell was empty, with their line numbers. */
   skippedNoGroup: number[];
   delimiter: string;
+  /** Outcome cells refused by readValue (shared with uploads), with their line numbers. */
+  refused: { line: number; reading: Extract<ValueReading, { kind: "refused" }> }[];
 }
 
 /**
@@ -44,6 +47,7 @@ export function readGroupedCsv(text: string, groupColumn: string, outcomeColumn:
 
   const byName = new Map<string, { name: string; values: string[]; rows: number[] }>();
   const skippedNoGroup: number[] = [];
+  const refused: GroupedCsv["refused"] = [];
   let line = 1 + lineBreaks(header);
   let count = 0;
   for (let r = 1; r < rows.length; r++) {
@@ -63,10 +67,23 @@ export function readGroupedCsv(text: string, groupColumn: string, outcomeColumn:
       entry = { name: group, values: [], rows: [] };
       byName.set(group, entry);
     }
-    entry.values.push(row[oi] ?? "");
+    // One reader of values for uploads and the command line; missing cells go on as "" so the
+    // engine counts them, refused cells are reported by line.
+    const reading = readValue(row[oi] ?? "");
+    if (reading.kind === "refused") {
+      refused.push({ line: start, reading });
+      continue;
+    }
+    entry.values.push(reading.kind === "number" ? reading.text : "");
     entry.rows.push(start);
   }
-  return { groups: [...byName.values()], rows: count, skippedNoGroup, delimiter: parsed.meta.delimiter };
+  return {
+    groups: [...byName.values()],
+    rows: count,
+    skippedNoGroup,
+    delimiter: parsed.meta.delimiter,
+    refused,
+  };
 }
 
 /** Line breaks inside a row's (quoted) fields, so later line numbers stay right. */

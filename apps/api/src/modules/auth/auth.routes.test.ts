@@ -71,10 +71,11 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
 
   it("returns the user while signed in and 401 after logout", async () => {
     const agent = await anon(app.app);
-    await agent
+    const login = await agent
       .post("/api/auth/login")
       .send({ email: "reviewer@waymark.test", password: app.env.demoPassword })
       .expect(200);
+    agent.set("x-csrf-token", login.headers["x-csrf-token"] as string);
     const me = await agent.get("/api/auth/me").expect(200);
     expect(me.body.user.role).toBe("reviewer");
     await agent.post("/api/auth/logout").expect(204);
@@ -130,7 +131,7 @@ describe("CSRF protection (synchronizer token, csrf-sync)", () => {
     expect(Number(count[0].n)).toBe(0);
   });
 
-  it("keeps the token valid across sign-in (the session id still changes)", async () => {
+  it("replaces the token at sign-in, as it does the session id", async () => {
     const agent = await anon(app.app);
     const before = await agent.get("/api/auth/csrf");
     const login = await agent
@@ -139,7 +140,8 @@ describe("CSRF protection (synchronizer token, csrf-sync)", () => {
       .expect(200);
     expect(String(login.headers["set-cookie"])).toMatch(/waymark\.sid=/);
     const after = await agent.get("/api/auth/csrf");
-    expect(after.body.token).toBe(before.body.token);
+    expect(after.body.token).not.toBe(before.body.token);
+    expect(login.headers["x-csrf-token"]).toBe(after.body.token);
   });
 });
 

@@ -14,6 +14,8 @@ import type { TypeormSessionStore } from "../sessions/typeorm-session-store.js";
 import { User, toPublicUser } from "../users/user.entity.js";
 import { hashPassword, verifyPassword } from "../../auth/password.js";
 import { passwordProblem } from "../../auth/password-policy.js";
+import { reauth } from "../../auth/reauth-guard.js";
+import { actorOf } from "../../http/actor.js";
 import { loginSchema, passwordChangeSchema } from "./auth.schema.js";
 
 export function authRoutes(
@@ -41,9 +43,9 @@ export function authRoutes(
           .catch(next);
         return;
       }
-      // passport 0.7 regenerates the session id on login, which defeats session fixation.
-      // keepSessionInfo keeps the CSRF token; the session id is still regenerated.
-      req.logIn(user, { session: true, keepSessionInfo: true }, (e) => {
+      // passport 0.7 regenerates the session id on login, which defeats session fixation; the
+      // CSRF token is replaced too, so a token seen before sign-in is worthless after it.
+      req.logIn(user, { session: true }, (e) => {
         if (e) return next(e);
         (req.session as unknown as { startedAt: number }).startedAt = Date.now();
         ds.getRepository(User)
@@ -55,7 +57,7 @@ export function authRoutes(
               { action: "auth.sign-in", summary: `Signed in as ${user.role}` },
             ),
           )
-          .then(() => res.setHeader(CSRF_HEADER, generateToken(req)).json({ user }))
+          .then(() => res.setHeader(CSRF_HEADER, generateToken(req, true)).json({ user }))
           .catch(next);
       });
     })(req, res, next);
@@ -85,9 +87,13 @@ export function authRoutes(
       .addSelect("u.passwordHash")
       .where("u.id = :id", { id: req.user!.id })
       .getOneOrFail();
+    const actor = actorOf(req);
+    reauth.check(ds, actor, "a password change");
     if (!(await verifyPassword(body.currentPassword, row.passwordHash))) {
+      await reauth.failed(ds, actor, "a password change");
       throw new HttpError(403, "wrong_password", "currentPassword: That is not your current password.");
     }
+    reauth.succeeded(ds, actor);
     const problem = passwordProblem(body.newPassword, [row.email, row.displayName]);
     if (problem) throw new HttpError(400, "weak_password", `newPassword: ${problem}`);
     await users.update(

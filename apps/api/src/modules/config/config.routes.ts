@@ -1,4 +1,4 @@
-import { CSRF_HEADER, generateToken } from "../../auth/csrf.js";
+import { CSRF_HEADER, existingToken } from "../../auth/csrf.js";
 import { policy } from "../../auth/policy.js";
 import type { Env } from "../../config/env.js";
 import type { RouteSpec } from "../../http/route-table.js";
@@ -13,9 +13,12 @@ export function configRoutes(env: Env): RouteSpec[] {
       policy: policy.public,
       summary: "Public settings for the sign-in page",
       handlers: [
-        // The sign-in page loads this first: it hands the browser its CSRF token too.
-        (req, res) =>
-          void res.setHeader(CSRF_HEADER, generateToken(req)).json(
+        // Hands on the session's CSRF token when there is one; an anonymous visitor gets none here
+        // (a token is made only when asked for at /auth/csrf), so no session row is written.
+        (req, res) => {
+          const token = existingToken(req);
+          if (token) res.setHeader(CSRF_HEADER, token);
+          res.json(
             env.WAYMARK_DEMO
               ? {
                   demo: true,
@@ -23,7 +26,8 @@ export function configRoutes(env: Env): RouteSpec[] {
                   demoAccounts: DEMO_USERS.map(({ email, role }) => ({ email, role })),
                 }
               : { demo: false },
-          ),
+          );
+        },
       ],
     },
   ];

@@ -100,7 +100,9 @@ describe("dataset upload", () => {
       .attach("file", Buffer.from(GOOD), "yield-v2.csv")
       .expect(201);
     expect(again.body.dataset.version).toBe(2);
-    const list = await writer.get(`/api/studies/${id}/datasets`).expect(200);
+    // Writers see approved studies only; the analyst lists the draft's versions.
+    await writer.get(`/api/studies/${id}/datasets`).expect(403);
+    const list = await analyst.get(`/api/studies/${id}/datasets`).expect(200);
     expect(list.body.datasets.map((x: { version: number }) => x.version)).toEqual([2, 1]);
   });
 
@@ -191,7 +193,7 @@ describe("dataset upload", () => {
     },
   );
 
-  it("reads a semicolon-delimited file with a byte-order mark, and lists NaN text as non-numeric", async () => {
+  it("reads a semicolon-delimited file with a byte-order mark, and lists NaN text as missing, as the command line does", async () => {
     const id = await lockedStudy(analyst);
     const csv =
       "\uFEFFLine;Yield (g)\nNorth;10.5\nNorth;11\nNorth;NaN\nSouth;12\nSouth;12.5\nEast;9\nEast;9.5\n";
@@ -207,7 +209,7 @@ describe("dataset upload", () => {
       { name: "East", n: 2 },
     ]);
     expect(res.body.dataset.report.excluded).toEqual([
-      { row: 4, reason: "non-numeric", value: "NaN", column: "Yield (g)" },
+      { row: 4, reason: "missing", value: "NaN", column: "Yield (g)" },
     ]);
   });
 

@@ -1,3 +1,5 @@
+import { readValue, type ValueReading } from "@waymark/stats";
+import { controlCharacterIn, printable } from "../../text/printable.js";
 import type { Table } from "./parse-upload.js";
 
 export interface ExtractedGroups {
@@ -27,17 +29,30 @@ export interface ColumnChoice {
 }
 
 const MAX_LISTED = 500;
-/** Cells read as "no value" rather than as bad text (common practice in data exchange). */
-const MISSING = new Set(["", "na", "n/a", "null", ".", "-"]);
-const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+/** Unknown group names listed in a report, and how much of each is quoted: reports stay small. */
+const MAX_UNKNOWN_LISTED = 50;
+const MAX_NAME_CHARS = 80;
 
+function clip(text: string): string {
+  return text.length > MAX_NAME_CHARS ? `${text.slice(0, MAX_NAME_CHARS)}…` : text;
+}
+
+function listColumns(columns: string[]): string {
+  const shown = columns.slice(0, 20).map((c) => `"${clip(c)}"`);
+  return columns.length > 20 ? `${shown.join(", ")} and ${columns.length - 20} more` : shown.join(", ");
+}
+
+/** Missing and decimal rules are the stats package's readValue, shared with the command line. */
 export function isMissing(cell: string): boolean {
-  return MISSING.has(cell.trim().toLowerCase());
+  return readValue(cell).kind === "missing";
 }
 
 export function isDecimal(cell: string): boolean {
-  return DECIMAL.test(cell.trim());
+  return readValue(cell).kind === "number";
 }
+
+/** Values the engine cannot hold: the upload is refused rather than storing them. */
+const BLOCKING_PROBLEMS = new Set(["too-large", "too-small", "infinite", "too-long"]);
 
 /**
  * Turns a table into groups of decimal-text values under the chosen layout, with a report of
@@ -54,11 +69,26 @@ export function extractGroups(
     excludedCount++;
     if (excluded.length < MAX_LISTED) excluded.push({ row, reason, value: value.slice(0, 80), column });
   };
+  // The first refused cell of each kind of problem, named in the messages with its place.
+  const refusals = new Map<string, { row: number; column: string; message: string; count: number }>();
+  const refuse = (row: number, column: string, r: Extract<ValueReading, { kind: "refused" }>) => {
+    const seen = refusals.get(r.problem);
+    if (seen) seen.count++;
+    else refusals.set(r.problem, { row, column, message: r.message, count: 1 });
+    exclude(row, "non-numeric", r.text, column);
+  };
+  // A group name is printed in figures, the report and e-mail: one with a control character is refused.
+  let controlProblem: string | null = null;
+  const controlIn = (name: string, where: string) => {
+    const c = controlProblem ? null : controlCharacterIn(name);
+    if (c)
+      controlProblem = `${where}: the group name "${clip(printable(name, { singleLine: true }))}" contains the control character ${c}; remove it and upload again.`;
+  };
   const byName = new Map<string, { values: string[]; rows: number[] }>();
   const add = (name: string, value: string, row: number) => {
     let g = byName.get(name);
     if (!g) byName.set(name, (g = { values: [], rows: [] }));
-    g.values.push(value.trim());
+    g.values.push(value);
     g.rows.push(row);
   };
   const known = new Set(levels);
@@ -70,40 +100,44 @@ export function extractGroups(
     const oi = table.columns.indexOf(choice.outcomeColumn ?? "");
     if (gi < 0)
       messages.push(
-        `The group column "${choice.groupColumn ?? ""}" is not in the file; its columns are ${table.columns.map((c) => `"${c}"`).join(", ")}.`,
+        `The group column "${clip(choice.groupColumn ?? "")}" is not in the file; its columns are ${listColumns(table.columns)}.`,
       );
     if (oi < 0)
       messages.push(
-        `The outcome column "${choice.outcomeColumn ?? ""}" is not in the file; its columns are ${table.columns.map((c) => `"${c}"`).join(", ")}.`,
+        `The outcome column "${clip(choice.outcomeColumn ?? "")}" is not in the file; its columns are ${listColumns(table.columns)}.`,
       );
     if (gi === oi && gi >= 0) messages.push("The group and outcome columns must be different columns.");
     if (messages.length === 0) {
       for (const { row, cells } of table.rows) {
         const group = (cells[gi] ?? "").trim();
         const value = cells[oi] ?? "";
+        const r = readValue(value);
+        controlIn(group, `Row ${row}, column "${clip(table.columns[gi]!)}"`);
         if (group === "") exclude(row, "missing-group", value, table.columns[gi]!);
-        else if (isMissing(value)) exclude(row, "missing", value, table.columns[oi]!);
-        else if (!isDecimal(value)) exclude(row, "non-numeric", value, table.columns[oi]!);
+        else if (r.kind === "missing") exclude(row, "missing", value, table.columns[oi]!);
+        else if (r.kind === "refused") refuse(row, table.columns[oi]!, r);
         else if (known.size > 0 && !known.has(group)) {
-          unknown.add(group);
+          if (unknown.size < MAX_UNKNOWN_LISTED) unknown.add(clip(group));
           exclude(row, "unknown-level", group, table.columns[gi]!);
-        } else add(group, value, row);
+        } else add(group, r.text, row);
       }
     }
   } else {
     table.columns.forEach((col, ci) => {
       if (col === "") return;
+      controlIn(col, `Column ${ci + 1} of the header row`);
       if (known.size > 0 && !known.has(col)) {
-        unknown.add(col);
+        if (unknown.size < MAX_UNKNOWN_LISTED) unknown.add(clip(col));
         return;
       }
       for (const { row, cells } of table.rows) {
         const value = cells[ci] ?? "";
         // In the wide layout blank cells are padding of shorter columns, not missing observations.
         if (value.trim() === "") continue;
-        if (isMissing(value)) exclude(row, "missing", value, col);
-        else if (!isDecimal(value)) exclude(row, "non-numeric", value, col);
-        else add(col, value, row);
+        const r = readValue(value);
+        if (r.kind === "missing") exclude(row, "missing", value, col);
+        else if (r.kind === "refused") refuse(row, col, r);
+        else add(col, r.text, row);
       }
     });
   }
@@ -120,32 +154,36 @@ export function extractGroups(
     messages.push(
       `No data for the planned level${missingLevels.length > 1 ? "s" : ""} ${missingLevels.map((m) => `"${m}"`).join(", ")}.`,
     );
-  const nonNumeric = excluded.filter((e) => e.reason === "non-numeric");
-  const decimalComma = nonNumeric.some((e) => /^[+-]?\d+,\d+$/.test(e.value.trim()));
-  if (decimalComma) {
-    messages.push(
-      "Some values use a decimal comma (e.g. 4,5); Waymark reads a decimal point. Convert the column and upload again.",
-    );
+  // Each kind of refused value named once, at its first cell, with how many more there are.
+  const refusalMessages: string[] = [];
+  const blockingRefusals: string[] = [];
+  for (const [problem, r] of refusals) {
+    const more = r.count > 1 ? ` (${r.count - 1} more cell${r.count === 2 ? "" : "s"} like it)` : "";
+    const text = `Row ${r.row}, column "${clip(r.column)}": ${r.message}${more}.`;
+    (BLOCKING_PROBLEMS.has(problem) ? blockingRefusals : refusalMessages).push(text);
   }
-  // Problems that stop the analysis come first, so a refusal names the one that matters.
+  // Problems that stop the analysis come first, so a refusal names the one that matters:
+  // a control character or a value that cannot be held, then the rest.
+  const refused = [...(controlProblem ? [controlProblem] : []), ...blockingRefusals];
   const blocking = messages.filter((m) => m.startsWith("The "));
   const small = groups.filter((g) => g.values.length < 2);
   for (const g of small) {
     blocking.push(
-      `Group "${g.name}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
+      `Group "${clip(g.name)}" has ${g.values.length} usable value${g.values.length === 1 ? "" : "s"}; every group needs at least two.`,
     );
   }
-  if (groups.length < 2 && blocking.length === 0) {
+  if (groups.length < 2 && blocking.length === 0 && refused.length === 0) {
     blocking.push(
       `Only ${groups.length} group${groups.length === 1 ? "" : "s"} with data; a comparison needs at least two.`,
     );
   }
-  // When decimal commas are why the data cannot be used, that is the cause to name first.
-  const commaMessage = messages.find((m) => m.startsWith("Some values use a decimal comma"));
-  if (blocking.length > 0 && commaMessage) blocking.unshift(commaMessage);
+  // When refused values are why too little data is left, they are the cause to name first.
+  if (blocking.length > 0) blocking.unshift(...refusalMessages);
+  blocking.unshift(...refused);
+  const others = [...refusalMessages, ...messages.filter((m) => !m.startsWith("The "))];
   const rowsUsed = groups.reduce((s, g) => s + g.values.length, 0);
   const usable = blocking.length === 0;
-  const allMessages = [...new Set([...blocking, ...messages.filter((m) => !m.startsWith("The "))])];
+  const allMessages = [...new Set([...blocking, ...others])];
 
   return {
     data: { groups },

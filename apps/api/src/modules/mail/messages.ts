@@ -1,3 +1,4 @@
+import { printable } from "../../text/printable.js";
 import type { Study } from "../studies/study.entity.js";
 import type { StudyStatus } from "../studies/study-status.js";
 import type { MailContent } from "./outbox.js";
@@ -21,6 +22,10 @@ function compose(
   paragraphs: string[],
   link: { href: string; label: string },
 ): MailContent {
+  // Names and titles come from users: no control characters in headers or bodies.
+  to = { ...to, displayName: printable(to.displayName, { singleLine: true }) };
+  subject = printable(subject, { singleLine: true });
+  paragraphs = paragraphs.map((p) => printable(p));
   const text = [
     `Hello ${to.displayName},`,
     "",

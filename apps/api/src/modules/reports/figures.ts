@@ -1,3 +1,4 @@
+import { printable } from "../../text/printable.js";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import * as Plot from "@observablehq/plot";
@@ -37,6 +38,9 @@ function render(make: (document: Document) => SVGSVGElement | HTMLElement, width
 
 /** Box of quartiles and median per group with every value drawn over it. */
 export function groupsFigure(groups: { name: string; values: number[] }[], yLabel: string): Buffer {
+  // The chart renderer refuses control characters: names and labels go through the one sanitizer.
+  groups = groups.map((g) => ({ ...g, name: printable(g.name, { singleLine: true }) }));
+  yLabel = printable(yLabel, { singleLine: true });
   const data = groups.flatMap((g, gi) =>
     g.values.map((v) => ({ group: g.name, value: v, colour: GROUP_COLOURS[gi % GROUP_COLOURS.length]! })),
   );
@@ -75,6 +79,8 @@ export function intervalsFigure(
   pairs: { label: string; diff: number; lower: number; upper: number }[],
   xLabel: string,
 ): Buffer {
+  pairs = pairs.map((p) => ({ ...p, label: printable(p.label, { singleLine: true }) }));
+  xLabel = printable(xLabel, { singleLine: true });
   // Room for the longest pair label at 13 px (about 7 px a character), and for the x label below the ticks.
   const marginLeft = Math.min(360, 24 + 7 * Math.max(...pairs.map((p) => p.label.length)));
   const width = marginLeft + 480;

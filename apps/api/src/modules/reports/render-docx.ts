@@ -1,3 +1,4 @@
+import { printable, printableDeep } from "../../text/printable.js";
 import fs from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -112,6 +113,9 @@ export async function renderDocx(
   opts: { draft: boolean; paperSize: "A4" | "Letter"; title: string; images: Map<string, Buffer> },
 ): Promise<Buffer> {
   const children: (Paragraph | Table)[] = [];
+  // Every string that becomes XML goes through the one sanitizer first.
+  blocks = printableDeep(blocks);
+  opts = { ...opts, title: printable(opts.title, { singleLine: true }) };
   for (const b of blocks) {
     if (b.type === "heading") {
       const level =

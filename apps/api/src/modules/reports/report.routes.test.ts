@@ -57,13 +57,13 @@ beforeAll(async () => {
 }, 120_000);
 
 describe("report rules", () => {
-  it("is 401 signed out, 403 for an analyst without draft, 409 for a writer before approval", async () => {
+  it("is 401 signed out, 403 for an analyst without draft, 403 for a writer before approval", async () => {
     const id = studies[0]!.id;
     await request(t.app).get(`/api/studies/${id}/report.docx`).expect(401);
     const a = await analyst.get(`/api/studies/${id}/report.docx`).expect(403);
     expect(a.body.error.message).toMatch(/draft=1/);
-    const w = await writer.get(`/api/studies/${id}/report.docx`).expect(409);
-    expect(w.body.error.message).toMatch(/once the study is approved/);
+    const w = await writer.get(`/api/studies/${id}/report.docx`).expect(403);
+    expect(w.body.error.message).toMatch(/Writers see approved studies only/);
   });
 
   it("gives the analyst a draft marked as not approved on every page", async () => {

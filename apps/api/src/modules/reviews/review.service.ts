@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from "typeorm";
 import { verifyPassword } from "../../auth/password.js";
+import { reauth } from "../../auth/reauth-guard.js";
 import type { Actor } from "../../http/actor.js";
 import { ConflictError, ForbiddenError, HttpError } from "../../http/errors.js";
 import { Analysis } from "../analyses/analysis.entity.js";
@@ -170,7 +171,10 @@ export async function approve(
     .where("u.id = :id", { id: actor.user.id })
     .getOneOrFail();
   // Checked before the transaction: bcrypt is slow and must not hold the write lock.
+  reauth.check(ds, actor, "an approval signature");
   const passwordOk = await verifyPassword(input.password, hashRow.passwordHash);
+  if (passwordOk) reauth.succeeded(ds, actor);
+  else await reauth.failed(ds, actor, "an approval signature", studyId);
   await inTransaction(ds, async (tx) => {
     const { study, round, analysis } = await loadForDecision(tx, actor, studyId);
     if (!passwordOk)

@@ -4,12 +4,17 @@ import { Study } from "./study.entity.js";
 
 type Db = DataSource | EntityManager;
 
-/** Loads a study the caller may read: analysts their own, other roles any. */
+/** Loads a study the caller may read: analysts their own, writers approved ones, other roles any. */
 export async function loadReadableStudy(db: Db, id: number, user: Express.User): Promise<Study> {
   const study = Number.isInteger(id) && id > 0 ? await db.getRepository(Study).findOneBy({ id }) : null;
   if (!study) throw new NotFoundError(`There is no study ${id}.`);
   if (user.role === "analyst" && study.ownerId !== user.id)
     throw new ForbiddenError("This study belongs to another analyst.");
+  // Writers turn approved results into text: drafts, their data and their analyses are not theirs to read.
+  if (user.role === "writer" && study.status !== "approved")
+    throw new ForbiddenError(
+      `Writers see approved studies only; this study is ${study.status.replace("_", " ")}.`,
+    );
   return study;
 }
 

@@ -19,12 +19,17 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       method: "get",
       path: "",
       policy: ANY_ROLE,
-      summary: "List studies (analysts: their own)",
+      summary: "List studies (analysts: their own; writers: approved ones)",
       handlers: [
         async (req, res) => {
           const user = req.user!;
           const studies = await ds.getRepository(Study).find({
-            where: user.role === "analyst" ? { ownerId: user.id } : {},
+            where:
+              user.role === "analyst"
+                ? { ownerId: user.id }
+                : user.role === "writer"
+                  ? { status: "approved" }
+                  : {},
             order: { updatedAt: "DESC" },
           });
           res.json({ studies: await Promise.all(studies.map((s) => studyDto(ds, s))) });

@@ -5,6 +5,7 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
   "auth.sign-in": "Signed in",
   "auth.sign-in-failed": "Sign-in refused",
   "auth.sign-out": "Signed out",
+  "auth.reauth-failed": "Password re-entry refused",
   "study.created": "Study created",
   "study.updated": "Study details changed",
   "study.design-saved": "Design answers saved",
@@ -31,6 +32,7 @@ export const ACTION_LABELS: Record<AuditAction, string> = {
 export const FLAGGED_ACTIONS: ReadonlySet<string> = new Set([
   "analysis.override",
   "auth.sign-in-failed",
+  "auth.reauth-failed",
   "mail.failed",
 ]);
 
