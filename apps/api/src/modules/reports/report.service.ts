@@ -62,7 +62,7 @@ export async function generateReport(
   const label = `${study.outcomeName}${study.outcomeUnit ? ` (${study.outcomeUnit})` : ""}`;
   images.set(
     "groups",
-    groupsFigure(
+    await groupsFigure(
       dataset.observations.groups.map((g) => ({ name: g.name, values: g.values.map(Number) })),
       label,
     ),
@@ -73,7 +73,7 @@ export async function generateReport(
     analysis.chosenTest,
     comparisonsOf(study.design) === "vs-control" && !!study.controlLevel,
   );
-  if (pairs.length > 0) images.set("intervals", intervalsFigure(pairs, `Difference in ${label}`));
+  if (pairs.length > 0) images.set("intervals", await intervalsFigure(pairs, `Difference in ${label}`));
   return { blocks, images, draft, title: study.title };
 }
 
