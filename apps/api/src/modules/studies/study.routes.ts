@@ -5,7 +5,7 @@ import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { loadSettings } from "../organization/organization.routes.js";
 import { loadReadableStudy } from "./study.access.js";
-import { Study } from "./study.entity.js";
+import { listStudies } from "./study-list.query.js";
 import { createStudySchema, designSchema, planSchema, updateStudySchema } from "./study.schema.js";
 import { createStudy, lockPlan, saveDesign, savePlan, studyDto, updateStudy } from "./study.service.js";
 
@@ -22,12 +22,7 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       summary: "List studies (analysts: their own)",
       handlers: [
         async (req, res) => {
-          const user = req.user!;
-          const studies = await ds.getRepository(Study).find({
-            where: user.role === "analyst" ? { ownerId: user.id } : {},
-            order: { updatedAt: "DESC" },
-          });
-          res.json({ studies: await Promise.all(studies.map((s) => studyDto(ds, s))) });
+          res.json({ studies: await listStudies(ds, req.user!) });
         },
       ],
     },
