@@ -1,12 +1,17 @@
 #!/usr/bin/env bash
-# Installs the Debian packages the test suites need, only when they are missing:
-# chromium (browser tests) and python3-scipy / python3-statsmodels (reference checks run by /usr/bin/python3).
+# Installs the Debian packages the test suites need, only when they are missing: chromium (browser
+# tests) and python3 (tests/contract/cli-shape.py). The scipy/statsmodels reference answers are
+# committed fixtures (tests/reference/fixtures); only `npm run reference:regen -w @waymark/tests`,
+# which regenerates them, needs python3-scipy and python3-statsmodels.
 set -euo pipefail
 
 need=()
 [ -x /usr/bin/chromium ] || need+=(chromium)
-/usr/bin/python3 -c "import scipy" 2>/dev/null || need+=(python3-scipy)
-/usr/bin/python3 -c "import statsmodels" 2>/dev/null || need+=(python3-statsmodels)
+[ -x /usr/bin/python3 ] || need+=(python3)
+if [ "${1:-}" = "--reference" ]; then
+  /usr/bin/python3 -c "import scipy" 2>/dev/null || need+=(python3-scipy)
+  /usr/bin/python3 -c "import statsmodels" 2>/dev/null || need+=(python3-statsmodels)
+fi
 
 if [ ${#need[@]} -eq 0 ]; then
   echo "system packages: all present"

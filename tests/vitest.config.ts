@@ -5,5 +5,8 @@ export default defineConfig({
     include: ["reference/**/*.test.ts", "api/**/*.test.ts"],
     testTimeout: 120_000,
     hookTimeout: 120_000,
+    // The reference suites are pure reads of committed fixtures and the one API suite builds its own
+    // app and database, so the files share a module graph per worker.
+    isolate: false,
   },
 });

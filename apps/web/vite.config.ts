@@ -17,6 +17,11 @@ export default defineConfig({
   build: { outDir: "dist", sourcemap: true, manifest: true },
   test: {
     environment: "jsdom",
+    // One jsdom per worker instead of one per file (setting it up took most of the run). Files share
+    // that window, so stubbed globals are put back after every test; the setup file unmounts
+    // after every test.
+    isolate: false,
+    unstubGlobals: true,
     include: ["src/**/*.test.{ts,tsx}"],
     setupFiles: ["src/test/setup.ts"],
     testTimeout: 30_000,

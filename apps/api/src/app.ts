@@ -65,7 +65,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
       },
     }),
   );
-  app.use(compression());
+  app.use(compression({ threshold: 8 * 1024 })); // below 8 KiB, gzip costs more time than it saves
   app.use(express.json({ limit: "1mb" }));
 
   // Health answers before any session work: no cookie parsing, no store read, no write.

@@ -167,7 +167,7 @@ describe("a server killed mid-request leaves a sound database", () => {
       expectConsistent(readStoredInvariants(dbPath));
 
       await restart();
-      const health = await fetch(`${api.url}/api/health`);
+      const health = await analyst.request("GET", "/api/health");
       expect(health.status).toBe(200);
       const before = readStoredInvariants(dbPath).analysisIds.length;
       const again = await run();

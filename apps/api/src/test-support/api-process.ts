@@ -1,4 +1,5 @@
 import { spawn, type ChildProcess } from "node:child_process";
+import http from "node:http";
 import net from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
@@ -14,6 +15,18 @@ async function freePort(): Promise<number> {
       const { port } = s.address() as net.AddressInfo;
       s.close(() => resolve(port));
     });
+  });
+}
+
+/** GET /api/health on a connection of its own, so no kept-alive socket outlives a killed server. */
+function healthStatus(url: string): Promise<number> {
+  return new Promise((resolve, reject) => {
+    http
+      .get(`${url}/api/health`, { agent: false }, (res) => {
+        res.resume();
+        res.on("end", () => resolve(res.statusCode ?? 0));
+      })
+      .on("error", reject);
   });
 }
 
@@ -65,8 +78,7 @@ export async function startApi(databasePath: string, timeoutMs = 60_000): Promis
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`The API exited during start-up:\n${log}`);
     try {
-      const res = await fetch(`${url}/api/health`);
-      if (res.ok) return api;
+      if ((await healthStatus(url)) === 200) return api;
     } catch {
       // Not listening yet.
     }

@@ -1,3 +1,5 @@
+import http from "node:http";
+
 /**
  * A signed-in browser, reduced to what the API needs: one session cookie and the session's CSRF
  * token on every change. For tests against a real server process, where supertest's agent is
@@ -23,15 +25,44 @@ export class HttpSession {
     this.csrf = ((await res.json()) as { token: string }).token;
   }
 
-  async request(method: string, path: string, body?: BodyInit, headers: Record<string, string> = {}) {
-    const res = await fetch(this.baseUrl + path, {
-      method,
-      body,
-      headers: {
-        ...headers,
-        cookie: [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; "),
-        ...(method === "GET" ? {} : { "x-csrf-token": this.csrf }),
-      },
+  /**
+   * One request on a connection of its own (`agent: false`, so `Connection: close`): the server is
+   * killed and restarted under this client, and a kept-alive socket to the dead process (or to one
+   * closing it for idleness) would fail the next request by chance instead of by a fault.
+   */
+  async request(
+    method: string,
+    path: string,
+    body?: BodyInit,
+    headers: Record<string, string> = {},
+  ): Promise<Response> {
+    // Let the platform encode the body (JSON text, or multipart with its boundary), then send the bytes.
+    const encoded = new Request(this.baseUrl + path, { method, body });
+    const bytes = body === undefined ? undefined : Buffer.from(await encoded.arrayBuffer());
+    const contentType = encoded.headers.get("content-type");
+    const sent: Record<string, string> = {
+      ...(contentType ? { "content-type": contentType } : {}),
+      ...headers,
+      cookie: [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; "),
+      ...(method === "GET" ? {} : { "x-csrf-token": this.csrf }),
+      ...(bytes ? { "content-length": String(bytes.length) } : {}),
+    };
+    const res = await new Promise<Response>((resolve, reject) => {
+      const req = http.request(this.baseUrl + path, { method, headers: sent, agent: false }, (incoming) => {
+        const chunks: Buffer[] = [];
+        incoming.on("data", (c: Buffer) => chunks.push(c));
+        incoming.on("error", reject);
+        incoming.on("end", () => {
+          const h = new Headers();
+          for (let i = 0; i < incoming.rawHeaders.length; i += 2)
+            h.append(incoming.rawHeaders[i]!, incoming.rawHeaders[i + 1]!);
+          const status = incoming.statusCode ?? 0;
+          const noBody = status === 204 || status === 304 || method === "HEAD";
+          resolve(new Response(noBody ? null : Buffer.concat(chunks), { status, headers: h }));
+        });
+      });
+      req.on("error", reject);
+      req.end(bytes);
     });
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(";");

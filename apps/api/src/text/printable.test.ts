@@ -18,8 +18,8 @@ describe("printable: the one sanitizer for figures, DOCX and e-mail (XML 1.0 §2
     expect(controlCharacterIn("g\tkg")).toBe("U+0009");
   });
 
-  it("lets a figure render whose group name holds a control character (the renderer refused it before)", () => {
-    const png = groupsFigure(
+  it("lets a figure render whose group name holds a control character (the renderer refused it before)", async () => {
+    const png = await groupsFigure(
       [
         { name: "No\u0007rth", values: [1, 2, 3] },
         { name: "South", values: [2, 3, 4] },

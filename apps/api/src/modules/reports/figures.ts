@@ -1,9 +1,21 @@
 import { printable } from "../../text/printable.js";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import * as Plot from "@observablehq/plot";
-import { Resvg } from "@resvg/resvg-js";
-import { JSDOM } from "jsdom";
+
+/**
+ * jsdom, Plot and resvg took about 3 s of the API's start-up while only reports draw figures, so
+ * they load on the first figure and stay loaded.
+ */
+type Libraries = {
+  Plot: typeof import("@observablehq/plot");
+  Resvg: typeof import("@resvg/resvg-js").Resvg;
+  JSDOM: typeof import("jsdom").JSDOM;
+};
+let libraries: Promise<Libraries> | undefined;
+const load = (): Promise<Libraries> =>
+  (libraries ??= Promise.all([import("@observablehq/plot"), import("@resvg/resvg-js"), import("jsdom")]).then(
+    ([Plot, resvg, jsdom]) => ({ Plot, Resvg: resvg.Resvg, JSDOM: jsdom.JSDOM }),
+  ));
 
 const FONT_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../../../../fonts");
 const FONT_FILES = ["IBMPlexSans-Regular.ttf", "IBMPlexSans-SemiBold.ttf"].map((f) => path.join(FONT_DIR, f));
@@ -22,9 +34,13 @@ const GROUP_COLOURS = [
 
 const STYLE = { fontFamily: "IBM Plex Sans", fontSize: "13px", background: "#ffffff", color: "#1E2A32" };
 
-function render(make: (document: Document) => SVGSVGElement | HTMLElement, width: number): Buffer {
+async function render(
+  make: (Plot: Libraries["Plot"], document: Document) => SVGSVGElement | HTMLElement,
+  width: number,
+): Promise<Buffer> {
+  const { Plot, Resvg, JSDOM } = await load();
   const { window } = new JSDOM("<!doctype html><html><body></body></html>");
-  const node = make(window.document);
+  const node = make(Plot, window.document);
   const svg = node.tagName.toLowerCase() === "svg" ? node : node.querySelector("svg");
   if (!svg) throw new Error("the chart produced no SVG");
   svg.setAttribute("xmlns", "http://www.w3.org/2000/svg");
@@ -37,7 +53,10 @@ function render(make: (document: Document) => SVGSVGElement | HTMLElement, width
 }
 
 /** Box of quartiles and median per group with every value drawn over it. */
-export function groupsFigure(groups: { name: string; values: number[] }[], yLabel: string): Buffer {
+export async function groupsFigure(
+  groups: { name: string; values: number[] }[],
+  yLabel: string,
+): Promise<Buffer> {
   // The chart renderer refuses control characters: names and labels go through the one sanitizer.
   groups = groups.map((g) => ({ ...g, name: printable(g.name, { singleLine: true }) }));
   yLabel = printable(yLabel, { singleLine: true });
@@ -46,7 +65,7 @@ export function groupsFigure(groups: { name: string; values: number[] }[], yLabe
   );
   const width = Math.max(480, 150 * groups.length);
   return render(
-    (document) =>
+    (Plot, document) =>
       Plot.plot({
         document,
         width,
@@ -75,17 +94,17 @@ export function groupsFigure(groups: { name: string; values: number[] }[], yLabe
 }
 
 /** Each pairwise difference with its simultaneous confidence interval, against a zero line. */
-export function intervalsFigure(
+export async function intervalsFigure(
   pairs: { label: string; diff: number; lower: number; upper: number }[],
   xLabel: string,
-): Buffer {
+): Promise<Buffer> {
   pairs = pairs.map((p) => ({ ...p, label: printable(p.label, { singleLine: true }) }));
   xLabel = printable(xLabel, { singleLine: true });
   // Room for the longest pair label at 13 px (about 7 px a character), and for the x label below the ticks.
   const marginLeft = Math.min(360, 24 + 7 * Math.max(...pairs.map((p) => p.label.length)));
   const width = marginLeft + 480;
   return render(
-    (document) =>
+    (Plot, document) =>
       Plot.plot({
         document,
         width,

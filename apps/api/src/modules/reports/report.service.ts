@@ -74,13 +74,13 @@ export async function generateReport(
   const label = `${study.outcomeName}${study.outcomeUnit ? ` (${study.outcomeUnit})` : ""}`;
   images.set(
     "groups",
-    groupsFigure(
+    await groupsFigure(
       dataset.observations.groups.map((g) => ({ name: g.name, values: g.values.map(Number) })),
       label,
     ),
   );
   const pairs = intervalPairs(analysis.result.posthoc, analysis.posthocMethod);
-  if (pairs.length > 0) images.set("intervals", intervalsFigure(pairs, `Difference in ${label}`));
+  if (pairs.length > 0) images.set("intervals", await intervalsFigure(pairs, `Difference in ${label}`));
   return { blocks, images, draft, title: study.title };
 }
 

@@ -5,9 +5,9 @@ import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { loadSettings } from "../organization/organization.routes.js";
 import { loadReadableStudy } from "./study.access.js";
-import { Study } from "./study.entity.js";
 import { createStudySchema, designSchema, planSchema, updateStudySchema } from "./study.schema.js";
 import { createStudy, lockPlan, saveDesign, savePlan, studyDto, updateStudy } from "./study.service.js";
+import { Study } from "./study.entity.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
 const ANALYST = policy.roles("analyst");
