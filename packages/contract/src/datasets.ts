@@ -54,7 +54,22 @@ export const datasetDto = z.object({
 export type DatasetDto = z.infer<typeof datasetDto>;
 
 export const datasetResponse = z.object({ dataset: datasetDto });
-export const datasetListResponse = z.object({ datasets: z.array(datasetDto) });
+/** In the versions list: `active` marks the version analyses and submissions use. */
+export const datasetListItem = datasetDto.extend({ active: z.boolean() });
+export type DatasetListItem = z.infer<typeof datasetListItem>;
+export const datasetListResponse = z.object({ datasets: z.array(datasetListItem) });
+
+/**
+ * A 422 `data_does_not_match_plan` carries this in `error.details`: what the file lacks, and the
+ * near-miss names the analyst can confirm by sending `levelMap` with the upload again.
+ */
+export const planMismatchDetails = z.object({
+  missing: z.array(z.string()),
+  tooSmall: z.array(z.object({ level: z.string(), n: z.number() })),
+  unplanned: z.array(z.string()),
+  suggestions: z.array(z.object({ found: z.string(), planned: z.string() })),
+});
+export type PlanMismatchDetails = z.infer<typeof planMismatchDetails>;
 
 export const datasetPreview = z.object({
   columns: z.array(z.string()),

@@ -42,12 +42,26 @@ export const queueItem = z.object({
 export type QueueItem = z.infer<typeof queueItem>;
 export const reviewQueueResponse = z.object({ queue: z.array(queueItem) });
 
+/** The analyst's answer to a reviewer's comment. */
+export const replyBody = z.object({ body: z.string().trim().min(1, "Write the reply").max(LIMITS.comment) });
+export type ReplyBody = z.infer<typeof replyBody>;
+
+export const reviewReply = z.object({
+  id: z.number(),
+  body: z.string(),
+  author: person,
+  createdAt: timestamp,
+});
+export type ReviewReply = z.infer<typeof reviewReply>;
+export const replyResponse = z.object({ reply: reviewReply.extend({ commentId: z.number() }) });
+
 export const reviewComment = z.object({
   id: z.number(),
   step: reviewStep.nullable(),
   body: z.string(),
   author: person.nullable(),
   createdAt: timestamp,
+  replies: z.array(reviewReply).default([]),
 });
 export type ReviewComment = z.infer<typeof reviewComment>;
 
@@ -58,6 +72,21 @@ export const signatureRecord = z.object({
   contentHash: z.string(),
 });
 export type SignatureRecord = z.infer<typeof signatureRecord>;
+
+const changed = <T extends z.ZodTypeAny>(t: T) => z.object({ before: t, after: t, changed: z.boolean() });
+/** From round 2 on: what changed since the round before (reviews/round-changes.ts). */
+export const roundChanges = z.object({
+  sinceRound: z.number(),
+  dataVersion: changed(z.number()),
+  test: changed(z.string()),
+  posthoc: changed(z.string()),
+  deviation: changed(z.string().nullable()),
+  keyNumbers: z.array(
+    z.object({ name: z.string(), before: z.string().nullable(), after: z.string().nullable() }),
+  ),
+  summary: z.array(z.string()),
+});
+export type RoundChanges = z.infer<typeof roundChanges>;
 
 export const reviewRound = z.object({
   id: z.number(),
@@ -70,6 +99,7 @@ export const reviewRound = z.object({
   decidedAt: timestamp.nullable(),
   decidedBy: person.nullable(),
   comments: z.array(reviewComment),
+  changes: roundChanges.nullable().default(null),
   signature: signatureRecord.nullable(),
 });
 export type ReviewRound = z.infer<typeof reviewRound>;
