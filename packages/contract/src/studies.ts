@@ -121,11 +121,65 @@ export const planDto = planSettings.extend({
   testPlan: z.union([testPlan, outOfScopePlan]),
   plannedTest: z.union([omnibusTest, z.literal("out-of-scope")]),
   plannedPosthoc: z.union([posthocFamily, z.literal("none")]),
+  /** The family-wise error of the comparisons this plan makes (k − 1 against a control, else all pairs). */
+  familyWise: z
+    .object({
+      m: z.number(),
+      comparisons,
+      alpha: z.number(),
+      fwerIndependent: z.number(),
+      bonferroniAlpha: z.number(),
+    })
+    .nullable(),
   comparisons,
   lockedAt: timestamp.nullable(),
   lockedBy: person.nullable(),
 });
 export type PlanDto = z.infer<typeof planDto>;
+
+export const STUDY_STATES = [
+  "out-of-scope",
+  "design-open",
+  "plan-open",
+  "awaiting-data",
+  "awaiting-analysis",
+  "ready-to-submit",
+  "changes-requested",
+  "in-review",
+  "approved",
+] as const;
+
+/** A study's one status, computed on the server from its records (study-status.ts). */
+export const studyProgress = z.object({
+  state: z.enum(STUDY_STATES),
+  label: z.string(),
+  detail: z.string(),
+  nextStep: z.object({
+    who: z.enum(["analyst", "reviewer", "writer"]),
+    where: z.enum(["design", "plan", "data", "choice", "results", "review", "report"]),
+    action: z.string(),
+  }),
+});
+export type StudyProgress = z.infer<typeof studyProgress>;
+
+const reviewReplyDto = z.object({ id: z.number(), body: z.string(), author: person, createdAt: timestamp });
+/** After "request changes": that round's comments, each at its step, with the analyst's replies. */
+export const openReview = z.object({
+  round: z.number(),
+  decidedAt: timestamp.nullable(),
+  decidedBy: person.nullable(),
+  comments: z.array(
+    z.object({
+      id: z.number(),
+      step: z.string().nullable(),
+      body: z.string(),
+      author: person,
+      createdAt: timestamp,
+      replies: z.array(reviewReplyDto),
+    }),
+  ),
+});
+export type OpenReview = z.infer<typeof openReview>;
 
 export const studyDto = z.object({
   id: z.number(),
@@ -151,6 +205,10 @@ export const studyDto = z.object({
   datasetCount: z.number(),
   latestDataset: datasetDto.nullable(),
   latestAnalysisId: z.number().nullable(),
+  /** The version analyses and submissions use (chosen with "make active", else the newest). */
+  activeDataset: datasetDto.nullable(),
+  progress: studyProgress,
+  openReview: openReview.nullable(),
 });
 export type StudyDto = z.infer<typeof studyDto>;
 

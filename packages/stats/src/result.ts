@@ -14,3 +14,9 @@ export type { Reading } from "./reporting/readings.js";
 export type { OutlierReport, GroupOutliers, FlaggedValue } from "./assumptions/outliers.js";
 export type { QqPlot } from "./assumptions/qq-plot.js";
 export type { SdRatio } from "./assumptions/sd-ratio.js";
+export {
+  deviationSentence,
+  errorRateSentences,
+  primaryTestSentence,
+  sensitivitySentences,
+} from "./reporting/choice-sentences.js";

@@ -108,7 +108,7 @@ export function trimmedMeansAnova(
   if (constant.length > 0) {
     return {
       available: false,
-      reason: `The trimmed-means test weights each group by its winsorized variance; group${constant.length > 1 ? "s" : ""} ${constant.join(", ")} ${constant.length > 1 ? "have" : "has"} zero winsorized variance, so the weights are undefined`,
+      reason: `The trimmed-means test weights each group by its winsorized variance; group${constant.length > 1 ? "s" : ""} ${constant.join(", ")} ${constant.length > 1 ? "have" : "has"} zero winsorized variance, so the weights cannot be formed`,
     };
   }
   const { F, df1, df2 } = trimmedWelchF(

@@ -25,7 +25,7 @@ describe("welchAnova", () => {
     expect(w).toEqual({
       available: false,
       reason:
-        "Welch's ANOVA weights each group by n/variance; group 'B' has zero variance, so the weights are undefined",
+        "Welch's ANOVA weights each group by n/variance; group 'B' has zero variance, so the weights cannot be formed",
     });
   });
 

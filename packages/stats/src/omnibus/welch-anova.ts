@@ -40,7 +40,7 @@ export function welchAnova(input: SampleInput): WelchAnovaResult | Unavailable {
   if (constant.length > 0) {
     return {
       available: false,
-      reason: `Welch's ANOVA weights each group by n/variance; group${constant.length > 1 ? "s" : ""} ${constant.join(", ")} ${constant.length > 1 ? "have" : "has"} zero variance, so the weights are undefined`,
+      reason: `Welch's ANOVA weights each group by n/variance; group${constant.length > 1 ? "s" : ""} ${constant.join(", ")} ${constant.length > 1 ? "have" : "has"} zero variance, so the weights cannot be formed`,
     };
   }
   let W = 0;

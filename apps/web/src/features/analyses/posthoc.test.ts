@@ -24,17 +24,26 @@ describe("posthocView", () => {
     expect(v.hasIntervals).toBe(true);
   });
 
-  it("Dunn's rows carry the rank-biserial r and no interval", () => {
+  it("Dunn's rows carry the rank-biserial r and the Hodges–Lehmann shift with its interval", () => {
     const v = posthocView("kruskal-wallis", "all-pairs", r);
     if (!("rows" in v) || !Array.isArray(r.posthoc.dunn)) throw new Error("Dunn pairs expected");
-    const pair = r.posthoc.dunn[0]!;
+    const pair = r.posthoc.dunn[0]! as (typeof r.posthoc.dunn)[number] & {
+      shift?: number;
+      lower?: number;
+      upper?: number;
+    };
     expect(v.rows[0]).toMatchObject({
       effect: pair.rankBiserial.available ? pair.rankBiserial.r : null,
-      lower: null,
-      upper: null,
+      diff: pair.shift,
+      lower: pair.lower,
+      upper: pair.upper,
       pAdj: pair.pAdj,
     });
-    expect(v.hasIntervals).toBe(false);
+    // The shift lies inside its own interval (Hodges & Lehmann 1963: the estimate is the median of the differences the interval brackets).
+    expect(v.rows[0]!.diff!).toBeGreaterThanOrEqual(v.rows[0]!.lower!);
+    expect(v.rows[0]!.diff!).toBeLessThanOrEqual(v.rows[0]!.upper!);
+    expect(v.centreLabel).toBe("shift");
+    expect(v.hasIntervals).toBe(true);
     expect(v.effectLabel).toBe("r");
   });
 

@@ -14,6 +14,8 @@ export interface PairView {
 
 export interface PosthocView {
   rows: PairView[];
+  /** What `diff` and its interval measure: a difference of means, or a Hodges–Lehmann shift. */
+  centreLabel: "difference" | "shift";
   effectLabel: "r" | "g";
   effectNote: string;
   hasIntervals: boolean;
@@ -38,7 +40,8 @@ export function posthocView(
           a: row.a,
           b: row.b,
           // num(): a number analyze() withheld as not finite arrives as Unavailable; show a dash.
-          diff: num(row.diff),
+          // Rank families: the Hodges–Lehmann shift, with its distribution-free interval.
+          diff: num(row.diff ?? row.shift),
           lower: num(row.lower),
           upper: num(row.upper),
           pAdj: num(row.pAdj),
@@ -48,6 +51,7 @@ export function posthocView(
   );
   return {
     rows: view,
+    centreLabel: rank ? "shift" : "difference",
     effectLabel: rank ? "r" : "g",
     effectNote: rank
       ? "r: the rank-biserial correlation of the two groups (−1 to 1)."

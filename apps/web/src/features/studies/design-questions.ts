@@ -70,13 +70,60 @@ export const DESIGN_QUESTIONS: DesignQuestion[] = [
       findOut:
         "Check how the outcome is recorded: does it have a physical unit and many possible values, or a handful of ordered categories?",
       assume:
-        "Waymark treats the outcome as a measured quantity; the checks still steer towards a rank-based test when the data show extreme values or a clearly non-normal shape.",
+        "Waymark treats the outcome as a measured quantity. The checks on the data inform the reading and the sensitivity analyses; they do not change the test the plan names.",
     },
     short: {
       continuous: "Measured quantity",
       ordinal: "Ordered rating",
       unsure: "Not sure (treated as measured)",
     },
+  },
+  {
+    key: "question",
+    question: "What should the comparison tell you about a measured outcome?",
+    why: "The question decides the primary test before any data are seen: a question about averages is answered by Welch's ANOVA, a question about which group tends to have larger values by the Kruskal–Wallis test. The checks on the data never switch one for the other.",
+    options: [
+      {
+        value: "means",
+        label: "Whether the average amounts differ",
+        detail: "For example the mean strength or the mean handling time of each group.",
+      },
+      {
+        value: "larger-values",
+        label: "Whether one group tends to have larger values",
+        detail: "Which group's values tend to lie above another's, without asking about averages.",
+      },
+      UNSURE,
+    ],
+    notSure: {
+      findOut:
+        "Ask what decision the result feeds: a cost, dose or total over many units depends on the averages; a question of which option usually does better is about larger values.",
+      assume: "Waymark plans a comparison of averages (Welch's ANOVA), the more common question.",
+    },
+    short: {
+      means: "Average amounts",
+      "larger-values": "Which group tends to be larger",
+      unsure: "Not sure (averages)",
+    },
+  },
+  {
+    key: "groupSizes",
+    question: "Does the plan put the same number of units in every group?",
+    why: "Classic one-way ANOVA holds its error rate best when the groups are the same size; with unequal sizes the plan uses Welch's ANOVA for a question about averages.",
+    options: [
+      { value: "equal", label: "Yes, the same number in every group", detail: "A balanced design." },
+      {
+        value: "unequal",
+        label: "No, the groups differ in size",
+        detail: "For example whatever arrived in each group during the study period.",
+      },
+      UNSURE,
+    ],
+    notSure: {
+      findOut: "Look at how units are allocated: a fixed number per group, or as they come.",
+      assume: "Waymark assumes unequal sizes, the cautious reading.",
+    },
+    short: { equal: "Equal sizes", unequal: "Unequal sizes", unsure: "Not sure (unequal)" },
   },
   {
     key: "hasControl",

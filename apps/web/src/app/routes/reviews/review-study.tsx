@@ -43,7 +43,7 @@ export function ReviewStudyRoute() {
   const a = analysis.data ?? null;
   const readings = checks.data?.readings ?? [];
   const attention = readings.filter((r) => r.level === "attention").length;
-  const overridden = !!a && (!!a.override || a.recommendedTest !== a.chosenTest);
+  const overridden = !!a && (!!a.deviation || a.plannedTest !== a.chosenTest);
   const rec = a && isAvailable(a.result.recommendation) ? a.result.recommendation : null;
 
   const steps = [
@@ -125,7 +125,7 @@ export function ReviewStudyRoute() {
             {a && (
               <div className="flex flex-col gap-4">
                 <ChoiceFacts analysis={a} />
-                {rec && <RecommendationCard rec={rec} plannedTest={s.plan.plannedTest} />}
+                {rec && <RecommendationCard rec={rec} />}
               </div>
             )}
           </ReviewSection>

@@ -4,6 +4,7 @@ import { studyPath } from "@/config/paths";
 import { useChecks } from "@/features/analyses/api/get-checks";
 import { RecommendationCard } from "@/features/analyses/components/recommendation-card";
 import { RunAnalysisForm } from "@/features/analyses/components/run-analysis-form";
+import { TestChoiceStory } from "@/features/analyses/components/test-choice-story";
 import { StepHeading } from "@/components/ui/step-heading";
 import { OutOfScopeStop } from "@/features/studies/components/out-of-scope-stop";
 import { UnavailableNote } from "@/features/analyses/components/unavailable-note";
@@ -20,22 +21,23 @@ export function StudyChoiceRoute() {
     <div className="flex flex-col gap-5">
       <StepHeading
         title="Test choice"
-        intro="The test the plan and the checks point to, with the reasons. Another test can be chosen only with a written reason."
+        intro="The locked plan names the primary test. The checks, the sensitivity analyses and the error-rate check below inform how to read it; running another test is a deviation from the plan that needs a written justification."
       />
-      {checks.isPending && <p className="text-ink-soft">Loading the recommendation…</p>}
-      {checks.error && (
-        <ErrorPanel title="The recommendation could not be loaded" message={checks.error.message} />
-      )}
-      {checks.data && !isAvailable(rec) && <UnavailableNote what="The recommendation" value={rec} />}
-      {isAvailable(rec) && rec.test === "out-of-scope" && <OutOfScopeStop reason={rec.reasons[0]} />}
-      {isAvailable(rec) && rec.test !== "out-of-scope" && ds && (
+      {checks.isPending && <p className="text-ink-soft">Loading the plan's test for these data…</p>}
+      {checks.error && <ErrorPanel title="The checks could not be loaded" message={checks.error.message} />}
+      {checks.data && !isAvailable(rec) && <UnavailableNote what="The plan's test" value={rec} />}
+      {isAvailable(rec) && rec.test === "out-of-scope" && <OutOfScopeStop reason={rec.reasons[0]?.text} />}
+      {isAvailable(rec) && rec.test !== "out-of-scope" && ds && checks.data && (
         <>
-          <RecommendationCard rec={rec} plannedTest={study.plan.plannedTest} />
+          <RecommendationCard rec={rec} />
+          <TestChoiceStory result={checks.data.checks} />
           {latestAnalysis && latestAnalysis.datasetId === ds.id && (
             <p className="text-sm text-ink-soft">
               This data version was analysed with{" "}
-              {latestAnalysis.chosenTest === rec.test ? "the recommended test" : "another test"}; running
-              again adds a new analysis.
+              {latestAnalysis.chosenTest === rec.test
+                ? "the plan's primary test"
+                : "another test, as a deviation from the plan"}
+              ; running again adds a new analysis.
             </p>
           )}
           {canEdit && (
@@ -43,7 +45,8 @@ export function StudyChoiceRoute() {
               studyId={study.id}
               datasetId={ds.id}
               datasetVersion={ds.version}
-              recommended={rec.test}
+              primary={rec.test}
+              computable={rec.computable}
               onDone={() => navigate(studyPath(study.id, "results"))}
             />
           )}

@@ -20,13 +20,17 @@ export function PosthocTable({
     <div className="overflow-x-auto">
       <table className="w-full text-sm" aria-label="Post-hoc comparisons">
         <caption className="mb-1 text-left text-xs text-ink-soft">
-          {methodName}. Difference = first group minus second{unit ? `, in ${unit}` : ""}; interval:
-          simultaneous {Math.round((1 - alpha) * 100)}%. {view.effectNote}
+          {methodName}.{" "}
+          {view.centreLabel === "shift"
+            ? "Shift = the Hodges–Lehmann estimate of how far the first group's values lie above the second's"
+            : "Difference = first group minus second"}
+          {unit ? `, in ${unit}` : ""}; intervals hold {Math.round((1 - alpha) * 100)}% together.{" "}
+          {view.effectNote}
         </caption>
         <thead className="border-b border-ink/15 text-right text-ink-soft">
           <tr>
             <th className="p-1.5 text-left font-medium">Pair</th>
-            <th className="p-1.5 font-medium">Difference</th>
+            <th className="p-1.5 font-medium">{view.centreLabel === "shift" ? "Shift" : "Difference"}</th>
             <th className="p-1.5 font-medium">Interval</th>
             <th className="p-1.5 font-medium">
               Adjusted <S>p</S>
@@ -68,7 +72,7 @@ export function PosthocTable({
       </table>
       {!view.hasIntervals && (
         <p className="mt-1 text-xs text-ink-soft">
-          This method gives adjusted p-values without intervals for the differences.
+          No pair has an interval here; the report notes the reason for each.
         </p>
       )}
     </div>

@@ -97,21 +97,24 @@ describe("ResultsPanel", () => {
     expect(screen.queryByTestId("caution-note")).toBeNull();
   });
 
-  it("marks an override for the reviewer", () => {
+  it("marks a deviation from the plan for the reviewer", () => {
     renderWithProviders(
       <ResultsPanel
         study={makeStudy()}
         analysis={makeAnalysis({
           chosenTest: "kruskal-wallis",
           posthocMethod: "dunn",
-          override: { justification: "Ratings on a coarse 1–7 scale." },
+          plannedTest: "anova",
+          deviation: { justification: "Ratings on a coarse 1–7 scale." },
           result: equal,
         })}
       />,
     );
-    expect(screen.getByText("Override, flagged for the reviewer.")).toBeTruthy();
+    expect(screen.getByText("Deviation from the plan, shown to the reviewer.")).toBeTruthy();
     expect(
-      screen.getByText(/the Kruskal–Wallis test was used instead of classic one-way ANOVA/i),
+      screen.getByText(
+        /the Kruskal–Wallis test was run instead of the plan's primary test, classic one-way ANOVA/i,
+      ),
     ).toBeTruthy();
   });
 });

@@ -12,6 +12,8 @@ import { PosthocTable } from "./posthoc-table";
 import { SignificanceNote } from "./significance-note";
 import { S } from "./stat-symbol";
 import { UnavailableNote } from "./unavailable-note";
+import { TestChoiceStory } from "./test-choice-story";
+import { deviationSentence } from "@waymark/stats/result";
 
 /** A sentence only when it carries no missing number. */
 function clean(lines: unknown): string[] {
@@ -53,12 +55,12 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
         {formatDateTime(analysis.createdAt)}
         {analysis.createdBy ? ` by ${analysis.createdBy.displayName}` : ""} · engine {analysis.engineVersion}
       </p>
-      {analysis.override && (
-        <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm">
-          <span className="font-semibold text-amber-800">Override, flagged for the reviewer.</span>{" "}
-          {sentenceStart(testName(analysis.chosenTest))} was used instead of{" "}
-          {testName(analysis.recommendedTest)}, the recommended test. Reason given: “
-          {analysis.override.justification}”
+      {analysis.deviation && (
+        <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm" data-testid="deviation">
+          <span className="font-semibold text-amber-800">
+            Deviation from the plan, shown to the reviewer.
+          </span>{" "}
+          {deviationSentence(analysis.plannedTest, analysis.chosenTest, analysis.deviation.justification)}
         </p>
       )}
 
@@ -133,6 +135,8 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
           </>
         )}
       </section>
+
+      <TestChoiceStory result={r} />
 
       <section aria-labelledby="posthoc-title" className="rounded-lg bg-paper p-5 shadow-sm">
         <h3 id="posthoc-title" className="font-semibold">

@@ -9,43 +9,48 @@ import { OMNIBUS_TESTS, type OmnibusTest as TestId } from "@waymark/stats/vocabu
 
 const MIN_JUSTIFICATION = LIMITS.minJustification;
 
-export const runAnalysisSchema = (recommended: string) =>
+export const runAnalysisSchema = (primary: string) =>
   z
     .object({ choice: z.enum(["recommended", "other"]), test: z.string(), justification: z.string() })
     .superRefine((v, ctx) => {
       if (v.choice !== "other") return;
-      if (!v.test || v.test === recommended)
+      if (!v.test || v.test === primary)
         ctx.addIssue({ code: "custom", path: ["test"], message: "Choose the test you want to use instead" });
       const len = v.justification.trim().length;
       if (len < MIN_JUSTIFICATION)
         ctx.addIssue({
           code: "custom",
           path: ["justification"],
-          message: `Write at least ${MIN_JUSTIFICATION} characters on why you depart from the recommendation (${len} so far)`,
+          message: `Write at least ${MIN_JUSTIFICATION} characters on why you depart from the plan (${len} so far)`,
         });
     });
 type Values = { choice: "recommended" | "other"; test: string; justification: string };
 
-/** Runs the analysis with the recommended test, or with another one and a written reason the reviewer sees. */
+/**
+ * Runs the plan's primary test, or another one as a deviation from the plan with a written
+ * justification the reviewer sees. A primary test that cannot be computed is not offered.
+ */
 export function RunAnalysisForm({
   studyId,
   datasetId,
   datasetVersion,
-  recommended,
+  primary,
+  computable = true,
   onDone,
 }: {
   studyId: number;
   datasetId: number;
   datasetVersion: number;
-  recommended: TestId;
+  primary: TestId;
+  computable?: boolean;
   onDone: (a: Analysis) => void;
 }) {
   const run = useCreateAnalysis(studyId);
-  const others = OMNIBUS_TESTS.filter((t) => t !== recommended);
+  const others = OMNIBUS_TESTS.filter((t) => t !== primary);
   return (
     <Form
-      schema={runAnalysisSchema(recommended) as unknown as z.ZodType<Values, Values>}
-      defaultValues={{ choice: "recommended", test: "", justification: "" }}
+      schema={runAnalysisSchema(primary) as unknown as z.ZodType<Values, Values>}
+      defaultValues={{ choice: computable ? "recommended" : "other", test: "", justification: "" }}
       aria-label="Run the analysis"
       className="flex flex-col gap-4 rounded-lg bg-paper p-5 shadow-sm"
       onSubmit={(v) =>
@@ -65,20 +70,21 @@ export function RunAnalysisForm({
             <fieldset className="flex flex-col gap-2 text-sm">
               <legend className="font-semibold">Which test runs on data version {datasetVersion}?</legend>
               <label className="flex items-center gap-2">
-                <input type="radio" value="recommended" {...register("choice")} /> The recommendation:{" "}
-                {testTitle(recommended)}
+                <input type="radio" value="recommended" disabled={!computable} {...register("choice")} /> The
+                plan's primary test: {testTitle(primary)}
+                {!computable && " (cannot be computed on these data)"}
               </label>
               <label className="flex items-center gap-2">
-                <input type="radio" value="other" {...register("choice")} /> Another test, with a written
-                reason
+                <input type="radio" value="other" {...register("choice")} /> A deviation from the plan:
+                another test, with a written justification
               </label>
             </fieldset>
             {other && (
               <div className="flex flex-col gap-3 rounded-md border-l-4 border-amber bg-amber-100 p-4">
-                <p className="text-sm font-semibold text-amber-800">Flagged for the reviewer</p>
+                <p className="text-sm font-semibold text-amber-800">A deviation from the plan</p>
                 <p className="text-sm">
-                  Departing from the recommendation is allowed, but the reason is stored with the analysis and
-                  the reviewer sees it marked.
+                  The justification is stored with the analysis; the reviewer sees it as a deviation from the
+                  locked plan, and the report states it.
                 </p>
                 <div className="flex flex-col gap-1 text-sm">
                   <label htmlFor="override-test" className="font-medium">
