@@ -1,4 +1,9 @@
-import type { AnalysisDto as Analysis, DatasetDto as Dataset, StudyDto as Study } from "@waymark/contract";
+import type {
+  AnalysisDto as Analysis,
+  DatasetDto as Dataset,
+  StudyDto as Study,
+  StudyProgress,
+} from "@waymark/contract";
 import type { AnalysisResult } from "@waymark/stats/result";
 import { engineResult } from "./engine-fixtures";
 
@@ -27,8 +32,17 @@ export function makeStudy(over: Partial<Study> = {}): Study {
       policy: "classic-first",
       adjust: "holm",
       alpha: 0.05,
+      testPlan: { test: "anova", posthoc: "tukey-kramer", rule: null, reasons: [] },
       plannedTest: "anova",
       plannedPosthoc: "tukey-kramer",
+      // Three groups, all pairs: m = 3, 1 − (1 − .05)³ = .142625 (common practice), .05 / 3 each.
+      familyWise: {
+        m: 3,
+        comparisons: "all-pairs",
+        alpha: 0.05,
+        fwerIndependent: 0.142625,
+        bonferroniAlpha: 0.05 / 3,
+      },
       comparisons: "all-pairs",
       power: null,
       lockedAt: null,
@@ -37,6 +51,20 @@ export function makeStudy(over: Partial<Study> = {}): Study {
     datasetCount: 0,
     latestDataset: null,
     latestAnalysisId: null,
+    activeDataset: over.latestDataset ?? null,
+    progress: makeProgress(),
+    openReview: null,
+    ...over,
+  };
+}
+
+/** The server's one status (apps/api/src/modules/studies/study-status.ts), here for a new study. */
+export function makeProgress(over: Partial<StudyProgress> = {}): StudyProgress {
+  return {
+    state: "design-open",
+    label: "Design questions open",
+    detail: "Some design questions are not answered yet.",
+    nextStep: { who: "analyst", where: "design", action: "Answer the design questions" },
     ...over,
   };
 }
@@ -89,10 +117,10 @@ export function makeAnalysis(over: Partial<Analysis> = {}): Analysis {
     engineVersion: "0.1.0",
     createdAt: "2025-12-04T11:00:00.000Z",
     createdBy: { id: 1, displayName: "Ada Okafor" },
-    recommendedTest: "anova",
+    plannedTest: "anova",
     chosenTest: "anova",
     posthocMethod: "tukey-kramer",
-    override: null,
+    deviation: null,
     planSnapshot: {},
     result: engineResult("equal-spread"),
     summary: [],

@@ -3,12 +3,12 @@ import { formatDf, formatP, formatStat } from "@/lib/format";
 import { formatDateTime } from "@/lib/format";
 import { testTitle } from "@/lib/labels";
 import { isAvailable, num } from "@/lib/result-values";
-import type {
-  AnalysisDto as Analysis,
-  DesignQuestion as DesignKey,
-  StudyDto as Study,
+import {
+  DESIGN_QUESTIONS,
+  type AnalysisDto as Analysis,
+  type StudyDto as Study,
+  type StudyProgress,
 } from "@waymark/contract";
-import type { Recommendation } from "@waymark/stats/result";
 
 export type StepState = "done" | "open" | "locked";
 
@@ -18,8 +18,10 @@ export interface StepStatus {
   state: StepState;
   /** The one fact that matters about this step right now. */
   fact: string;
-  /** Shown in amber: an override, a study out of scope, data changed after the analysis. */
+  /** Shown in amber: a deviation from the plan, a study out of scope, data not yet analysed. */
   attention?: boolean;
+  /** The step the server's status names as the next one (`study.progress.nextStep.where`). */
+  next?: boolean;
 }
 
 export const STEP_LABELS: Record<StudyStepSegment, string> = {
@@ -31,27 +33,9 @@ export const STEP_LABELS: Record<StudyStepSegment, string> = {
   results: "Results",
 };
 
-export const DESIGN_KEYS: DesignKey[] = ["independence", "scale", "hasControl", "comparisons", "assignment"];
+export const DESIGN_KEYS = DESIGN_QUESTIONS;
 
 const short = (iso: string | null) => formatDateTime(iso);
-
-/** A few words for why a test was recommended, from the engine's first reason. */
-export function shortReason(rec: Pick<Recommendation, "test" | "reasons"> | null | undefined): string {
-  if (!rec) return "as recommended";
-  const first = (rec.reasons[0] ?? "").toLowerCase();
-  if (rec.test === "kruskal-wallis") {
-    if (first.includes("ordinal")) return "ordinal outcome";
-    if (first.includes("outlier")) return "extreme outliers";
-    if (first.includes("normal")) return "non-normal residuals";
-    return "rank-based";
-  }
-  if (rec.test === "welch") {
-    if (first.includes("policy")) return "Welch-first policy";
-    return "unequal spread";
-  }
-  if (rec.test === "anova") return "similar spread";
-  return "as recommended";
-}
 
 /** The omnibus result in reporting form, for the trail and sentences: "F(2, 27) = 4.21, p = .025". */
 export function omnibusShort(analysis: Analysis): string | null {
@@ -67,18 +51,35 @@ export function omnibusShort(analysis: Analysis): string | null {
 }
 
 /**
- * Where a study stands on each step. A step is locked until the one before it allows it, open
- * while there is work to do, done when its record exists. Pure: the trail and the tests share it.
- * `analysis` is the latest analysis when it has been loaded (it only sharpens the facts).
+ * The step of the trail the server's next step points at. "review" and "report" happen outside
+ * the study's steps, so they point at the results, where the analysis they concern is.
+ */
+export function progressStep(progress: StudyProgress): StudyStepSegment {
+  const where = progress.nextStep.where;
+  return where === "review" || where === "report" ? "results" : where;
+}
+
+/** The version analyses and submissions use: the one made active, else the newest upload. */
+export const activeVersion = (study: Study) => study.activeDataset ?? study.latestDataset;
+
+/**
+ * Where a study stands on each step of its trail. A step is locked until the one before it
+ * allows it, open while there is work to do, done when its record exists; the study's status
+ * itself (its label and sentence) is the server's `study.progress`, and the step it names as
+ * next is marked. Pure: the trail and the tests share it. `analysis` is the latest analysis
+ * when it has been loaded (it only sharpens the facts).
  */
 export function studySteps(study: Study, analysis?: Analysis | null): StepStatus[] {
   const answered = DESIGN_KEYS.filter((k) => study.design[k] !== undefined).length;
   const outOfScope = !!study.outOfScope;
   const designDone = study.designComplete && !outOfScope;
   const planLocked = !!study.plan.lockedAt;
-  const dataset = study.latestDataset;
+  const dataset = activeVersion(study);
   const hasAnalysis = study.latestAnalysisId !== null;
-  const analysisStale = !!(analysis && dataset && analysis.datasetId !== dataset.id);
+  // The server's status says whether the active version still waits for its analysis.
+  const notAnalysed =
+    study.progress.state === "awaiting-analysis" ||
+    (study.progress.state === "changes-requested" && study.progress.nextStep.where === "choice");
 
   const design: StepStatus = outOfScope
     ? {
@@ -97,29 +98,30 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
           fact: `${answered} of ${DESIGN_KEYS.length} answered`,
         };
 
-  const plan: StepStatus = !designDone
+  const plan: StepStatus = planLocked
     ? {
         key: "plan",
         label: STEP_LABELS.plan,
-        state: planLocked ? "done" : "locked",
-        fact: planLocked
-          ? `Plan locked ${short(study.plan.lockedAt)}`
-          : "Opens when the design questions are answered",
+        state: "done",
+        fact: `Plan locked ${short(study.plan.lockedAt)}`,
       }
-    : planLocked
+    : !designDone
       ? {
           key: "plan",
           label: STEP_LABELS.plan,
-          state: "done",
-          fact: `Plan locked ${short(study.plan.lockedAt)}`,
+          state: "locked",
+          fact: "Opens when the design questions are answered",
         }
       : {
           key: "plan",
           label: STEP_LABELS.plan,
           state: "open",
-          fact: study.plan.power
-            ? `${testTitle(study.plan.plannedTest)}, n = ${study.plan.power.nPerGroup} per group, not locked`
-            : `${testTitle(study.plan.plannedTest)} planned, not locked`,
+          fact:
+            study.plan.plannedTest === "out-of-scope"
+              ? "Not locked"
+              : study.plan.power
+                ? `${testTitle(study.plan.plannedTest)}, n = ${study.plan.power.nPerGroup} per group, not locked`
+                : `${testTitle(study.plan.plannedTest)} planned, not locked`,
         };
 
   const data: StepStatus = !planLocked
@@ -134,7 +136,7 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
       : {
           key: "checks",
           label: STEP_LABELS.checks,
-          state: hasAnalysis && !analysisStale ? "done" : "open",
+          state: hasAnalysis && !notAnalysed ? "done" : "open",
           fact: `Checks on data version ${dataset.version}`,
         };
 
@@ -146,27 +148,20 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
       state: "locked",
       fact: "Opens when data are uploaded",
     };
-  else if (!hasAnalysis)
+  else if (!hasAnalysis || notAnalysed)
     choice = {
       key: "choice",
       label: STEP_LABELS.choice,
       state: "open",
-      fact: "Recommendation ready, not yet run",
+      fact: `Data version ${dataset.version} not yet analysed`,
+      attention: hasAnalysis,
     };
-  else if (analysisStale)
-    choice = {
-      key: "choice",
-      label: STEP_LABELS.choice,
-      state: "open",
-      fact: `New data version ${dataset.version} not yet analysed`,
-      attention: true,
-    };
-  else if (analysis?.override)
+  else if (analysis?.deviation)
     choice = {
       key: "choice",
       label: STEP_LABELS.choice,
       state: "done",
-      fact: `${testTitle(analysis.chosenTest)}, override flagged for the reviewer`,
+      fact: `${testTitle(analysis.chosenTest)}, a deviation from the plan, shown to the reviewer`,
       attention: true,
     };
   else if (analysis)
@@ -174,7 +169,7 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
       key: "choice",
       label: STEP_LABELS.choice,
       state: "done",
-      fact: `${testTitle(analysis.chosenTest)}, reason: ${shortReason(isAvailable(analysis.result.recommendation) ? analysis.result.recommendation : null)}`,
+      fact: `${testTitle(analysis.chosenTest)}, as planned`,
     };
   else choice = { key: "choice", label: STEP_LABELS.choice, state: "done", fact: "Test chosen and run" };
 
@@ -198,7 +193,9 @@ export function studySteps(study: Study, analysis?: Analysis | null): StepStatus
     };
   }
 
-  return [design, plan, data, checks, choice, results];
+  const steps = [design, plan, data, checks, choice, results];
+  const next = progressStep(study.progress);
+  return study.status === "draft" ? steps.map((s) => (s.key === next ? { ...s, next: true } : s)) : steps;
 }
 
 function designFact(study: Study): string {
@@ -211,17 +208,18 @@ function designFact(study: Study): string {
 }
 
 function dataFact(study: Study): string {
-  const ds = study.latestDataset;
+  const ds = activeVersion(study);
   if (!ds) return "No data uploaded yet";
   const groups = ds.report.groupsFound;
   const n = groups.reduce((s, g) => s + g.n, 0);
-  return `n = ${n} in ${groups.length} group${groups.length === 1 ? "" : "s"} (v${ds.version})`;
+  return `n = ${n} in ${groups.length} group${groups.length === 1 ? "" : "s"} (v${ds.version}, active)`;
 }
 
-/** The first step with work to do, for "continue" links; the results once everything is done. */
+/** Where "continue" leads: the step the server's status names as next. */
 export function currentStep(steps: StepStatus[]): StudyStepSegment {
   return (
     (
+      steps.find((s) => s.next) ??
       steps.find((s) => s.state === "open") ??
       [...steps].reverse().find((s) => s.state === "done") ??
       steps[0]

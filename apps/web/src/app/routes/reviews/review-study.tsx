@@ -13,7 +13,8 @@ import { useAnalysis } from "@/features/analyses/api/get-analysis";
 import { useChecks } from "@/features/analyses/api/get-checks";
 import { useStudy } from "@/features/studies/api/get-study";
 import { DesignSummary } from "@/features/studies/components/design-summary";
-import { LifecycleBadge } from "@/features/studies/components/lifecycle-badge";
+import { ProgressBadge } from "@/features/studies/components/progress-badge";
+import { RoundChangesPanel } from "@/features/reviews/components/round-changes-panel";
 import { RecommendationCard } from "@/features/analyses/components/recommendation-card";
 import { ResultsPanel } from "@/features/analyses/components/results-panel";
 import { isAvailable } from "@/lib/result-values";
@@ -68,8 +69,8 @@ export function ReviewStudyRoute() {
       </p>
       <header className="mb-6 mt-1">
         <div className="flex flex-wrap items-center gap-3">
-          <h1 className="text-3xl font-semibold text-spruce">{s.title}</h1>
-          <LifecycleBadge status={s.status} />
+          <h1 className="min-w-0 break-words text-3xl font-semibold text-spruce">{s.title}</h1>
+          <ProgressBadge progress={s.progress} />
           <span className="text-sm text-ink-soft">Read-only</span>
         </div>
         <p className="mt-1 text-sm text-ink-soft">
@@ -86,6 +87,7 @@ export function ReviewStudyRoute() {
         </p>
       </header>
 
+      <RoundChangesPanel round={round} />
       <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">
         <div className="flex min-w-0 flex-col gap-5">
           <ReviewSection id="design" number={1} title="Design">

@@ -4,9 +4,11 @@ import { paths, STUDY_STEP_SEGMENTS, type StudyStepSegment } from "@/config/path
 import { useMe } from "@/lib/current-user";
 import { useAnalysis } from "@/features/analyses/api/get-analysis";
 import { useStudy } from "@/features/studies/api/get-study";
-import { LifecycleBadge } from "@/features/studies/components/lifecycle-badge";
+import { ProgressBadge } from "@/features/studies/components/progress-badge";
+import { ProgressBanner } from "@/features/studies/components/progress-banner";
 import { PlanLockedNote } from "@/features/studies/components/plan-locked-note";
 import { StudyTrail } from "@/features/studies/components/study-trail";
+import { StepComments } from "@/features/reviews/components/step-comments";
 import { CONTEXT_LABELS } from "@/lib/labels";
 import { studySteps } from "@/features/studies/step-status";
 import { can } from "@/lib/authorization";
@@ -43,9 +45,9 @@ export function StudyLayoutRoute() {
       <p className="text-sm">
         <Link to={paths.studies}>Studies</Link> <span className="text-ink-soft">/</span>
       </p>
-      <div className="mb-6 mt-1 flex flex-wrap items-center gap-3">
-        <h1 className="text-3xl font-semibold text-spruce">{s.title}</h1>
-        <LifecycleBadge status={s.status} />
+      <div className="mb-4 mt-1 flex flex-wrap items-center gap-3">
+        <h1 className="min-w-0 break-words text-3xl font-semibold text-spruce">{s.title}</h1>
+        <ProgressBadge progress={s.progress} />
         {s.context !== "general" && (
           <span className="rounded-full bg-brick-100 px-2.5 py-0.5 text-xs font-semibold text-brick">
             {CONTEXT_LABELS[s.context]}
@@ -54,8 +56,9 @@ export function StudyLayoutRoute() {
         <PlanLockedNote plan={s.plan} />
         {!canEdit && <span className="text-sm text-ink-soft">Read-only</span>}
       </div>
+      <ProgressBanner study={s} />
       <div className="grid gap-8 lg:grid-cols-[17rem_1fr]">
-        <aside className="lg:sticky lg:top-4 lg:self-start">
+        <aside className="min-w-0 lg:sticky lg:top-4 lg:self-start">
           <Link to={`/studies/${s.id}`} className="mb-2 block px-2 text-sm">
             About this study
           </Link>
@@ -70,7 +73,12 @@ export function StudyLayoutRoute() {
               <p className="mt-2">{step.fact}.</p>
             </div>
           ) : (
-            <Outlet context={context} />
+            <>
+              {step && (
+                <StepComments studyId={s.id} review={s.openReview} step={step.key} canReply={canEdit} />
+              )}
+              <Outlet context={context} />
+            </>
           )}
         </section>
       </div>

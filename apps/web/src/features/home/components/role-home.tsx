@@ -1,8 +1,10 @@
 import type { User } from "@/lib/current-user";
 import { ROLE_LABELS } from "@/lib/roles";
+import type { StudyDto as Study } from "@waymark/contract";
 import { ROLE_GUIDES, TRAIL } from "../role-guides";
+import { WaitingForYou } from "./waiting-for-you";
 
-export function RoleHome({ user }: { user: User }) {
+export function RoleHome({ user, studies }: { user: User; studies?: Study[] }) {
   const guide = ROLE_GUIDES[user.role];
   const firstName = user.displayName.split(" ")[0];
   return (
@@ -14,6 +16,7 @@ export function RoleHome({ user }: { user: User }) {
         <h1 id="home-title" className="mt-1 text-3xl font-semibold text-spruce">
           {guide.title}
         </h1>
+        {studies && <WaitingForYou user={user} studies={studies} />}
         <p className="mt-4 max-w-2xl text-lg leading-relaxed">{guide.summary}</p>
         <ul className="mt-6 flex max-w-2xl flex-col gap-3">
           {guide.duties.map((d) => (

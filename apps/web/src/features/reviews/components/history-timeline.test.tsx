@@ -26,6 +26,14 @@ const HISTORY: StudyHistory = {
           body: "Explain the override.",
           author: person(2, "Rui Takahashi"),
           createdAt: "2025-12-02T09:00:00Z",
+          replies: [
+            {
+              id: 1,
+              body: "The ratings are ordinal; the plan now says so.",
+              author: person(1, "Ada Okafor"),
+              createdAt: "2025-12-02T10:00:00Z",
+            },
+          ],
         },
         {
           id: 2,
@@ -33,8 +41,10 @@ const HISTORY: StudyHistory = {
           body: "<b>Two</b> outliers are not discussed.",
           author: person(2, "Rui Takahashi"),
           createdAt: "2025-12-02T09:00:00Z",
+          replies: [],
         },
       ],
+      changes: null,
       signature: null,
     },
     {
@@ -48,6 +58,15 @@ const HISTORY: StudyHistory = {
       decidedAt: "2025-12-04T09:00:00Z",
       decidedBy: person(2, "Rui Takahashi"),
       comments: [],
+      changes: {
+        sinceRound: 1,
+        dataVersion: { before: 1, after: 2, changed: true },
+        test: { before: "anova", after: "anova", changed: false },
+        posthoc: { before: "tukey-kramer", after: "tukey-kramer", changed: false },
+        deviation: { before: null, after: null, changed: false },
+        keyNumbers: [],
+        summary: ["Data version 1 → 2."],
+      },
       signature: {
         signerName: "Rui Takahashi",
         signedAt: "2025-12-04T09:00:00Z",
@@ -85,5 +104,13 @@ describe("HistoryTimelineView", () => {
     expect(within(sig).getByTestId("short-hash").getAttribute("title")).toBe(HASH);
     expect(screen.getByText(/The approval no longer holds/)).toBeTruthy();
     expect(screen.getByText(/Submitted for review \(round 1, analysis 3\)/)).toBeTruthy();
+  });
+
+  it("lists the analyst's reply under its comment and says what changed in round 2", () => {
+    renderWithProviders(<HistoryTimelineView history={HISTORY} />);
+    const replies = screen.getByRole("list", { name: "Replies" });
+    expect(within(replies).getByText("The ratings are ordinal; the plan now says so.")).toBeTruthy();
+    expect(within(replies).getByText(/Ada Okafor replied/)).toBeTruthy();
+    expect(screen.getByText("Since round 1: Data version 1 → 2.")).toBeTruthy();
   });
 });

@@ -52,6 +52,11 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
                 className="absolute -left-[1.72rem] top-1 h-3 w-3 rounded-full border-2 border-paper bg-spruce"
               />
               <h4 className="font-semibold">Round {r.round}</h4>
+              {r.changes && (
+                <p className="text-sm text-ink-soft">
+                  Since round {r.changes.sinceRound}: {r.changes.summary.join(" ")}
+                </p>
+              )}
               <p className="flex items-center gap-1.5 text-sm">
                 <Send aria-hidden="true" className="h-4 w-4 text-ink-soft" /> Submitted
                 {r.submittedBy ? ` by ${r.submittedBy.displayName}` : ""}
@@ -69,7 +74,23 @@ export function HistoryTimelineView({ history }: { history: StudyHistory }) {
                         {c.author ? ` · ${c.author.displayName}` : ""} ·{" "}
                         <span className="num">{formatDateTime(c.createdAt)}</span>
                       </p>
-                      <p className="mt-1 whitespace-pre-wrap">{c.body}</p>
+                      <p className="mt-1 whitespace-pre-wrap break-words">{c.body}</p>
+                      {c.replies.length > 0 && (
+                        <ul
+                          className="mt-2 flex flex-col gap-1.5 border-l-2 border-spruce/30 pl-3"
+                          aria-label="Replies"
+                        >
+                          {c.replies.map((x) => (
+                            <li key={x.id}>
+                              <p className="text-xs text-ink-soft">
+                                {x.author.displayName} replied ·{" "}
+                                <span className="num">{formatDateTime(x.createdAt)}</span>
+                              </p>
+                              <p className="whitespace-pre-wrap break-words">{x.body}</p>
+                            </li>
+                          ))}
+                        </ul>
+                      )}
                     </li>
                   ))}
                 </ul>

@@ -7,7 +7,7 @@ import type { StudyDto as Study } from "@waymark/contract";
 
 function Row({ label, children }: { label: string; children: React.ReactNode }) {
   return (
-    <div className="grid grid-cols-[10rem_1fr] gap-3 border-b border-ink/10 py-2 last:border-0">
+    <div className="grid gap-1 border-b border-ink/10 py-2 last:border-0 sm:grid-cols-[10rem_1fr] sm:gap-3">
       <dt className="text-sm text-ink-soft">{label}</dt>
       <dd>{children}</dd>
     </div>
@@ -53,7 +53,7 @@ export function StudyOverview({ study, steps }: { study: Study; steps: StepStatu
           to={studyPath(study.id, next)}
           className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline"
         >
-          Continue: {STEP_LABELS[next]}
+          {study.status === "draft" ? `Continue: ${STEP_LABELS[next]}` : `Open: ${STEP_LABELS[next]}`}
         </Link>
       </p>
     </section>
