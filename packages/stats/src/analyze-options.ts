@@ -115,9 +115,9 @@ function resolveErrorRateCheck(o: AnalyzeOptions["errorRateCheck"]): ResolvedOpt
     throw new StatsInputError(`The errorRateCheck seed must be a non-negative integer; got ${String(seed)}`);
   }
   const runs = o?.runs;
-  if (runs !== undefined && !(Number.isSafeInteger(runs) && runs >= 100 && runs <= 100_000)) {
+  if (runs !== undefined && !(Number.isSafeInteger(runs) && runs >= 100 && runs <= ERROR_RATE_MAX_RUNS)) {
     throw new StatsInputError(
-      `The errorRateCheck runs must be an integer from 100 to 100000; got ${String(runs)}`,
+      `The errorRateCheck runs must be an integer from 100 to ${ERROR_RATE_MAX_RUNS}; got ${String(runs)}`,
     );
   }
   return { seed, runs };

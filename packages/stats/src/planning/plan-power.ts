@@ -1,6 +1,5 @@
 import type { OmnibusTest, PowerMethod } from "../vocabulary/ids.js";
 import { StatsInputError } from "../errors.js";
-import { anovaPower } from "./anova-power.js";
 import { anovaSampleSize } from "./anova-sample-size.js";
 import { simulatedPower } from "./simulated-power.js";
 

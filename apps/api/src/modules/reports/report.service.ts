@@ -10,7 +10,6 @@ import { buildReport } from "./build-report.js";
 import { groupsFigure, intervalsFigure } from "./figures.js";
 import { intervalPairs } from "./posthoc-table.js";
 import type { Block } from "./report-blocks.js";
-import { comparisonsOf } from "../studies/plan.js";
 import { activeDataset } from "../studies/study-status-records.js";
 
 export interface GeneratedReport {
