@@ -9,17 +9,18 @@ import { useStudyContext } from "./study-context";
 export function StudyDataRoute() {
   const { study, canEdit } = useStudyContext();
   const datasets = useDatasets(study.id);
+  const active = study.activeDataset ?? study.latestDataset;
   return (
     <div className="flex flex-col gap-6">
       <StepHeading
         title="Data"
-        intro="Upload the measurements as CSV or XLSX. Every upload is kept as a new version with its fingerprint; the latest one is analysed."
+        intro="Upload the measurements as CSV or XLSX. Every upload is kept as a new version with its fingerprint and becomes the active one, the version analyses and the submission use; an earlier version can be made active again."
       />
       {canEdit && <DataUpload study={study} />}
-      {study.latestDataset && (
+      {active && (
         <div>
-          <h3 className="mb-2 font-semibold">Latest version (v{study.latestDataset.version})</h3>
-          <ValidationReport report={study.latestDataset.report} levels={study.levels} stored />
+          <h3 className="mb-2 font-semibold">Active version (v{active.version})</h3>
+          <ValidationReport report={active.report} levels={study.levels} stored />
         </div>
       )}
       <section aria-labelledby="versions-title">
@@ -29,7 +30,9 @@ export function StudyDataRoute() {
         {datasets.error && (
           <ErrorPanel title="The versions could not be loaded" message={datasets.error.message} />
         )}
-        {datasets.data && <DatasetVersions datasets={datasets.data} />}
+        {datasets.data && (
+          <DatasetVersions studyId={study.id} datasets={datasets.data} canActivate={canEdit} />
+        )}
       </section>
     </div>
   );

@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/api-client";
-import type { DatasetDto as Dataset } from "@waymark/contract";
+import type { DatasetListItem } from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
-export function getDatasets(id: number): Promise<Dataset[]> {
-  return api.get<{ datasets: Dataset[] }>(`/studies/${id}/datasets`).then((r) => r.datasets);
+/** Every version, newest first; `active` marks the one analyses and submissions use. */
+export function getDatasets(id: number): Promise<DatasetListItem[]> {
+  return api.get<{ datasets: DatasetListItem[] }>(`/studies/${id}/datasets`).then((r) => r.datasets);
 }
 
 export const datasetsQueryOptions = (id: number) =>

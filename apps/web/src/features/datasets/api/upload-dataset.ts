@@ -1,6 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { ApiError, uploadWithProgress } from "@/lib/api-client";
-import type { DatasetDto as Dataset, Layout, ValidationReport } from "@waymark/contract";
+import {
+  planMismatchDetails,
+  type DatasetDto as Dataset,
+  type Layout,
+  type PlanMismatchDetails,
+  type ValidationReport,
+} from "@waymark/contract";
 import { studyKeys } from "@/lib/query-keys";
 
 export interface UploadDatasetInput {
@@ -8,6 +14,8 @@ export interface UploadDatasetInput {
   layout: Layout;
   groupColumn?: string;
   outcomeColumn?: string;
+  /** Names in the file → the planned level each one means, or null to leave that group out. */
+  levelMap?: Record<string, string | null>;
 }
 
 export function uploadDataset(
@@ -22,6 +30,8 @@ export function uploadDataset(
     if (input.groupColumn) form.append("groupColumn", input.groupColumn);
     if (input.outcomeColumn) form.append("outcomeColumn", input.outcomeColumn);
   }
+  if (input.levelMap && Object.keys(input.levelMap).length)
+    form.append("levelMap", JSON.stringify(input.levelMap));
   return uploadWithProgress<{ dataset: Dataset }>(`/studies/${id}/datasets`, form, onProgress).then(
     (r) => r.dataset,
   );
@@ -32,6 +42,13 @@ export function rejectedReport(error: unknown): ValidationReport | null {
   if (!(error instanceof ApiError) || error.status !== 422) return null;
   const report = (error.details as { report?: ValidationReport } | undefined)?.report;
   return report && Array.isArray(report.groupsFound) ? report : null;
+}
+
+/** What a 422 `data_does_not_match_plan` lists: missing and unplanned groups, and the mappings offered. */
+export function planMismatch(error: unknown): PlanMismatchDetails | null {
+  if (!(error instanceof ApiError) || error.code !== "data_does_not_match_plan") return null;
+  const parsed = planMismatchDetails.safeParse(error.details);
+  return parsed.success ? parsed.data : null;
 }
 
 export function useUploadDataset(id: number, onProgress?: (f: number) => void) {

@@ -1,10 +1,16 @@
 import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { usePreviewDataset } from "../api/preview-dataset";
-import { rejectedReport, useUploadDataset } from "../api/upload-dataset";
+import {
+  planMismatch,
+  rejectedReport,
+  useUploadDataset,
+  type UploadDatasetInput,
+} from "../api/upload-dataset";
 import type { DatasetDto as Dataset, StudyDto as Study } from "@waymark/contract";
 import { ColumnMapping } from "./column-mapping";
 import { FilePicker } from "./file-picker";
+import { PlanMismatch } from "./plan-mismatch";
 import { ProgressBar } from "./progress-bar";
 import { ValidationReport } from "./validation-report";
 
@@ -15,6 +21,9 @@ export function DataUpload({ study, onUploaded }: { study: Study; onUploaded?: (
   const preview = usePreviewDataset(study.id, setProgress);
   const upload = useUploadDataset(study.id, setProgress);
   const rejected = rejectedReport(upload.error);
+  const mismatch = planMismatch(upload.error);
+  // The columns last confirmed, so a refused file can be sent again with a level mapping.
+  const [columns, setColumns] = useState<Omit<UploadDatasetInput, "file" | "levelMap"> | null>(null);
 
   const pick = (f: File) => {
     setFile(f);
@@ -49,12 +58,25 @@ export function DataUpload({ study, onUploaded }: { study: Study; onUploaded?: (
           onCancel={reset}
           onConfirm={(m) => {
             setProgress(0);
+            setColumns(m);
             upload.mutate({ file, ...m }, { onSuccess: (d) => onUploaded?.(d) });
           }}
         />
       )}
+      {mismatch && file && columns && (
+        <PlanMismatch
+          key={JSON.stringify(mismatch)}
+          details={mismatch}
+          levels={study.levels}
+          busy={upload.isPending}
+          onResend={(levelMap) => {
+            setProgress(0);
+            upload.mutate({ file, ...columns, levelMap }, { onSuccess: (d) => onUploaded?.(d) });
+          }}
+        />
+      )}
       {rejected && <ValidationReport report={rejected} levels={study.levels} stored={false} />}
-      {upload.error && !rejected && (
+      {upload.error && !rejected && !mismatch && (
         <ErrorPanel title="The file was not stored" message={upload.error.message} />
       )}
       {upload.data && (
