@@ -83,11 +83,29 @@ describe("PeoplePage", () => {
     });
   });
 
-  it("shows the last-admin message when the role change is refused", async () => {
-    server();
+  it("asks before changing a role, and keeping it sends nothing", async () => {
+    const calls = server();
+    renderWithProviders(<PeoplePage />);
+    fireEvent.change(await screen.findByLabelText("Role of Ada Okafor"), { target: { value: "reviewer" } });
+    const confirm = screen.getByRole("group", { name: "Confirm: change the role of Ada Okafor" });
+    expect(within(confirm).getByText(/Ada Okafor will be a reviewer instead of an analyst/)).toBeTruthy();
+    expect(calls.some((c) => c.method === "PATCH")).toBe(false);
+    fireEvent.click(within(confirm).getByRole("button", { name: "Keep as is" }));
+    expect((screen.getByLabelText("Role of Ada Okafor") as HTMLSelectElement).value).toBe("analyst");
+    expect(calls.some((c) => c.method === "PATCH")).toBe(false);
+  });
+
+  it("shows the last-admin message when the confirmed role change is refused", async () => {
+    const calls = server();
     renderWithProviders(<PeoplePage />);
     fireEvent.change(await screen.findByLabelText("Role of Amal Reyes"), { target: { value: "reviewer" } });
+    fireEvent.click(screen.getByRole("button", { name: "Yes, change the role" }));
     expect(await screen.findByText(LAST_ADMIN)).toBeTruthy();
+    expect(calls.find((c) => c.method === "PATCH")).toEqual({
+      method: "PATCH",
+      url: "/api/users/4",
+      body: { role: "reviewer" },
+    });
     await waitFor(() =>
       expect((screen.getByLabelText("Role of Amal Reyes") as HTMLSelectElement).value).toBe("admin"),
     );

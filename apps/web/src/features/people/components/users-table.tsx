@@ -6,6 +6,12 @@ import { ROLE_LABELS, ROLES, type Role } from "@/lib/roles";
 import { useUpdateUser } from "../api/update-user";
 import type { AccountDto as Account } from "@waymark/contract";
 
+/** "an analyst", "a reviewer". */
+const withArticle = (r: Role) => {
+  const word = ROLE_LABELS[r].toLowerCase();
+  return `${/^[aeiou]/.test(word) ? "an" : "a"} ${word}`;
+};
+
 const ROLE_OPTIONS = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
 function Problem({ error }: { error: Error | null }) {
@@ -17,11 +23,16 @@ function Problem({ error }: { error: Error | null }) {
   );
 }
 
-/** The role drop-down of one account; a refusal (such as the last admin) is shown beneath it. */
+/**
+ * The role drop-down of one account. Picking a role only proposes it: the change applies after
+ * the admin confirms it in the row. A refusal (such as the last admin) is shown beneath it.
+ */
 function RoleCell({ user }: { user: Account }) {
   const update = useUpdateUser(user.id);
+  const [proposed, setProposed] = useState<Role | null>(null);
   const shown =
-    update.isPending && update.variables && "role" in update.variables ? update.variables.role : user.role;
+    proposed ??
+    (update.isPending && update.variables && "role" in update.variables ? update.variables.role : user.role);
   return (
     <div>
       <label htmlFor={`role-${user.id}`} className="sr-only">
@@ -31,7 +42,11 @@ function RoleCell({ user }: { user: Account }) {
         id={`role-${user.id}`}
         value={shown}
         disabled={update.isPending}
-        onChange={(e) => update.mutate({ role: e.target.value as Role })}
+        onChange={(e) => {
+          update.reset();
+          const role = e.target.value as Role;
+          setProposed(role === user.role ? null : role);
+        }}
         className="rounded-md border border-ink/25 bg-paper px-2 py-1 text-sm"
       >
         {ROLE_OPTIONS.map((o) => (
@@ -40,6 +55,30 @@ function RoleCell({ user }: { user: Account }) {
           </option>
         ))}
       </select>
+      {proposed && (
+        <div
+          className="mt-2 flex max-w-xs flex-col gap-2 rounded-md bg-stone p-2"
+          role="group"
+          aria-label={`Confirm: change the role of ${user.displayName}`}
+        >
+          <p className="text-sm">
+            {user.displayName} will be {withArticle(proposed)} instead of {withArticle(user.role)}, with that
+            role's permissions from their next request.
+          </p>
+          <div className="flex flex-wrap gap-2">
+            <Button
+              className="!px-3 !py-1"
+              disabled={update.isPending}
+              onClick={() => update.mutate({ role: proposed }, { onSettled: () => setProposed(null) })}
+            >
+              Yes, change the role
+            </Button>
+            <Button variant="quiet" className="!px-3 !py-1" onClick={() => setProposed(null)}>
+              Keep as is
+            </Button>
+          </div>
+        </div>
+      )}
       <Problem error={update.error} />
     </div>
   );
