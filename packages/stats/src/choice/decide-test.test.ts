@@ -20,7 +20,7 @@ describe("decideTest: only the plan's named rule moves the test", () => {
       groups: groups([
         [10, 1],
         [10, 1.2],
-        [10, 1.4],
+        [10, 1.3],
       ]),
       comparisons: "all-pairs",
       unavailable: none,
@@ -32,7 +32,7 @@ describe("decideTest: only the plan's named rule moves the test", () => {
     const bySpread = decideTest(classicPlan, {
       groups: groups([
         [10, 1],
-        [10, 2.1],
+        [10, 1.6],
         [10, 1],
       ]),
       comparisons: "all-pairs",

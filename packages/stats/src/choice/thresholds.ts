@@ -32,7 +32,7 @@ export const UNBALANCED_N_RATIO = 1.5;
  * The rule-then-test procedure's realised error rate is measured by the test-choice benchmark
  * (packages/stats/bench, figures in the README).
  */
-export const PLAN_SWITCH_MAX_SD_RATIO = 2;
+export const PLAN_SWITCH_MAX_SD_RATIO = 1.5;
 
 /** …and while the largest group has at most this many times the values of the smallest. Common practice. */
 export const PLAN_SWITCH_MAX_SIZE_RATIO = 1.25;
