@@ -35,22 +35,51 @@ test("a study goes from submission through a newly invited reviewer's signed app
 }, info) => {
   test.setTimeout(180_000);
 
-  // 1. The analyst submits a demo study for review.
+  // 1. The demo reviewer sent this study back with comments at two steps. The analyst finds it
+  // first on the home page, replies at each step and submits it again.
   await signIn(page, "analyst@waymark.test");
   const list = await page.request.get("/api/studies");
   expect(list.ok()).toBe(true);
   const study = (
-    (await list.json()) as { studies: { id: number; title: string; status: string }[] }
+    (await list.json()) as {
+      studies: { id: number; title: string; status: string; progress: { state: string } }[];
+    }
   ).studies.find((s) => s.title === STUDY_TITLE);
   expect(study, `the demo study "${STUDY_TITLE}" is seeded`).toBeTruthy();
   expect(study!.status).toBe("draft");
+  expect(study!.progress.state).toBe("changes-requested");
+  const waiting = page.getByTestId("waiting-item");
+  await expect(waiting.first()).toContainText(STUDY_TITLE);
+  await expect(waiting.first()).toContainText("Changes requested");
+  await shot(page, info, "01-home-sent-back");
+  await waiting.first().getByRole("link", { name: STUDY_TITLE }).click();
+  await expect(page.getByTestId("progress-banner")).toContainText("Changes requested");
+  await page.goto(`/studies/${study!.id}/data`);
+  const dataComments = page.getByTestId("step-comments");
+  await expect(dataComments).toContainText("Two plants (16 h and 20 h light) are far taller");
+  await dataComments
+    .getByLabel("Your reply")
+    .fill("Both plants stay in: the logbook shows no handling error.");
+  await dataComments.getByRole("button", { name: "Reply" }).click();
+  await expect(dataComments.getByRole("list", { name: "Replies" })).toContainText("Both plants stay in");
+  await shot(page, info, "01-reply-at-data");
   await page.goto(`/studies/${study!.id}/results`);
+  const resultComments = page.getByTestId("step-comments");
+  await expect(resultComments).toContainText("Give the shift of each schedule against 12 h light");
+  await expect(resultComments).toContainText("Please say how the two bolted plants are handled");
+  const shiftComment = resultComments
+    .locator("li")
+    .filter({ hasText: "Give the shift of each schedule" })
+    .first();
+  await shiftComment.getByLabel("Your reply").fill("The intervals are now in the comparisons table.");
+  await shiftComment.getByRole("button", { name: "Reply" }).click();
+  await expect(shiftComment.getByRole("list", { name: "Replies" })).toContainText("The intervals are now");
   await page.getByRole("button", { name: "Submit for review…" }).click();
   await page.getByRole("button", { name: "Yes, submit" }).click();
   await expect(page.getByText("Submitted for review: a reviewer will approve it")).toBeVisible();
   await nav(page, "Studies").click();
   const row = page.getByRole("listitem").filter({ hasText: STUDY_TITLE });
-  await expect(row.getByText("In review")).toBeVisible();
+  await expect(row.getByTestId("progress-badge")).toHaveText("Awaiting review");
   await shot(page, info, "01-submitted");
   await signOut(page);
 
@@ -107,6 +136,9 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await expect(invitee.getByRole("heading", { level: 1, name: STUDY_TITLE })).toBeVisible();
   await expect(invitee.getByTestId("results-panel")).toBeVisible();
   await expect(invitee.getByTestId("history-timeline")).toBeVisible();
+  // Round 2: the reviewer sees what changed since round 1, and the analyst's replies.
+  await expect(invitee.getByTestId("round-changes")).toContainText("What changed since round 1");
+  await expect(invitee.getByTestId("history-timeline")).toContainText("Both plants stay in");
   await shot(invitee, info, "07-review-page");
   const decision = invitee.getByTestId("decision-panel");
   await expect(decision.getByLabel("Meaning of your signature")).toHaveValue(
@@ -136,8 +168,8 @@ test("a study goes from submission through a newly invited reviewer's signed app
   await signIn(page, "analyst@waymark.test");
   await nav(page, "Studies").click();
   await expect(
-    page.getByRole("listitem").filter({ hasText: STUDY_TITLE }).getByText("Approved"),
-  ).toBeVisible();
+    page.getByRole("listitem").filter({ hasText: STUDY_TITLE }).getByTestId("progress-badge"),
+  ).toHaveText("Approved");
   await shot(page, info, "11-analyst-sees-approval");
   await signOut(page);
 

@@ -39,17 +39,20 @@ test("the demo analyst walks a study from question to results", async ({ page },
 
   // Design questions
   await expect(page).toHaveURL(/\/studies\/\d+\/design$/);
-  await expect(page.getByText("Question 1 of 5")).toBeVisible();
+  await expect(page.getByText("Question 1 of 7")).toBeVisible();
+  // A question about means, with the same number of units in every group: the plan keeps classic ANOVA.
   const answers = [
     /Yes, independent groups/,
     /A measured quantity/,
+    /Whether the average amounts differ/,
+    /Yes, the same number in every group/,
     /^No All groups/,
     /Every pair of groups/,
     /Assigned at random/,
   ];
   for (const [i, answer] of answers.entries()) {
     await page.getByRole("radio", { name: answer }).check();
-    await expect(page.getByText(`Question ${i + 1} of 5 · answer saved`)).toBeVisible();
+    await expect(page.getByText(`Question ${i + 1} of 7 · answer saved`)).toBeVisible();
     await page
       .getByRole("button", { name: i === answers.length - 1 ? "See all answers" : "Next question" })
       .click();

@@ -25,7 +25,7 @@ export function AppShell({ user }: { user: User }) {
         Skip to content
       </a>
       <header className="border-b-4 border-amber bg-spruce text-stone">
-        <div className="mx-auto flex max-w-6xl items-center gap-6 px-4 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink
             to={paths.home}
             className="flex items-center gap-2 text-stone no-underline hover:no-underline"
@@ -33,7 +33,8 @@ export function AppShell({ user }: { user: User }) {
             <WaymarkLogo />
             <span className="text-lg font-semibold tracking-wide">Waymark</span>
           </NavLink>
-          <nav aria-label="Main" className="flex flex-wrap gap-1">
+          {/* Below md the menu takes its own row and wraps, so no page scrolls sideways at 390 px. */}
+          <nav aria-label="Main" className="order-last flex w-full flex-wrap gap-1 md:order-none md:w-auto">
             {items.map((i) => (
               <NavLink
                 key={i.to}
@@ -69,7 +70,7 @@ export function AppShell({ user }: { user: User }) {
           </div>
         </div>
       </header>
-      <main id="main" className="mx-auto max-w-6xl px-4 py-8">
+      <main id="main" className="mx-auto min-w-0 max-w-6xl px-4 py-8">
         <Outlet />
       </main>
     </div>
