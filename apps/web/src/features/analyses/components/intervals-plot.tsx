@@ -13,7 +13,19 @@ interface Bar {
 }
 
 /** Each pair's difference with its simultaneous interval, against the zero line. */
-export function IntervalsPlot({ rows, unit, level }: { rows: PairView[]; unit: string; level: number }) {
+export function IntervalsPlot({
+  rows,
+  unit,
+  level,
+  centre = "difference",
+}: {
+  rows: PairView[];
+  unit: string;
+  level: number;
+  /** What each point is: a difference of means, or a Hodges–Lehmann shift (rank comparisons). */
+  centre?: "difference" | "shift";
+}) {
+  const word = centre === "shift" ? "shift" : "difference";
   const bars = useMemo<Bar[]>(
     () =>
       rows
@@ -32,7 +44,11 @@ export function IntervalsPlot({ rows, unit, level }: { rows: PairView[]; unit: s
       width: 640,
       height: Math.max(140, 36 * bars.length + 60),
       marginLeft: Math.min(260, 12 + 7 * Math.max(...bars.map((b) => b.label.length), 8)),
-      x: { label: `Difference${unit ? ` (${unit})` : ""}`, grid: true, nice: true },
+      x: {
+        label: `${word === "shift" ? "Shift" : "Difference"}${unit ? ` (${unit})` : ""}`,
+        grid: true,
+        nice: true,
+      },
       y: { label: null, domain: bars.map((b) => b.label) },
       marks: [
         Plot.ruleX([0], { stroke: "#A8432F", strokeWidth: 1.5 }),
@@ -62,8 +78,8 @@ export function IntervalsPlot({ rows, unit, level }: { rows: PairView[]; unit: s
   return (
     <PlotFigure
       options={options}
-      label="Differences between pairs of groups with simultaneous intervals"
-      caption={`Point: the difference; bar: its simultaneous ${Math.round(level * 100)}% interval. Filled points with intervals that miss zero are differences the comparisons detect; open diamonds cross zero.`}
+      label={`${word === "shift" ? "Shifts" : "Differences"} between pairs of groups with simultaneous intervals`}
+      caption={`Point: the ${word}; bar: its interval (the intervals hold ${Math.round(level * 100)}% together). Filled points with intervals that miss zero are differences the comparisons detect; open diamonds cross zero.`}
     />
   );
 }

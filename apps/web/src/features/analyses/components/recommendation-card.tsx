@@ -20,7 +20,7 @@ export function RecommendationCard({ rec }: { rec: TestDecision }) {
           Followed by <span className="font-medium">{posthocName(rec.posthoc)}</span>.
         </p>
       )}
-      <p className="mt-2 text-sm">{primaryTestSentence(rec)}</p>
+      {(rec.ruleApplied || blocked) && <p className="mt-2 text-sm">{primaryTestSentence(rec)}</p>}
       <h4 className="mt-4 text-sm font-semibold">Why</h4>
       <ul className="mt-1 list-disc space-y-1 pl-5 text-sm">
         {rec.reasons.map((r) => (

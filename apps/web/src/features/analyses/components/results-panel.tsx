@@ -173,7 +173,12 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
                 alpha={alpha}
                 unit={study.outcomeUnit}
               />
-              <IntervalsPlot rows={ph.rows} unit={study.outcomeUnit} level={1 - alpha} />
+              <IntervalsPlot
+                rows={ph.rows}
+                unit={study.outcomeUnit}
+                level={1 - alpha}
+                centre={ph.centreLabel}
+              />
             </>
           )}
         </div>
