@@ -23,9 +23,9 @@ const RATE_KEY: Record<SensitivityTest, keyof ErrorRateCheckResult["rates"]> = {
 export function primaryTestSentence(decision: TestDecision): string {
   if (decision.test === "out-of-scope") return "The design is outside what these tests cover.";
   const planned = decision.planned === "out-of-scope" ? decision.test : decision.planned;
-  const posthoc = decision.posthoc === "none" ? "" : `, followed by ${POSTHOC_TERMS[decision.posthoc].name}`;
+  const posthoc = decision.posthoc === "none" ? "" : `, followed by ${POSTHOC_TERMS[decision.posthoc].name},`;
   if (decision.ruleApplied)
-    return `The locked plan named ${TEST_TERMS[planned].name} as the primary test, with one rule that moves it to ${TEST_TERMS[decision.test].name}; the rule applied to these data, so the primary test is ${TEST_TERMS[decision.test].name}${posthoc}.`;
+    return `The locked plan named ${TEST_TERMS[planned].name} as the primary test, with one rule that moves it to ${TEST_TERMS[decision.test].name}; the rule applied to these data, so the primary test is ${TEST_TERMS[decision.test].name}${posthoc.replace(/,$/, "")}.`;
   return `The locked plan named ${TEST_TERMS[decision.test].name}${posthoc} as the primary test, before any data were seen.`;
 }
 

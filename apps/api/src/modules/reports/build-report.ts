@@ -32,6 +32,9 @@ const ASSIGNMENT: Record<string, string> = {
   unsure: "How units were assigned to groups was not recorded.",
 };
 
+/** The post-hoc families whose p-values take the plan's adjustment (the others control the error rate by their own distribution). */
+const ADJUSTED_FAMILIES = new Set<PosthocFamily>(["dunn", "dunn-vs-control"]);
+
 const POWER_METHOD_WORDS: Record<PowerMethod, string> = {
   "noncentral-f": "noncentral F distribution",
   "noncentral-f-welch-approximation": "noncentral F of classic ANOVA, an approximation for Welch's ANOVA",
@@ -97,7 +100,7 @@ export function buildReport(input: ReportInput): Block[] {
   blocks.push({ type: "heading", level: 3, text: "Pre-specified plan" });
   blocks.push(
     paragraph(
-      `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy, ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"} and ${adjustment} for rank-based comparisons.` +
+      `The analysis plan was locked on ${date(study.planLockedAt)}, before the data were uploaded (dataset version ${dataset.version}, uploaded ${date(dataset.uploadedAt)}). It fixed the significance level at α = ${formatUnit(alpha)}, the organization's ${study.plan.policy} test policy and ${vsControl ? `comparisons of each group with ${study.controlLevel}` : "all pairwise comparisons"}${ADJUSTED_FAMILIES.has(family) ? `, with ${adjustment} for their p-values` : ""}.` +
         (study.plan.power
           ? ` The planned sample size was ${study.plan.power.nPerGroup} per group, for power ${formatUnit(study.plan.power.achievedPower)} to detect an effect of Cohen's f = ${formatStat(study.plan.power.effectF)} with the primary test (${POWER_METHOD_WORDS[study.plan.power.method ?? "noncentral-f"]}).`
           : ""),
