@@ -114,3 +114,24 @@ describe("checkWarnings: the checks inform, beside the plan's test", () => {
     expect(r.checkWarnings.map((w) => w.code)).toEqual(["check.spread-against-ranks"]);
   });
 });
+
+describe("the zero-variance warning says what still runs", () => {
+  it("names Welch's ANOVA and Bartlett as unavailable and keeps Games–Howell for pairs with some spread", () => {
+    // Games & Howell (1976): each pair's standard error is √(s_a²/n_a + s_b²/n_b), defined when one
+    // of the two groups varies; only a pair of two constant groups has no comparison.
+    const r = analyze({
+      groups: [
+        { name: "A", values: [5, 5, 5, 5] },
+        { name: "B", values: [4.1, 5.2, 6.3, 5.5] },
+        { name: "C", values: [6.1, 7.4, 5.9, 6.6] },
+      ],
+      options: { errorRateCheck: false },
+    });
+    const warning = r.warnings.find((w) => w.startsWith("Zero variance"))!;
+    expect(warning).toMatch(/Welch's ANOVA and Bartlett's test cannot run/);
+    expect(warning).toMatch(/Games–Howell compares a pair only when at least one of its two groups varies/);
+    const gh = r.posthoc.gamesHowell;
+    if (!Array.isArray(gh)) throw new Error("Games–Howell should run");
+    expect(gh.every((p) => p.available !== false)).toBe(true);
+  });
+});
