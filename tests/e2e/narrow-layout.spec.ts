@@ -31,7 +31,9 @@ async function overflow(page: Page): Promise<{ scroll: number; culprits: string[
         ? ["auto", "scroll", "hidden", "clip"].includes(getComputedStyle(p).overflowX)
         : false;
       if (parentScrolls) continue;
-      if (pr && pr.right > width + 1) continue;
+      // An absolutely placed element escapes a scrolling box that is not positioned itself.
+      const placed = ["absolute", "fixed"].includes(getComputedStyle(el).position);
+      if (!placed && pr && pr.right > width + 1) continue;
       const id = el.id ? `#${el.id}` : "";
       const testId = el.dataset.testid ? `[data-testid=${el.dataset.testid}]` : "";
       culprits.push(

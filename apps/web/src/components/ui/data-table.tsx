@@ -100,7 +100,8 @@ export function DataTable<T extends RowData>({
   });
   const rows = table.getRowModel().rows;
   return (
-    <div className="overflow-x-auto rounded-lg bg-paper shadow-sm">
+    // `relative`: screen-reader-only text (absolutely positioned) stays inside the scrolling box.
+    <div className="relative max-w-full overflow-x-auto rounded-lg bg-paper shadow-sm">
       <table className="w-full border-collapse text-sm" aria-label={label} data-testid={testId}>
         <thead>
           {table.getHeaderGroups().map((group) => (

@@ -54,38 +54,40 @@ export function NormalityTable({
   alpha: number;
 }) {
   return (
-    <table className="whitespace-nowrap text-sm">
-      <caption className="mb-1 text-left text-xs text-ink-soft">
-        Shapiro–Wilk test; a small p suggests the values are not normally distributed.
-      </caption>
-      <thead className="text-ink-soft">
-        <tr>
-          <th className="pr-4 text-left font-medium">Values</th>
-          <th className="pr-4 text-right font-medium">
-            <S>n</S>
-          </th>
-          <th className="pr-4 text-right font-medium">
-            <S>W</S>
-          </th>
-          <th className="text-left font-medium">
-            <S>p</S>
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        <Row label="Residuals, all groups" row={residuals} alpha={alpha} />
-        {isAvailable(perGroup) ? (
-          perGroup.map((r, i) => (
-            <Row key={r.group ?? i} label={r.group ?? `Group ${i + 1}`} n={r.n} row={r} alpha={alpha} />
-          ))
-        ) : (
+    <div className="relative max-w-full overflow-x-auto">
+      <table className="whitespace-nowrap text-sm">
+        <caption className="mb-1 text-left text-xs text-ink-soft">
+          Shapiro–Wilk test; a small p suggests the values are not normally distributed.
+        </caption>
+        <thead className="text-ink-soft">
           <tr>
-            <td colSpan={4} className="py-1 text-ink-soft">
-              {reasonOf(perGroup)}
-            </td>
+            <th className="pr-4 text-left font-medium">Values</th>
+            <th className="pr-4 text-right font-medium">
+              <S>n</S>
+            </th>
+            <th className="pr-4 text-right font-medium">
+              <S>W</S>
+            </th>
+            <th className="text-left font-medium">
+              <S>p</S>
+            </th>
           </tr>
-        )}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          <Row label="Residuals, all groups" row={residuals} alpha={alpha} />
+          {isAvailable(perGroup) ? (
+            perGroup.map((r, i) => (
+              <Row key={r.group ?? i} label={r.group ?? `Group ${i + 1}`} n={r.n} row={r} alpha={alpha} />
+            ))
+          ) : (
+            <tr>
+              <td colSpan={4} className="py-1 text-ink-soft">
+                {reasonOf(perGroup)}
+              </td>
+            </tr>
+          )}
+        </tbody>
+      </table>
+    </div>
   );
 }

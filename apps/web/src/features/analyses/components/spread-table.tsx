@@ -55,48 +55,50 @@ export function SpreadTable({
   const ratio = sdRatioValue(sdRatio);
   const bOk = isAvailable(bartlett) && num(bartlett.statistic) !== null && num(bartlett.p) !== null;
   return (
-    <table className="text-sm">
-      <tbody>
-        <FRow label="Brown–Forsythe (median-centred)" part={brownForsythe} alpha={alpha} />
-        <FRow label="Levene (mean-centred)" part={levene} alpha={alpha} />
-        <tr className="border-t border-ink/10">
-          <th scope="row" className="py-1 pr-4 text-left font-medium">
-            Bartlett
-          </th>
-          <td className="num py-1">
-            {bOk ? (
-              <>
-                <S>χ</S>²({formatDf(bartlett.df)}) = {formatStat(bartlett.statistic)}, <S>p</S>{" "}
-                {formatP(bartlett.p)}
-                {bartlett.p < alpha && <AttentionMark label="below α" />}
-              </>
-            ) : (
-              <span className="font-sans text-ink-soft">{reasonOf(bartlett)}</span>
-            )}
-          </td>
-        </tr>
-        <tr className="border-t border-ink/10">
-          <th scope="row" className="py-1 pr-4 text-left font-medium">
-            Largest SD ÷ smallest SD
-          </th>
-          <td className="num py-1">
-            {ratio ? (
-              <>
-                {formatStat(ratio.ratio)}
-                {ratio.detail?.largest && ratio.detail.smallest && (
-                  <span className="font-sans text-ink-soft">
-                    {" "}
-                    ({ratio.detail.largest.group} ÷ {ratio.detail.smallest.group})
-                  </span>
-                )}
-                {ratio.ratio > SD_RATIO_LIMIT && <AttentionMark label="above 2" />}
-              </>
-            ) : (
-              <span className="font-sans text-ink-soft">{reasonOf(sdRatio)}</span>
-            )}
-          </td>
-        </tr>
-      </tbody>
-    </table>
+    <div className="relative max-w-full overflow-x-auto">
+      <table className="text-sm">
+        <tbody>
+          <FRow label="Brown–Forsythe (median-centred)" part={brownForsythe} alpha={alpha} />
+          <FRow label="Levene (mean-centred)" part={levene} alpha={alpha} />
+          <tr className="border-t border-ink/10">
+            <th scope="row" className="py-1 pr-4 text-left font-medium">
+              Bartlett
+            </th>
+            <td className="num py-1">
+              {bOk ? (
+                <>
+                  <S>χ</S>²({formatDf(bartlett.df)}) = {formatStat(bartlett.statistic)}, <S>p</S>{" "}
+                  {formatP(bartlett.p)}
+                  {bartlett.p < alpha && <AttentionMark label="below α" />}
+                </>
+              ) : (
+                <span className="font-sans text-ink-soft">{reasonOf(bartlett)}</span>
+              )}
+            </td>
+          </tr>
+          <tr className="border-t border-ink/10">
+            <th scope="row" className="py-1 pr-4 text-left font-medium">
+              Largest SD ÷ smallest SD
+            </th>
+            <td className="num py-1">
+              {ratio ? (
+                <>
+                  {formatStat(ratio.ratio)}
+                  {ratio.detail?.largest && ratio.detail.smallest && (
+                    <span className="font-sans text-ink-soft">
+                      {" "}
+                      ({ratio.detail.largest.group} ÷ {ratio.detail.smallest.group})
+                    </span>
+                  )}
+                  {ratio.ratio > SD_RATIO_LIMIT && <AttentionMark label="above 2" />}
+                </>
+              ) : (
+                <span className="font-sans text-ink-soft">{reasonOf(sdRatio)}</span>
+              )}
+            </td>
+          </tr>
+        </tbody>
+      </table>
+    </div>
   );
 }

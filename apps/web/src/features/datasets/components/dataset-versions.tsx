@@ -26,7 +26,7 @@ export function DatasetVersions({
       {activate.error && (
         <ErrorPanel title="The version was not made active" message={activate.error.message} />
       )}
-      <div className="max-w-full overflow-x-auto rounded-lg bg-paper shadow-sm">
+      <div className="relative max-w-full overflow-x-auto rounded-lg bg-paper shadow-sm">
         <table className="w-full text-sm">
           <caption className="sr-only">Data versions</caption>
           <thead className="border-b border-ink/15 text-left text-ink-soft">

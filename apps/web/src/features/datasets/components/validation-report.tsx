@@ -51,39 +51,41 @@ export function ValidationReport({
       <div className="mt-4 grid gap-5 lg:grid-cols-2">
         <div>
           <h4 className="text-sm font-semibold">Groups found and the plan's levels</h4>
-          <table className="mt-2 w-full text-sm">
-            <thead className="text-left text-ink-soft">
-              <tr>
-                <th className="py-1 pr-3 font-medium">Group</th>
-                <th className="py-1 pr-3 text-right font-medium">n</th>
-                <th className="py-1 font-medium">In the plan?</th>
-              </tr>
-            </thead>
-            <tbody>
-              {report.groupsFound.map((g) => (
-                <tr key={g.name} className="border-t border-ink/10">
-                  <td className="py-1 pr-3">{g.name}</td>
-                  <td className="num py-1 pr-3 text-right">{g.n}</td>
-                  <td className="py-1">
-                    {unknown.has(g.name) || !levels.includes(g.name) ? (
-                      <AttentionMark label="not a planned level" />
-                    ) : (
-                      "yes"
-                    )}
-                  </td>
+          <div className="relative max-w-full overflow-x-auto">
+            <table className="mt-2 w-full text-sm">
+              <thead className="text-left text-ink-soft">
+                <tr>
+                  <th className="py-1 pr-3 font-medium">Group</th>
+                  <th className="py-1 pr-3 text-right font-medium">n</th>
+                  <th className="py-1 font-medium">In the plan?</th>
                 </tr>
-              ))}
-              {missing.map((l) => (
-                <tr key={`missing-${l}`} className="border-t border-ink/10">
-                  <td className="py-1 pr-3">{l}</td>
-                  <td className="num py-1 pr-3 text-right">0</td>
-                  <td className="py-1">
-                    <AttentionMark label="planned, not in the file" />
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {report.groupsFound.map((g) => (
+                  <tr key={g.name} className="border-t border-ink/10">
+                    <td className="py-1 pr-3">{g.name}</td>
+                    <td className="num py-1 pr-3 text-right">{g.n}</td>
+                    <td className="py-1">
+                      {unknown.has(g.name) || !levels.includes(g.name) ? (
+                        <AttentionMark label="not a planned level" />
+                      ) : (
+                        "yes"
+                      )}
+                    </td>
+                  </tr>
+                ))}
+                {missing.map((l) => (
+                  <tr key={`missing-${l}`} className="border-t border-ink/10">
+                    <td className="py-1 pr-3">{l}</td>
+                    <td className="num py-1 pr-3 text-right">0</td>
+                    <td className="py-1">
+                      <AttentionMark label="planned, not in the file" />
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
           {report.unknownLevels.length > 0 && (
             <p className="mt-2 text-sm">
               Unknown level{report.unknownLevels.length === 1 ? "" : "s"}:{" "}
@@ -97,30 +99,32 @@ export function ValidationReport({
           {excluded === 0 ? (
             <p className="mt-2 text-sm text-ink-soft">Every row with a group was used.</p>
           ) : (
-            <table className="mt-2 w-full text-sm" aria-label="Rows excluded">
-              <thead className="text-left text-ink-soft">
-                <tr>
-                  <th className="py-1 pr-3 text-right font-medium">Row</th>
-                  <th className="py-1 pr-3 font-medium">Column</th>
-                  <th className="py-1 pr-3 font-medium">Value</th>
-                  <th className="py-1 font-medium">Why</th>
-                </tr>
-              </thead>
-              <tbody>
-                {report.excluded.slice(0, MAX_LISTED).map((x, i) => (
-                  <tr key={`${x.row}-${x.column ?? ""}-${i}`} className="border-t border-ink/10">
-                    <td className="num py-1 pr-3 text-right">row {x.row}</td>
-                    <td className="py-1 pr-3">{x.column ?? "—"}</td>
-                    <td className="num py-1 pr-3">
-                      {x.value === null || x.value === undefined || x.value === ""
-                        ? "(empty)"
-                        : String(x.value)}
-                    </td>
-                    <td className="py-1">{REASONS[x.reason] ?? x.reason}</td>
+            <div className="relative max-w-full overflow-x-auto">
+              <table className="mt-2 w-full text-sm" aria-label="Rows excluded">
+                <thead className="text-left text-ink-soft">
+                  <tr>
+                    <th className="py-1 pr-3 text-right font-medium">Row</th>
+                    <th className="py-1 pr-3 font-medium">Column</th>
+                    <th className="py-1 pr-3 font-medium">Value</th>
+                    <th className="py-1 font-medium">Why</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
+                </thead>
+                <tbody>
+                  {report.excluded.slice(0, MAX_LISTED).map((x, i) => (
+                    <tr key={`${x.row}-${x.column ?? ""}-${i}`} className="border-t border-ink/10">
+                      <td className="num py-1 pr-3 text-right">row {x.row}</td>
+                      <td className="py-1 pr-3">{x.column ?? "—"}</td>
+                      <td className="num py-1 pr-3">
+                        {x.value === null || x.value === undefined || x.value === ""
+                          ? "(empty)"
+                          : String(x.value)}
+                      </td>
+                      <td className="py-1">{REASONS[x.reason] ?? x.reason}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
           )}
           {excluded > Math.min(MAX_LISTED, report.excluded.length) && (
             <p className="mt-1 text-xs text-ink-soft">

@@ -29,27 +29,29 @@ export function FamilyWisePanel({
         </strong>{" "}
         rather than {formatPercent(alpha)} (1 − (1 − α)<sup>m</sup>, for independent tests).
       </p>
-      <table className="num mt-3 text-sm">
-        <caption className="sr-only">Chance of at least one false alarm by number of comparisons</caption>
-        <thead>
-          <tr className="text-left text-ink-soft">
-            <th className="pr-6 font-medium">comparisons m</th>
-            <th className="pr-6 font-medium">per test α</th>
-            <th className="font-medium">
-              1 − (1 − α)<sup>m</sup>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r) => (
-            <tr key={r} className={r === m ? "font-semibold" : undefined}>
-              <td className="pr-6">{r}</td>
-              <td className="pr-6">{formatAlpha(alpha)}</td>
-              <td>{formatPercent(1 - (1 - alpha) ** r)}</td>
+      <div className="relative max-w-full overflow-x-auto">
+        <table className="num mt-3 text-sm">
+          <caption className="sr-only">Chance of at least one false alarm by number of comparisons</caption>
+          <thead>
+            <tr className="text-left text-ink-soft">
+              <th className="pr-6 font-medium">comparisons m</th>
+              <th className="pr-6 font-medium">per test α</th>
+              <th className="font-medium">
+                1 − (1 − α)<sup>m</sup>
+              </th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r} className={r === m ? "font-semibold" : undefined}>
+                <td className="pr-6">{r}</td>
+                <td className="pr-6">{formatAlpha(alpha)}</td>
+                <td>{formatPercent(1 - (1 - alpha) ** r)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       <p className="mt-3 max-w-prose text-sm">
         That is why the analysis runs in two stages. The omnibus test first asks one question at α: do the
         group means (or rank distributions) differ at all? The post-hoc comparisons then locate the
