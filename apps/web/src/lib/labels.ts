@@ -1,4 +1,4 @@
-import type { StudyContext, StudyStatus } from "@waymark/contract";
+import type { StudyContext } from "@waymark/contract";
 import {
   ADJUSTMENT_TERMS,
   COMPARISON_TERMS,
@@ -60,12 +60,6 @@ export const CONTEXT_LABELS: Record<StudyContext, string> = {
   general: "General",
   clinical: "Clinical",
   "safety-critical": "Safety-critical",
-};
-
-export const STATUS_LABELS: Record<StudyStatus, string> = {
-  draft: "Draft",
-  in_review: "In review",
-  approved: "Approved",
 };
 
 /** Number of planned comparisons for k groups. */
