@@ -64,12 +64,24 @@ function groupsFor(scenario: Scenario): { name: string; values: number[] }[] {
 
 const cache = new Map<string, AnalysisResult>();
 
+/**
+ * The plan each scenario is built for: the plan, not the data, decides the test. Equal spread
+ * under a classic-first plan with equal planned sizes → classic ANOVA; a question about means
+ * with unequal planned sizes → Welch's ANOVA; a question about larger values → Kruskal–Wallis.
+ */
+const PLANS: Record<Scenario, AnalyzeOptions> = {
+  "equal-spread": { policy: "classic-first", question: "means", plannedSizes: "equal" },
+  "unequal-spread": { question: "means", plannedSizes: "unequal" },
+  "extreme-outlier": { question: "larger-values" },
+  identical: {},
+};
+
 /** The engine's result for a scenario (cached per scenario and options). */
 export function engineResult(scenario: Scenario, options: AnalyzeOptions = {}): AnalysisResult {
   const key = `${scenario} ${JSON.stringify(options)}`;
   let r = cache.get(key);
   if (!r) {
-    r = analyze({ groups: groupsFor(scenario), options });
+    r = analyze({ groups: groupsFor(scenario), options: { ...PLANS[scenario], ...options } });
     cache.set(key, r);
   }
   // A fresh copy, so a test may edit its own without touching another's.

@@ -19,7 +19,10 @@ function fakeServer(start: Study) {
         const design = { ...study.design, ...(body as DesignAnswers) };
         const outOfScope =
           design.independence === "paired" ? "The same units are measured in more than one group." : null;
-        const complete = Object.keys(design).length === 5 && !outOfScope && design.independence !== "unsure";
+        const complete =
+          Object.keys(design).length === DESIGN_QUESTIONS.length &&
+          !outOfScope &&
+          design.independence !== "unsure";
         study = { ...study, design, outOfScope, designComplete: complete };
         return { body: { study } };
       }
@@ -36,7 +39,7 @@ describe("DesignQuestionnaire", () => {
   it("shows one question per screen and saves each answer as it is given", async () => {
     const { calls } = fakeServer(makeStudy());
     renderWithStudy(makeStudy(), (s) => <DesignQuestionnaire study={s} />);
-    expect(screen.getByText("Question 1 of 5")).toBeTruthy();
+    expect(screen.getByText(`Question 1 of ${DESIGN_QUESTIONS.length}`)).toBeTruthy();
     expect(screen.getAllByRole("group")).toHaveLength(1);
     expect(legend()).toBe(DESIGN_QUESTIONS[0]!.question);
     expect(screen.getByText(/Why we ask:/)).toBeTruthy();
@@ -48,7 +51,7 @@ describe("DesignQuestionnaire", () => {
     await waitFor(() => expect(next.disabled).toBe(false));
     fireEvent.click(next);
     expect(legend()).toBe(DESIGN_QUESTIONS[1]!.question);
-    expect(screen.getByText(/Question 2 of 5/)).toBeTruthy();
+    expect(screen.getByText(new RegExp(`Question 2 of ${DESIGN_QUESTIONS.length}`))).toBeTruthy();
   });
 
   it("the 'not sure' path says what to find out and what Waymark will assume", async () => {
@@ -84,10 +87,16 @@ describe("DesignQuestionnaire", () => {
   it("comparisons against a control need a control group", () => {
     fakeServer(makeStudy());
     const start = makeStudy({
-      design: { independence: "independent", scale: "continuous", hasControl: "no" },
+      design: {
+        independence: "independent",
+        scale: "continuous",
+        question: "means",
+        groupSizes: "equal",
+        hasControl: "no",
+      },
     });
     renderWithStudy(start, (s) => <DesignQuestionnaire study={s} />);
-    expect(legend()).toBe(DESIGN_QUESTIONS[3]!.question);
+    expect(legend()).toBe(DESIGN_QUESTIONS.find((q) => q.key === "comparisons")!.question);
     expect((screen.getByLabelText(/Each group against the control/) as HTMLInputElement).disabled).toBe(true);
     expect(screen.getByText(/Needs a control group/)).toBeTruthy();
   });
