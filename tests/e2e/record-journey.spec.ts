@@ -122,6 +122,12 @@ test("upload, analyse, submit the active version, answer the review, approve and
   expect(((await refused.json()) as { error: { code: string } }).error.code).toBe(
     "analysis_not_on_active_version",
   );
+  // The same refusal through the page: the results step still shows the analysis of v1.
+  await page.goto(`/studies/${id}/results`);
+  await page.getByRole("button", { name: "Submit for review…" }).click();
+  await page.getByRole("button", { name: "Yes, submit" }).click();
+  await expect(page.getByText("The study was not submitted")).toBeVisible();
+  await expect(page.getByText(/the active version is 2/)).toBeVisible();
   await shot(page, info, "01-v2-not-analysed");
 
   // Run on v2 and submit from the results step.
