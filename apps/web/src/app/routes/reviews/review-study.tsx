@@ -47,13 +47,14 @@ export function ReviewStudyRoute() {
   const overridden = !!a && (!!a.deviation || a.plannedTest !== a.chosenTest);
   const rec = a && isAvailable(a.result.recommendation) ? a.result.recommendation : null;
 
+  const active = s.activeDataset ?? s.latestDataset;
   const steps = [
     { id: "design", title: "Design" },
     { id: "plan", title: "Plan", flag: s.plan.lockedAt ? undefined : "Not locked" },
     {
       id: "data",
       title: "Data",
-      flag: s.latestDataset && !s.latestDataset.afterPlanLock ? "Before plan lock" : undefined,
+      flag: active && !active.afterPlanLock ? "Before plan lock" : undefined,
     },
     { id: "checks", title: "Checks", flag: attention ? `${attention} to look at` : undefined },
     { id: "choice", title: "Test choice", flag: overridden ? "Override" : undefined },

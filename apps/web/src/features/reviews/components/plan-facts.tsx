@@ -51,15 +51,19 @@ export function PlanFacts({ study }: { study: ReviewStudy }) {
   );
 }
 
-/** Which data the analysis in review used, and whether they arrived after the plan was locked. */
+/**
+ * The data the analysis in review used: the active version (the server refuses a submission on
+ * any other). A newer upload that was set aside by making an earlier version active is named.
+ */
 export function DataFacts({ study, analysis }: { study: ReviewStudy; analysis: ReviewAnalysis | null }) {
-  const d = study.latestDataset;
+  const d = study.activeDataset ?? study.latestDataset;
   if (!d) return <p className="text-sm text-ink-soft">No data have been uploaded.</p>;
-  const olderVersion = analysis && analysis.datasetVersion !== null && analysis.datasetVersion !== d.version;
+  const notActive = analysis && analysis.datasetId !== d.id;
+  const newer = study.latestDataset && study.latestDataset.id !== d.id ? study.latestDataset : null;
   return (
     <dl className="divide-y divide-ink/10" aria-label="Data">
       <Row term="File">
-        {d.fileName} <span className="text-ink-soft">· version {d.version}</span>
+        {d.fileName} <span className="text-ink-soft">· version {d.version}, the active version</span>
       </Row>
       <Row term="Uploaded">
         <span className="num">{formatDateTime(d.uploadedAt)}</span>
@@ -77,10 +81,18 @@ export function DataFacts({ study, analysis }: { study: ReviewStudy; analysis: R
       <Row term="SHA-256">
         <ShortHash hash={d.sha256} label="SHA-256 of the data file" />
       </Row>
-      {olderVersion && (
+      {newer && (
+        <Row term="Later uploads">
+          Version {newer.version} was uploaded later; the analyst made version {d.version} the active one
+          again.
+        </Row>
+      )}
+      {notActive && (
         <Row term="Analysed version">
-          <AttentionMarker>{`Version ${analysis.datasetVersion}`}</AttentionMarker> The analysis in review
-          used an earlier upload than the latest one.
+          <AttentionMarker>
+            {analysis.datasetVersion !== null ? `Version ${analysis.datasetVersion}` : "Another version"}
+          </AttentionMarker>{" "}
+          The analysis shown used another version than the active one.
         </Row>
       )}
     </dl>
