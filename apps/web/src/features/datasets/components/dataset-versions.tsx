@@ -68,13 +68,13 @@ export function DatasetVersions({
                     <span className="text-ink-soft">—</span>
                   )}
                 </td>
-                <td className="break-all p-2">{d.fileName}</td>
-                <td className="num p-2 text-right">{formatBytes(d.sizeBytes)}</td>
+                <td className="p-2">{d.fileName}</td>
+                <td className="num whitespace-nowrap p-2 text-right">{formatBytes(d.sizeBytes)}</td>
                 <td className="p-2">
                   <ShortHash hash={d.sha256} label="SHA-256" />
                 </td>
                 <td className="p-2">{d.uploadedBy?.displayName ?? "—"}</td>
-                <td className="num p-2">{formatDateTime(d.uploadedAt)}</td>
+                <td className="num whitespace-nowrap p-2">{formatDateTime(d.uploadedAt)}</td>
                 <td className="p-2">
                   {d.afterPlanLock ? (
                     <span className="rounded-sm bg-spruce-100 px-1.5 py-0.5 text-xs font-semibold text-spruce">
