@@ -21,7 +21,7 @@ export const TRAIL: { step: string; owner: Role; what: string }[] = [
   {
     step: "Test choice",
     owner: "analyst",
-    what: "Classic ANOVA, Welch's ANOVA or Kruskal–Wallis, with the reasons.",
+    what: "The test the locked plan decided, with its reasons and where the checks speak against it.",
   },
   { step: "Results", owner: "analyst", what: "Omnibus test, matched post-hoc comparisons and effect sizes." },
   {
@@ -40,20 +40,20 @@ export const ROLE_GUIDES: Record<Role, { title: string; summary: string; duties:
   analyst: {
     title: "You carry a study from question to result",
     summary:
-      "You answer the design questions, lock the analysis plan before seeing the data, upload the data, read the assumption checks and the recommended test, run the analysis and submit it for review.",
+      "You answer the design questions, lock the analysis plan before seeing the data, upload the data, read the assumption checks, run the test the plan decided and submit it for review; if the reviewer sends it back, you reply to each comment at its step.",
     duties: [
       "Pre-specify the plan: the test policy, the matched post-hoc method and α are fixed with a timestamp when you lock it.",
-      "Choose a test other than the recommended one only with a written reason; the reviewer sees it flagged.",
+      "Run a test other than the planned one only with a written reason: it is a deviation from the plan, and the reviewer and the report show it.",
       "Read effect sizes beside p-values: statistical significance is not the same as practical importance.",
     ],
   },
   reviewer: {
     title: "You decide whether an analysis is fit to leave the team",
     summary:
-      "You see each submitted study's plan and when it was locked, the design answers, the checks, the recommended test and any override, and the results. You approve with your password as an electronic signature, or send it back with comments.",
+      "You see each submitted study's plan and when it was locked, the design answers, the checks, the planned test and any deviation from it, and the results; from the second round on, what changed since the last one. You approve with your password as an electronic signature, or send it back with comments.",
     duties: [
       "Check that the plan was locked before the data arrived.",
-      "Look hardest at overrides of the recommended test and at failed checks.",
+      "Look hardest at deviations from the plan and at checks that speak against the planned test.",
       "You cannot approve a study you created or analysed.",
     ],
   },
