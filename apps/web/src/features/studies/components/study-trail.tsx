@@ -44,7 +44,14 @@ export function StudyTrail({ studyId, steps }: { studyId: number; steps: StepSta
               )}
               <Marker state={s.state} attention={s.attention} />
               <span className="min-w-0">
-                <span className="block text-sm font-semibold">{s.label}</span>
+                <span className="block text-sm font-semibold">
+                  {s.label}
+                  {s.next && (
+                    <span className="ml-1.5 rounded-sm bg-amber-100 px-1 py-px text-[0.7rem] font-semibold text-amber-800">
+                      next
+                    </span>
+                  )}
+                </span>
                 <span className="block text-xs text-ink-soft">
                   <span className={s.attention ? "font-semibold text-amber-800" : "font-medium"}>
                     {STATE_WORD[s.state]}
@@ -55,7 +62,13 @@ export function StudyTrail({ studyId, steps }: { studyId: number; steps: StepSta
             </>
           );
           return (
-            <li key={s.key} className="relative" data-testid={`trail-${s.key}`} data-state={s.state}>
+            <li
+              key={s.key}
+              className="relative"
+              data-testid={`trail-${s.key}`}
+              data-state={s.state}
+              data-next={s.next ? "true" : undefined}
+            >
               {s.state === "locked" ? (
                 <div className="relative flex gap-3 rounded-md p-2 text-ink-soft" aria-disabled="true">
                   {content}
