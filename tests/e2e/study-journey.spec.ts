@@ -96,7 +96,7 @@ test("the demo analyst walks a study from question to results", async ({ page },
   await shot(page, info, "checks");
 
   // Test choice
-  await page.getByRole("link", { name: "See the recommended test" }).click();
+  await page.getByRole("link", { name: "See the plan's test for these data" }).click();
   await expect(page.getByTestId("recommended-test")).toBeVisible();
   await shot(page, info, "choice");
   await page.getByRole("button", { name: "Run the analysis" }).click();

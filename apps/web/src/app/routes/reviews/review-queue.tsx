@@ -9,8 +9,8 @@ export function ReviewQueueRoute() {
       <header>
         <h1 className="text-3xl font-semibold text-spruce">Review queue</h1>
         <p className="mt-1 max-w-prose text-ink-soft">
-          Studies their analysts have submitted, longest-waiting first. An amber marker means the analyst used
-          a different test from the one recommended; read their reason before you decide.
+          Studies their analysts have submitted, longest-waiting first. An amber marker means the analyst
+          deviated from the plan's primary test; read their justification before you decide.
         </p>
       </header>
       {queue.isPending && <p className="text-ink-soft">Loading the queue…</p>}

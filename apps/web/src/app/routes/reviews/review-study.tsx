@@ -57,7 +57,7 @@ export function ReviewStudyRoute() {
       flag: active && !active.afterPlanLock ? "Before plan lock" : undefined,
     },
     { id: "checks", title: "Checks", flag: attention ? `${attention} to look at` : undefined },
-    { id: "choice", title: "Test choice", flag: overridden ? "Override" : undefined },
+    { id: "choice", title: "Test choice", flag: overridden ? "Deviation" : undefined },
     { id: "results", title: "Results" },
     { id: "history", title: "History" },
     { id: "decision", title: s.status === "in_review" ? "Your decision" : "Decision" },

@@ -26,7 +26,7 @@ export function StudyChecksRoute() {
               to={studyPath(study.id, "choice")}
               className="inline-flex rounded-md bg-spruce px-4 py-2 text-sm font-semibold text-stone no-underline hover:bg-spruce-700 hover:no-underline"
             >
-              See the recommended test
+              See the plan's test for these data
             </Link>
           </p>
         </>

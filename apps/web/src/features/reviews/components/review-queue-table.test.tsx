@@ -38,15 +38,15 @@ describe("ReviewQueueTable", () => {
     expect(titles()).toEqual(["Reading scores", "Fertiliser trial", "Cooling rates"]);
   });
 
-  it("marks an override with words and filters by text and by override", () => {
+  it("marks a deviation from the plan with words and filters by text and by deviation", () => {
     renderWithProviders(<ReviewQueueTable queue={QUEUE} />);
     const rows = within(screen.getByTestId("review-queue")).getAllByRole("row");
-    expect(within(rows[1]!).getByText("Override")).toBeTruthy();
+    expect(within(rows[1]!).getByText("Deviation")).toBeTruthy();
     expect(screen.getAllByText("None")).toHaveLength(2);
     fireEvent.change(screen.getByLabelText("Find a study or analyst"), { target: { value: "bo lund" } });
     expect(titles()).toEqual(["Cooling rates"]);
     fireEvent.change(screen.getByLabelText("Find a study or analyst"), { target: { value: "" } });
-    fireEvent.click(screen.getByLabelText(/Only studies with an override/));
+    fireEvent.click(screen.getByLabelText(/Only studies with a deviation from the plan/));
     expect(titles()).toEqual(["Cooling rates"]);
   });
 

@@ -32,13 +32,13 @@ const columns = h.columns([
   }),
   h.accessor((r) => testTitle(r.chosenTest), {
     id: "test",
-    header: "Recommended → chosen",
+    header: "Plan's test → run",
     sortFn: "text",
     cell: (c) => {
       const r = c.row.original;
       return r.recommendedTest === r.chosenTest ? (
         <span>
-          {testTitle(r.chosenTest)} <span className="text-ink-soft">(as recommended)</span>
+          {testTitle(r.chosenTest)} <span className="text-ink-soft">(as planned)</span>
         </span>
       ) : (
         <span>
@@ -50,7 +50,7 @@ const columns = h.columns([
   }),
   h.accessor((r) => (r.override ? 1 : 0), {
     id: "override",
-    header: "Override",
+    header: "Deviation",
     cell: (c) => <OverrideFlag override={c.row.original.override} />,
   }),
   h.accessor((r) => (Number.isFinite(r.daysWaiting) ? r.daysWaiting : -1), {
@@ -95,7 +95,7 @@ export function ReviewQueueTable({ queue }: { queue: QueueItem[] }) {
             onChange={(e) => setOverridesOnly(e.target.checked)}
             className="h-4 w-4 accent-spruce"
           />
-          Only studies with an override ({overrides})
+          Only studies with a deviation from the plan ({overrides})
         </label>
       </div>
       <DataTable

@@ -89,8 +89,9 @@ export function SettingsForm({ settings }: { settings: OrganizationSettings }) {
           <fieldset className="flex flex-col gap-2">
             <legend className="mb-1 font-semibold">Test policy</legend>
             <p className="text-sm text-ink-soft">
-              Which omnibus test a new study's plan starts from. The analyst sees the reason for every
-              recommendation.
+              For a question about averages: classic-first keeps classic one-way ANOVA when a plan puts the
+              same number of units in every group, with one named rule that moves it to Welch's ANOVA;
+              welch-first uses Welch's ANOVA. The test is fixed when the plan is locked.
             </p>
             {POLICIES.map((p) => (
               <Choice
