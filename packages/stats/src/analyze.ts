@@ -26,7 +26,7 @@ import { welchAnova } from "./omnibus/welch-anova.js";
 import { ENGINE_VERSION } from "./version.js";
 import { etaSquaredCi } from "./effect-sizes/eta-squared-ci.js";
 import type { Unavailable } from "./types/group-summary.js";
-import { runPosthoc } from "./posthoc-plan.js";
+import { runPosthoc, SHIFT_INTERVALS_FULL_N } from "./posthoc-plan.js";
 import type {
   AnalysisResult,
   ErrorRateCheckPart,
@@ -139,8 +139,6 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
   const outliersBySize = part(() => sizeAwareOutliers(sample));
   const qq = qqPlot(sample);
 
-  const posthoc = runPosthoc(sample, groups, anova, options);
-
   const plan =
     options.plan ??
     planTest({
@@ -162,6 +160,13 @@ export function analyze(input: AnalyzeInput): AnalysisResult {
       "kruskal-wallis": reasonIfUnavailable(kw),
     },
   });
+  const posthoc = runPosthoc(
+    sample,
+    groups,
+    anova,
+    options,
+    recommendation.test === "kruskal-wallis" || totalN <= SHIFT_INTERVALS_FULL_N,
+  );
   if (allIdentical)
     recommendation.caveats.unshift({
       code: "caveat.all-identical",

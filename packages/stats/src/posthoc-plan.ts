@@ -37,6 +37,10 @@ function pairsOf<P>(result: Unavailable | { pairs: readonly P[] }): P[] | Unavai
   return [...(result as { pairs: readonly P[] }).pairs];
 }
 
+/** Up to this many values in all, Dunn's pairs always get Hodges–Lehmann intervals. */
+export const SHIFT_INTERVALS_FULL_N = 20_000;
+const SHIFT_INTERVALS_SKIPPED = `Hodges–Lehmann intervals are computed when the plan's primary test is Kruskal–Wallis, or for up to ${SHIFT_INTERVALS_FULL_N.toLocaleString("en-US")} values in all`;
+
 /** Welch t-tests against the control gain their simultaneous (Bonferroni) intervals. */
 function withWelchIntervals<P extends { a: string }>(
   pairs: P[] | Unavailable,
@@ -73,8 +77,19 @@ export function runPosthoc(
   groups: GroupDescription[],
   anova: AnovaPart,
   options: ResolvedOptions,
+  /** Whether Dunn's pairs get their Hodges–Lehmann intervals (see SHIFT_INTERVALS_FULL_N). */
+  shiftIntervals = true,
 ): { posthoc: PosthocPart; familyWiseError: FamilyWiseErrorPart } {
   const alpha = options.alpha;
+  // The shift intervals cost a selection over n_a·n_b differences per pair (about 2 s for 45
+  // pairs of 100,000 values): computed whenever the plan's primary test is Kruskal–Wallis, and
+  // for any plan up to SHIFT_INTERVALS_FULL_N values; otherwise each pair says why it has none.
+  const shifts = <P extends { a: string; b: string }>(pairs: P[] | Unavailable, est: Map<string, number>) =>
+    shiftIntervals
+      ? withShiftIntervals(pairs, sortedByName, alpha, est)
+      : Array.isArray(pairs)
+        ? pairs.map((x) => ({ ...x, intervalReason: SHIFT_INTERVALS_SKIPPED }))
+        : pairs;
   const summaries: GroupSummary[] = sample.groups.map((g) => {
     const m = groupMoments(g);
     return { name: g.name, n: m.n, mean: m.mean, variance: m.n > 1 ? m.ss / (m.n - 1) : 0 };
@@ -100,7 +115,7 @@ export function runPosthoc(
   );
   const sortedByName = new Map(sample.groups.map((g) => [g.name, sortedValues(g)]));
   const shiftEstimates = new Map<string, number>();
-  const dunnPairs = withShiftIntervals(pairsOf(dunnResult), sortedByName, alpha, shiftEstimates);
+  const dunnPairs = shifts(pairsOf(dunnResult), shiftEstimates);
 
   const posthoc: PosthocPart = {
     tukey,
@@ -118,10 +133,8 @@ export function runPosthoc(
         withControl.map((x) => x.p),
         options.adjust,
       );
-      dunnVsControl = withShiftIntervals(
+      dunnVsControl = shifts(
         withControl.map((x, i) => ({ ...x, pAdj: adjusted[i] as number })),
-        sortedByName,
-        alpha,
         shiftEstimates,
       );
     } else dunnVsControl = dunnPairs;
