@@ -13,6 +13,7 @@ import {
 } from "./enums.js";
 import { LIMITS } from "./limits.js";
 import { datasetDto } from "./datasets.js";
+import { reviewReply } from "./reviews.js";
 
 const levels = z
   .array(
@@ -162,7 +163,6 @@ export const studyProgress = z.object({
 });
 export type StudyProgress = z.infer<typeof studyProgress>;
 
-const reviewReplyDto = z.object({ id: z.number(), body: z.string(), author: person, createdAt: timestamp });
 /** After "request changes": that round's comments, each at its step, with the analyst's replies. */
 export const openReview = z.object({
   round: z.number(),
@@ -175,7 +175,7 @@ export const openReview = z.object({
       body: z.string(),
       author: person,
       createdAt: timestamp,
-      replies: z.array(reviewReplyDto),
+      replies: z.array(reviewReply),
     }),
   ),
 });
