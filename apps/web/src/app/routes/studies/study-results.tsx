@@ -1,4 +1,6 @@
+import { useSearchParams } from "react-router-dom";
 import { ErrorPanel } from "@/components/errors/error-panel";
+import { AnalysisRuns } from "@/features/analyses/components/analysis-runs";
 import { DraftReportLink } from "@/features/reports/components/draft-report-link";
 import { HistoryTimeline } from "@/features/reviews/components/history-timeline";
 import { useAnalysis } from "@/features/analyses/api/get-analysis";
@@ -9,7 +11,11 @@ import { useStudyContext } from "./study-context";
 
 export function StudyResultsRoute() {
   const { study, canEdit } = useStudyContext();
-  const analysis = useAnalysis(study.id, study.latestAnalysisId);
+  // Each run has its own address (?analysis=ID); without one, the newest run is shown.
+  const [params] = useSearchParams();
+  const asked = Number(params.get("analysis"));
+  const shownId = Number.isSafeInteger(asked) && asked > 0 ? asked : study.latestAnalysisId;
+  const analysis = useAnalysis(study.id, shownId);
   const owner = canEdit || study.status !== "draft";
   return (
     <div className="flex flex-col gap-8">
@@ -22,6 +28,13 @@ export function StudyResultsRoute() {
         {analysis.error && (
           <ErrorPanel title="The results could not be loaded" message={analysis.error.message} />
         )}
+        <div className="mb-4">
+          <AnalysisRuns
+            studyId={study.id}
+            shownId={analysis.data?.id ?? null}
+            activeDatasetId={study.activeDataset?.id ?? null}
+          />
+        </div>
         {analysis.data && <ResultsPanel study={study} analysis={analysis.data} />}
       </div>
       {analysis.data && owner && (

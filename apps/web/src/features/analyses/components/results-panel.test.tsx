@@ -110,7 +110,7 @@ describe("ResultsPanel", () => {
         })}
       />,
     );
-    expect(screen.getByText("Deviation from the plan, shown to the reviewer.")).toBeTruthy();
+    expect(screen.getByText("Shown to the reviewer.")).toBeTruthy();
     expect(
       screen.getByText(
         /the Kruskal–Wallis test was run instead of the plan's primary test, classic one-way ANOVA/i,
