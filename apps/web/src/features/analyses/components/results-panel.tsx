@@ -57,9 +57,7 @@ export function ResultsPanel({ study, analysis }: { study: Study; analysis: Anal
       </p>
       {analysis.deviation && (
         <p className="rounded-md border-l-4 border-amber bg-amber-100 p-3 text-sm" data-testid="deviation">
-          <span className="font-semibold text-amber-800">
-            Deviation from the plan, shown to the reviewer.
-          </span>{" "}
+          <span className="font-semibold text-amber-800">Shown to the reviewer.</span>{" "}
           {deviationSentence(analysis.plannedTest, analysis.chosenTest, analysis.deviation.justification)}
         </p>
       )}
