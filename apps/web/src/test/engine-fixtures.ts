@@ -50,7 +50,7 @@ function groupsFor(scenario: Scenario): { name: string; values: number[] }[] {
       ];
     case "extreme-outlier": {
       const epoxy = draw(24, 1.2, 12);
-      epoxy[3] = 48; // a transcription slip, far beyond 3 IQR
+      epoxy[3] = 48; // a value copied wrongly, far out for a group of its size
       return [
         { name: "Epoxy", values: epoxy },
         { name: "Acrylic", values: draw(21, 1.2, 12) },
