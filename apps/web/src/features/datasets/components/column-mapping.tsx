@@ -79,40 +79,20 @@ export function ColumnMapping({
       </fieldset>
       {layout === "long" && (
         <div className="mt-3 flex flex-wrap gap-4 text-sm">
-          <div className="flex flex-col gap-1">
-            <label htmlFor={gid} className="font-medium">
-              Group column
-            </label>
-            <select
-              id={gid}
-              value={groupColumn}
-              onChange={(e) => setGroup(e.target.value)}
-              className="rounded-md border border-ink/25 bg-paper px-3 py-1.5"
-            >
-              {preview.columns.map((c) => (
-                <option key={c} value={c}>
-                  {c}
-                </option>
-              ))}
-            </select>
-          </div>
-          <div className="flex flex-col gap-1">
-            <label htmlFor={oid} className="font-medium">
-              Outcome column
-            </label>
-            <select
-              id={oid}
-              value={outcomeColumn}
-              onChange={(e) => setOutcome(e.target.value)}
-              className="rounded-md border border-ink/25 bg-paper px-3 py-1.5"
-            >
-              {preview.columns.map((c) => (
-                <option key={c} value={c}>
-                  {c}
-                </option>
-              ))}
-            </select>
-          </div>
+          <ColumnSelect
+            id={gid}
+            label="Group column"
+            value={groupColumn}
+            columns={preview.columns}
+            onChange={setGroup}
+          />
+          <ColumnSelect
+            id={oid}
+            label="Outcome column"
+            value={outcomeColumn}
+            columns={preview.columns}
+            onChange={setOutcome}
+          />
         </div>
       )}
       {same && (
@@ -129,5 +109,40 @@ export function ColumnMapping({
         </Button>
       </div>
     </section>
+  );
+}
+
+/** One column chooser: a labelled list of the file's columns. */
+function ColumnSelect({
+  id,
+  label,
+  value,
+  columns,
+  onChange,
+}: {
+  id: string;
+  label: string;
+  value: string;
+  columns: readonly string[];
+  onChange: (column: string) => void;
+}) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-medium">
+        {label}
+      </label>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        className="rounded-md border border-ink/25 bg-paper px-3 py-1.5"
+      >
+        {columns.map((c) => (
+          <option key={c} value={c}>
+            {c}
+          </option>
+        ))}
+      </select>
+    </div>
   );
 }

@@ -1,6 +1,7 @@
 import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
+import { ConfirmBox } from "@/components/ui/confirm-box";
 import { useSubmitStudy } from "../api/submit-study";
 import type { StudyDto as Study } from "@waymark/contract";
 
@@ -36,29 +37,16 @@ export function SubmitPanel({ study, analysisId }: { study: Study; analysisId: n
           Submit for review…
         </Button>
       ) : (
-        <div
-          role="alertdialog"
-          aria-labelledby="submit-confirm"
-          className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-4"
+        <ConfirmBox
+          title="Submit this analysis?"
+          confirmLabel="Yes, submit"
+          pendingLabel="Submitting…"
+          pending={submit.isPending}
+          onConfirm={() => submit.mutate(analysisId, { onSuccess: () => setConfirming(false) })}
+          onCancel={() => setConfirming(false)}
         >
-          <p id="submit-confirm" className="font-semibold">
-            Submit this analysis?
-          </p>
-          <p className="mt-1 max-w-prose text-sm">
-            While it is in review, the study, its data and this analysis cannot change.
-          </p>
-          <div className="mt-3 flex gap-2">
-            <Button
-              disabled={submit.isPending}
-              onClick={() => submit.mutate(analysisId, { onSuccess: () => setConfirming(false) })}
-            >
-              {submit.isPending ? "Submitting…" : "Yes, submit"}
-            </Button>
-            <Button variant="secondary" onClick={() => setConfirming(false)}>
-              Not yet
-            </Button>
-          </div>
-        </div>
+          While it is in review, the study, its data and this analysis cannot change.
+        </ConfirmBox>
       )}
       {submit.error && (
         <div className="mt-3">

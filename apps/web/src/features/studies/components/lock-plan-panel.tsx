@@ -1,6 +1,7 @@
 import { useState } from "react";
 import { ErrorPanel } from "@/components/errors/error-panel";
 import { Button } from "@/components/ui/button";
+import { ConfirmBox } from "@/components/ui/confirm-box";
 import { useLockPlan } from "../api/lock-plan";
 import type { StudyDto as Study } from "@waymark/contract";
 
@@ -15,8 +16,8 @@ export function LockPlanPanel({ study }: { study: Study }) {
         Lock the plan
       </h3>
       <p className="mt-1 max-w-prose text-sm">
-        Locking records the test policy, the post-hoc method, the adjustment, α and the sample size with the
-        date and time, before any data are uploaded. The reviewer sees when it happened.
+        Locking records the primary test and its post-hoc method, the adjustment, α and the sample size with
+        the date and time, before any data are uploaded. The reviewer sees when it happened.
       </p>
       {blocked && (
         <p className="mt-2 text-sm text-amber-800">
@@ -30,32 +31,18 @@ export function LockPlanPanel({ study }: { study: Study }) {
           Lock the plan…
         </Button>
       ) : (
-        <div
-          role="alertdialog"
-          aria-labelledby="lock-confirm-title"
-          aria-describedby="lock-confirm-text"
-          className="mt-3 rounded-md border-l-4 border-amber bg-amber-100 p-4"
+        <ConfirmBox
+          title="Lock the plan now?"
+          confirmLabel="Yes, lock the plan"
+          pendingLabel="Locking…"
+          pending={lock.isPending}
+          onConfirm={() => lock.mutate(undefined, { onSuccess: () => setConfirming(false) })}
+          onCancel={() => setConfirming(false)}
         >
-          <p id="lock-confirm-title" className="font-semibold">
-            Lock the plan now?
-          </p>
-          <p id="lock-confirm-text" className="mt-1 max-w-prose text-sm">
-            This cannot be undone. The design answers, the test policy, the post-hoc method, the adjustment, α
-            and the sample size stay as they are now. A different test can still be chosen later, but only
-            with a written reason that the reviewer sees.
-          </p>
-          <div className="mt-3 flex gap-2">
-            <Button
-              disabled={lock.isPending}
-              onClick={() => lock.mutate(undefined, { onSuccess: () => setConfirming(false) })}
-            >
-              {lock.isPending ? "Locking…" : "Yes, lock the plan"}
-            </Button>
-            <Button variant="secondary" onClick={() => setConfirming(false)}>
-              Not yet
-            </Button>
-          </div>
-        </div>
+          This cannot be undone. The design answers, the primary test and its post-hoc method, the adjustment,
+          α and the sample size stay as they are now. Running another test later is a deviation from the plan:
+          it needs a written justification, and the reviewer and the report show it.
+        </ConfirmBox>
       )}
       {lock.error && (
         <div className="mt-3">
