@@ -120,14 +120,13 @@ export function textReport(
   out.push("");
 
   out.push("Checks");
+  // Normality per group (W is the same on a group's values and its standardized residuals);
+  // residuals pooled across groups mix spread with shape, so they are not read here.
   const sw = result.shapiroWilk;
-  const swr = result.shapiroWilkResiduals;
   out.push(
-    `  normality of residuals (${CHECK_TERMS["shapiro-wilk"].short}): ${isAvailable(swr) ? `W = ${num(swr.W)}, p ${pval(swr.p)}` : why(swr)}`,
+    `  normality within each group (${CHECK_TERMS["shapiro-wilk"].short}): ${sw.map((s) => `${s.group} ${s.available !== false ? `W = ${num(s.W)}, p ${pval(s.p)}` : "not computed"}`).join("; ")}`,
   );
-  out.push(
-    `  per group: ${sw.map((s) => `${s.group} ${s.available !== false ? `W = ${num(s.W)}, p ${pval(s.p)}` : "n/a"}`).join("; ")}`,
-  );
+  if (isAvailable(result.groupNormality)) out.push(`    ${result.groupNormality.summary.text}`);
   for (const [label, x] of [
     [`equal variances, ${CHECK_TERMS.levene.title}`, result.levene],
     [`equal variances, ${CHECK_TERMS["brown-forsythe"].title}`, result.brownForsythe],
@@ -149,6 +148,7 @@ export function textReport(
       `  outliers: ${o.totalMild} beyond 1.5 IQR, ${o.totalExtreme} beyond 3 IQR, ${o.totalLargeResidual} with |studentized residual| > 3`,
     );
   }
+  if (isAvailable(result.sizeAwareOutliers)) out.push(`    ${result.sizeAwareOutliers.summary.text}`);
   out.push("");
 
   const ph = result.posthoc;
