@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Installs the Debian packages the test suites need, only when they are missing: chromium (browser
-# tests) and python3 (tests/contract/cli-shape.py). The scipy/statsmodels reference answers are
+# tests), python3 (tests/contract/cli-shape.py) and postgresql (the API suite on PostgreSQL, in a
+# throwaway cluster started by scripts/pg-cluster.mjs). The scipy/statsmodels reference answers are
 # committed fixtures (tests/reference/fixtures); only `npm run reference:regen -w @waymark/tests`,
 # which regenerates them, needs python3-scipy and python3-statsmodels.
 set -euo pipefail
@@ -8,6 +9,7 @@ set -euo pipefail
 need=()
 [ -x /usr/bin/chromium ] || need+=(chromium)
 [ -x /usr/bin/python3 ] || need+=(python3)
+compgen -G "/usr/lib/postgresql/*/bin/initdb" >/dev/null || need+=(postgresql)
 if [ "${1:-}" = "--reference" ]; then
   /usr/bin/python3 -c "import scipy" 2>/dev/null || need+=(python3-scipy)
   /usr/bin/python3 -c "import statsmodels" 2>/dev/null || need+=(python3-statsmodels)
