@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # Installs the Debian packages the test suites need, only when they are missing: chromium (browser
 # tests), python3 (tests/contract/cli-shape.py) and postgresql (the API suite on PostgreSQL, in a
-# throwaway cluster started by scripts/pg-cluster.mjs). The scipy/statsmodels reference answers are
+# throwaway cluster started by scripts/pg-cluster.mjs) and haproxy (the two-instance test in
+# tests/multi-instance runs deploy/haproxy.cfg in front of two API processes). The scipy/statsmodels reference answers are
 # committed fixtures (tests/reference/fixtures); only `npm run reference:regen -w @waymark/tests`,
 # which regenerates them, needs python3-scipy and python3-statsmodels.
 set -euo pipefail
@@ -10,6 +11,7 @@ need=()
 [ -x /usr/bin/chromium ] || need+=(chromium)
 [ -x /usr/bin/python3 ] || need+=(python3)
 compgen -G "/usr/lib/postgresql/*/bin/initdb" >/dev/null || need+=(postgresql)
+command -v haproxy >/dev/null 2>&1 || [ -x /usr/sbin/haproxy ] || need+=(haproxy)
 if [ "${1:-}" = "--reference" ]; then
   /usr/bin/python3 -c "import scipy" 2>/dev/null || need+=(python3-scipy)
   /usr/bin/python3 -c "import statsmodels" 2>/dev/null || need+=(python3-statsmodels)
