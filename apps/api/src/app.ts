@@ -45,7 +45,11 @@ export interface BuiltApp {
 
 /** Builds the Express app around an open data source; server.ts listens, tests use supertest. */
 export function createApp(ds: DataSource, env: Env, services: AppServices): BuiltApp {
-  configureTaskPool({ timeoutMs: env.TASK_TIMEOUT_SECONDS * 1000, memoryMb: env.WORKER_MEMORY_MB });
+  configureTaskPool({
+    timeoutMs: env.TASK_TIMEOUT_SECONDS * 1000,
+    memoryMb: env.WORKER_MEMORY_MB,
+    threads: env.TASK_WORKER_THREADS,
+  });
   const app = express();
   app.disable("x-powered-by");
   if (env.TRUST_PROXY) app.set("trust proxy", 1);

@@ -5,6 +5,14 @@ import { z } from "zod";
 /** The repository root, so default paths work whichever folder the process starts in. */
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../../..");
 
+/**
+ * Worker threads per pool (one pool for uploads, one for analyses). Unset, the pools size
+ * themselves to the machine (cores − 1, 1 to 4); several instances on one machine each get a share.
+ */
+const workerPoolSettings = {
+  TASK_WORKER_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+};
+
 const flag = z
   .enum(["1", "0", "true", "false", ""])
   .optional()
@@ -34,6 +42,7 @@ const schema = z.object({
   TASK_TIMEOUT_SECONDS: z.coerce.number().positive().max(3600).default(60),
   /** Heap one worker may use; past it the worker dies, is replaced, and the request gets 413. */
   WORKER_MEMORY_MB: z.coerce.number().int().min(64).max(16384).default(1024),
+  ...workerPoolSettings,
   /** Set by npm to the folder the command was typed in; scripts resolve file arguments against it. */
   INIT_CWD: z.string().optional(),
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),

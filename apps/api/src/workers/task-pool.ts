@@ -10,6 +10,8 @@ type TaskName = "analyzeTask" | "previewTask" | "extractTask";
 export interface TaskLimits {
   timeoutMs: number;
   memoryMb: number;
+  /** Threads per pool; unset, the pool sizes itself to the machine. */
+  threads?: number;
 }
 
 let limits: TaskLimits = { timeoutMs: 60_000, memoryMb: 1024 };
@@ -69,7 +71,11 @@ export async function runBounded(p: Piscina, name: string, input: unknown, l: Ta
 
 function getPool(kind: "upload" | "analysis"): Piscina {
   let p = pools.get(kind);
-  if (!p) pools.set(kind, (p = createBoundedPool(new URL("./worker.js", import.meta.url).href, limits)));
+  if (!p)
+    pools.set(
+      kind,
+      (p = createBoundedPool(new URL("./worker.js", import.meta.url).href, limits, limits.threads)),
+    );
   return p;
 }
 

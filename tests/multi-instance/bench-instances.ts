@@ -1,0 +1,227 @@
+// The load benchmark on PostgreSQL with one and with two API instances behind HAProxy, side by
+// side in one run (`npm run bench:instances`, after `npm run build`). Prints throughput, p50/p95
+// and errors for reads and for analysis runs; writes bench/results/instances.json. Figures only:
+// nothing here is asserted.
+//
+// Each phase: a fresh PostgreSQL cluster, n instances of apps/api/dist/server.js (demo mode,
+// NODE_ENV=production, each analysis worker pool one thread), deploy/haproxy.cfg in front, and
+// CONNECTIONS virtual people (own sessions as the demo analyst) looping for DURATION_S seconds
+// over GET /api/studies, GET /api/studies/:id, GET /api/studies/:id/analyses/:analysisId and one
+// POST /api/studies/:id/analyses (an analysis run on GROUP_SIZE values per group) each.
+//
+// How the cores are shared (see CPU_PLAN below): with 2 cores, each instance is pinned to a core
+// of its own (taskset), while PostgreSQL, HAProxy and this load generator float over both; with
+// one instance, it has core 0 and the rest float the same way.
+import { mkdirSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { Client } from "./client.js";
+import {
+  DEMO_PASSWORD,
+  freePort,
+  repoRoot,
+  startInstance,
+  startPostgres,
+  startProxy,
+  type Instance,
+} from "./harness.js";
+import { lockedStudy, uploadDataset, yieldCsv } from "./workload.js";
+
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
+const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 30);
+const GROUP_SIZE = Number(process.env.BENCH_GROUP_SIZE ?? 50);
+const STUDIES = 5;
+const cores = os.availableParallelism();
+/** Which CPUs each instance is pinned to; undefined leaves the scheduler free (one core, or taskset missing). */
+const pin = (i: number) => (cores >= 2 ? String(i % cores) : undefined);
+
+interface Sample {
+  kind: "read" | "run";
+  ms: number;
+  status: number;
+  error?: string;
+}
+
+const percentile = (sorted: number[], p: number) =>
+  sorted.length === 0
+    ? null
+    : sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))]!;
+const round = (x: number | null, d = 1) => (x === null ? null : Math.round(x * 10 ** d) / 10 ** d);
+
+function summarize(samples: Sample[], seconds: number) {
+  const ok = samples.filter((s) => s.status >= 200 && s.status < 300);
+  const lat = ok.map((s) => s.ms).sort((x, y) => x - y);
+  const byStatus: Record<string, number> = {};
+  for (const s of samples)
+    byStatus[s.error ? "transport" : s.status] = (byStatus[s.error ? "transport" : s.status] ?? 0) + 1;
+  return {
+    completed: ok.length,
+    perSecond: round(ok.length / seconds, 2),
+    p50Ms: round(percentile(lat, 50)),
+    p95Ms: round(percentile(lat, 95)),
+    maxMs: round(lat.at(-1) ?? null),
+    errors: samples.length - ok.length,
+    byStatus,
+  };
+}
+
+async function phase(instances: 1 | 2) {
+  const pg = await startPostgres();
+  const started: Instance[] = [];
+  let proxy: Awaited<ReturnType<typeof startProxy>> | null = null;
+  try {
+    const proxyPort = await freePort();
+    const publicUrl = `http://127.0.0.1:${proxyPort}`;
+    for (let i = 0; i < instances; i++)
+      started.push(
+        await startInstance({
+          name: `api${i + 1}`,
+          databaseUrl: pg.url,
+          publicUrl,
+          cpus: pin(i),
+          env: { SIGNIN_LIMIT_PER_IP: "100000", TASK_WORKER_THREADS: "1" },
+        }),
+      );
+    // With one instance the second server address is a closed port; the health check keeps it out.
+    const ports: [number, number] = [started[0]!.port, started[1]?.port ?? (await freePort())];
+    proxy = await startProxy(ports, { port: proxyPort, expectServers: instances });
+
+    // The studies the load works on: locked plans, one dataset and one stored analysis each.
+    const owner = new Client(proxy.url, { keepAlive: true });
+    if ((await owner.signIn("analyst@waymark.test", DEMO_PASSWORD)).status !== 200)
+      throw new Error("sign-in failed");
+    const studies: { id: number; datasetId: number; analysisId: number }[] = [];
+    for (let s = 0; s < STUDIES; s++) {
+      const id = await lockedStudy(owner, `Benchmark study ${s + 1}`);
+      const ds = await uploadDataset(owner, id, yieldCsv(100 + s, GROUP_SIZE));
+      const run = await owner.json<{ analysis: { id: number } }>(
+        "POST",
+        `/api/studies/${id}/analyses`,
+        { datasetId: ds.id },
+        201,
+      );
+      studies.push({ id, datasetId: ds.id, analysisId: run.analysis.id });
+    }
+    const clients: Client[] = [];
+    for (let i = 0; i < CONNECTIONS; i++) {
+      const c = new Client(proxy.url, { keepAlive: true });
+      const r = await c.signIn("analyst@waymark.test", DEMO_PASSWORD);
+      if (r.status !== 200) throw new Error(`sign-in ${i}: ${r.status} ${r.text}`);
+      clients.push(c);
+    }
+
+    const samples: Sample[] = [];
+    const errorBodies = new Set<string>();
+    const stopAt = performance.now() + DURATION_S * 1000;
+    const t0 = performance.now();
+    const record = async (kind: Sample["kind"], send: () => ReturnType<Client["request"]>) => {
+      const start = performance.now();
+      try {
+        const r = await send();
+        samples.push({ kind, ms: r.ms, status: r.status });
+        if ((r.status < 200 || r.status > 299) && errorBodies.size < 5)
+          errorBodies.add(`${kind} ${r.status} ${r.text.slice(0, 200)}`);
+      } catch (e) {
+        samples.push({ kind, ms: performance.now() - start, status: 0, error: String(e) });
+        if (errorBodies.size < 5) errorBodies.add(`${kind} ${String(e)}`);
+      }
+    };
+    await Promise.all(
+      clients.map(async (c, i) => {
+        for (let loop = 0; performance.now() < stopAt; loop++) {
+          const s = studies[(i + loop) % studies.length]!;
+          await record("read", () => c.request("GET", "/api/studies"));
+          await record("read", () => c.request("GET", `/api/studies/${s.id}`));
+          await record("read", () => c.request("GET", `/api/studies/${s.id}/analyses/${s.analysisId}`));
+          await record("run", () =>
+            c.request("POST", `/api/studies/${s.id}/analyses`, JSON.stringify({ datasetId: s.datasetId }), {
+              "content-type": "application/json",
+            }),
+          );
+        }
+      }),
+    );
+    // Requests still in flight at the end are counted when they finish, over the whole span.
+    const seconds = (performance.now() - t0) / 1000;
+    const served: Record<string, number> = {};
+    for (const c of clients) for (const [k, n] of c.servedBy) served[k] = (served[k] ?? 0) + n;
+    return {
+      instances,
+      seconds: round(seconds, 1),
+      reads: summarize(
+        samples.filter((s) => s.kind === "read"),
+        seconds,
+      ),
+      runs: summarize(
+        samples.filter((s) => s.kind === "run"),
+        seconds,
+      ),
+      servedBy: served,
+      errorSamples: [...errorBodies],
+    };
+  } finally {
+    await proxy?.stop();
+    await Promise.allSettled(started.map((i) => i.kill("SIGTERM")));
+    pg.stop();
+  }
+}
+
+const one = await phase(1);
+const two = await phase(2);
+const ratio = one.runs.completed > 0 ? round(two.runs.completed / one.runs.completed, 2) : null;
+const figures = {
+  benchmark: "api-instances",
+  measuredAt: new Date().toISOString(),
+  machine: { cpus: cores, cpuModel: os.cpus()[0]?.model ?? null, node: process.version },
+  setup: {
+    database: "PostgreSQL (Debian) in a throwaway cluster on 127.0.0.1, fsync off",
+    proxy: "HAProxy with deploy/haproxy.cfg (round robin, readiness checks)",
+    server:
+      "node apps/api/dist/server.js, NODE_ENV=production, WAYMARK_DEMO=1, one analysis worker thread per instance",
+    cpuPlan:
+      cores >= 2
+        ? "each instance pinned to its own core with taskset (api1: core 0, api2: core 1); PostgreSQL, HAProxy and the load generator unpinned, sharing both cores"
+        : "one core: everything shares it",
+    connections: CONNECTIONS,
+    durationS: DURATION_S,
+    mix: `per loop: GET /api/studies, GET /api/studies/:id, GET /api/studies/:id/analyses/:analysisId, POST /api/studies/:id/analyses (${GROUP_SIZE} values per group, 3 groups)`,
+  },
+  phases: [one, two],
+  runsRatioTwoToOne: ratio,
+  goal: {
+    zeroErrors: one.reads.errors + one.runs.errors + two.reads.errors + two.runs.errors === 0,
+    runsRatioAtLeast: 1.6,
+    met: (ratio ?? 0) >= 1.6,
+  },
+};
+const outDir = path.join(repoRoot, "bench", "results");
+mkdirSync(outDir, { recursive: true });
+writeFileSync(path.join(outDir, "instances.json"), `${JSON.stringify(figures, null, 2)}\n`);
+
+const row = (label: string, f: (p: typeof one) => unknown) =>
+  `  ${label.padEnd(22)} ${String(f(one)).padStart(14)} ${String(f(two)).padStart(14)}`;
+console.log(
+  `\nAPI on PostgreSQL behind HAProxy: ${CONNECTIONS} connections, ${DURATION_S} s per phase, ${cores} cores`,
+);
+console.log(`  cores: ${figures.setup.cpuPlan}`);
+console.log(`  ${"".padEnd(22)} ${"1 instance".padStart(14)} ${"2 instances".padStart(14)}`);
+console.log(row("reads completed", (p) => p.reads.completed));
+console.log(row("reads /s", (p) => p.reads.perSecond));
+console.log(row("reads p50 / p95 ms", (p) => `${p.reads.p50Ms} / ${p.reads.p95Ms}`));
+console.log(row("reads errors", (p) => p.reads.errors));
+console.log(row("runs completed", (p) => p.runs.completed));
+console.log(row("runs /s", (p) => p.runs.perSecond));
+console.log(row("runs p50 / p95 ms", (p) => `${p.runs.p50Ms} / ${p.runs.p95Ms}`));
+console.log(row("runs errors", (p) => p.runs.errors));
+console.log(
+  row("served by", (p) =>
+    Object.entries(p.servedBy)
+      .map(([k, n]) => `${k}:${n}`)
+      .join(" "),
+  ),
+);
+console.log(
+  `  two instances completed ${ratio}× the analysis runs of one (goal ≥ 1.6: ${figures.goal.met ? "met" : "NOT met"}); zero errors: ${figures.goal.zeroErrors ? "met" : "NOT met"}`,
+);
+for (const e of [...one.errorSamples, ...two.errorSamples]) console.log(`  error sample: ${e}`);
+console.log(`Wrote ${path.relative(repoRoot, path.join(outDir, "instances.json"))}`);
