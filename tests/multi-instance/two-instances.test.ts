@@ -161,6 +161,7 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
   }, 600_000);
 
   it("a session made through the proxy is valid on either instance", async () => {
+    expect(workers).toHaveLength(PEOPLE);
     for (const w of workers) {
       for (const inst of [a, b]) {
         const me = await w.client.json<{ user: { email: string } }>(
@@ -196,6 +197,7 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
   }, 120_000);
 
   it("no dataset version is duplicated, and each study has versions 1 and 2", () => {
+    expect(workers).toHaveLength(PEOPLE);
     expect(
       pg.query(
         `SELECT study_id, version, count(*) FROM datasets GROUP BY study_id, version HAVING count(*) > 1`,
@@ -210,6 +212,7 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
   });
 
   it("the audit trail has one event per action", () => {
+    expect(workers).toHaveLength(PEOPLE);
     const ids = workers.map((w) => w.studyId).join(",");
     const rows = pg.query(
       `SELECT study_id, action, count(*) FROM audit_events WHERE study_id IN (${ids}) GROUP BY study_id, action ORDER BY 1, 2`,
