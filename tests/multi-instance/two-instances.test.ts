@@ -25,8 +25,16 @@ const PEOPLE = 50;
 const ACCOUNT_LIMIT = 10;
 /** A passphrase zxcvbn scores 4, so the password policy accepts it. */
 const PASSWORD = "cairn-lichen-spruce-4417-tarn";
-/** Rows of the dataset whose analysis is cut off by the kill: enough that the run takes a while. */
-const HEAVY_ROWS = 600_000;
+/**
+ * Runs sent to the instance that is killed, on values enough that each takes about two seconds of
+ * its one worker thread: the later ones are still waiting when the kill comes.
+ */
+const HEAVY_RUNS = 4;
+const HEAVY_PER_GROUP = 1000;
+/** Messages queued just before the kill, so it falls while the dispatchers deliver. */
+const LATE_INVITATIONS = 100;
+/** The Message-ID an outbox row is sent with (modules/mail), as SQL over `mail_outbox o`. */
+const OUTBOX_MESSAGE_ID = "o.message_id";
 
 let pg: Postgres;
 let a: Instance;
@@ -38,6 +46,10 @@ const instanceEnv = {
   SIGNIN_LIMIT_PER_ACCOUNT: String(ACCOUNT_LIMIT),
   SIGNIN_LIMIT_PER_IP: "1000",
   UPLOAD_LIMIT_MB: "50",
+  TASK_WORKER_THREADS: "1",
+  ANALYSIS_RUN_LEASE_SECONDS: "6",
+  ANALYSIS_RUN_RENEW_SECONDS: "2",
+  ANALYSIS_RUN_SWEEP_SECONDS: "1",
 };
 
 const people = Array.from({ length: PEOPLE }, (_, i) => ({
@@ -242,24 +254,32 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
     expect(pg.count(`SELECT count(*) FROM audit_events WHERE action = 'invitation.sent'`)).toBe(PEOPLE);
   });
 
-  it("after one instance is SIGKILLed mid-dispatch, every outbox message is sent exactly once and its analysis finishes on the other", async () => {
+  it("after one instance is SIGKILLed mid-dispatch, every outbox message is sent exactly once and its analyses finish on the other", async () => {
     const analyst = new Client(b.url);
     expect((await analyst.signIn("analyst@waymark.test", DEMO_PASSWORD)).status).toBe(200);
-    const heavyStudy = await lockedStudy(analyst, "Yield of three lines, large upload");
-    const heavy = await uploadDataset(analyst, heavyStudy, yieldCsv(9001, HEAVY_ROWS / 3), b.url);
+    const heavyStudy = await lockedStudy(analyst, "Yield of three lines, runs cut off by a kill");
+    const heavy = await uploadDataset(analyst, heavyStudy, yieldCsv(9001, HEAVY_PER_GROUP), b.url);
+    const runsOf = (where = "") =>
+      pg.count(`SELECT count(*) FROM analysis_runs WHERE dataset_id = ${heavy.id} ${where}`);
+    const killedTag = `:${a.child.pid}:`;
 
-    // Fill the outbox, then start the heavy run on the instance about to be killed.
+    // Runs sent to api1 are claimed by api1 as they arrive and wait for its one worker thread in turn.
+    const pendingRuns = Array.from({ length: HEAVY_RUNS }, () =>
+      runAnalysis(analyst, heavyStudy, heavy.id, a.url).catch((e: Error) => e),
+    );
+    await waitFor("api1 to claim the runs sent to it", () =>
+      runsOf(`AND status = 'running' AND claimed_by LIKE '%${killedTag}%'`) === HEAVY_RUNS ? true : undefined,
+    );
+
+    // Fill the outbox, then kill api1 while the dispatchers are delivering.
     const admin = new Client(b.url);
     expect((await admin.signIn("admin@waymark.test", DEMO_PASSWORD)).status).toBe(200);
     const before = pg.count(`SELECT count(*) FROM dev_mailbox`);
     await Promise.all(
-      Array.from({ length: 60 }, (_, i) =>
+      Array.from({ length: LATE_INVITATIONS }, (_, i) =>
         admin.json("POST", "/api/invitations", { email: `late-${i}@multi.test`, role: "writer" }, 201),
       ),
     );
-    const pendingRun = runAnalysis(analyst, heavyStudy, heavy.id, a.url).catch((e: Error) => e);
-
-    // Kill as soon as mail is being delivered while some is still waiting.
     await waitFor(
       "the dispatchers to start on the new messages",
       () => {
@@ -270,8 +290,16 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
       120_000,
     );
     expect(await a.kill("SIGKILL")).toBe("SIGKILL");
-    const runOutcome = await pendingRun;
-    const cutOff = runOutcome instanceof Error || runOutcome.reply.status >= 500;
+    const unfinishedAtKill = runsOf(`AND status <> 'done'`);
+    const claimsAtKill = pg.count(
+      `SELECT count(*) FROM mail_outbox WHERE claimed_by IS NOT NULL AND status <> 'sent'`,
+    );
+    await Promise.all(pendingRuns);
+    console.log(
+      `killed api1 with ${unfinishedAtKill} of ${HEAVY_RUNS} runs unfinished and ${claimsAtKill} outbox messages claimed but not sent`,
+    );
+    // Without an unfinished run the kill proved nothing about runs: make them heavier, not the check weaker.
+    expect(unfinishedAtKill, "runs api1 had not finished when it was killed").toBeGreaterThan(0);
 
     // The proxy's health check takes api1 out; requests keep working through api2.
     await waitFor("the proxy to serve from api2 alone", async () =>
@@ -283,45 +311,52 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
       () => (pg.count(`SELECT count(*) FROM mail_outbox WHERE status <> 'sent'`) === 0 ? true : undefined),
       240_000,
     ).catch((e: Error) => {
-      throw new Error(
-        `${e.message}\n${pg.query(`SELECT id, status, attempts, last_error FROM mail_outbox WHERE status <> 'sent'`).join("\n")}\n${logs()}`,
+      const left = pg.query(
+        `SELECT id, status, attempts, claimed_by, last_error FROM mail_outbox WHERE status <> 'sent'`,
       );
+      throw new Error(`${e.message}\n${left.join("\n")}\n${logs()}`);
     });
     const outbox = pg.count(`SELECT count(*) FROM mail_outbox`);
+    const receipts = pg.count(`SELECT count(*) FROM dev_mailbox`);
     const distinct = pg.count(`SELECT count(DISTINCT message_id) FROM dev_mailbox`);
     const missing = pg.query(
-      `SELECT o.id FROM mail_outbox o WHERE NOT EXISTS (SELECT 1 FROM dev_mailbox d WHERE d.message_id = o.message_id)`,
+      `SELECT o.id FROM mail_outbox o WHERE NOT EXISTS (SELECT 1 FROM dev_mailbox d WHERE d.message_id = ${OUTBOX_MESSAGE_ID})`,
     );
-    const receipts = pg.count(`SELECT count(*) FROM dev_mailbox`);
     console.log(
-      `outbox ${outbox} messages; mailbox ${receipts} receipts with ${distinct} distinct Message-IDs; heavy run ${cutOff ? "cut off by the kill" : "answered before the kill"}`,
+      `outbox ${outbox} messages; mailbox ${receipts} receipts with ${distinct} distinct Message-IDs`,
     );
     expect(missing.flat(), "outbox messages never received").toEqual([]);
+    expect(pg.count(`SELECT count(*) FROM dev_mailbox WHERE message_id IS NULL`)).toBe(0);
     expect(distinct).toBe(outbox);
 
-    // The run the killed instance held is taken up by api2 and stored whole.
-    const analysisOnB = await waitFor(
-      "the heavy analysis to be stored",
-      async () => {
-        const { analyses } = await analyst.json<{ analyses: { id: number; datasetId: number }[] }>(
-          "GET",
-          `/api/studies/${heavyStudy}/analyses`,
-          undefined,
-          200,
-          b.url,
-        );
-        return analyses.find((x) => x.datasetId === heavy.id);
-      },
+    // Every run api1 held is taken up by api2 and stored whole: one analysis and one audit event each.
+    await waitFor(
+      "every run to be done",
+      () => (runsOf(`AND status = 'done'`) === HEAVY_RUNS ? true : undefined),
       240_000,
     ).catch((e: Error) => {
-      throw new Error(`${e.message}\n${logs()}`);
+      const runs = pg.query(
+        `SELECT id, status, claimed_by, attempts, error_message FROM analysis_runs WHERE dataset_id = ${heavy.id}`,
+      );
+      throw new Error(`${e.message}\n${runs.join("\n")}\n${logs()}`);
     });
-    expect(analysisOnB.datasetId).toBe(heavy.id);
-    expect(pg.count(`SELECT count(*) FROM analyses WHERE dataset_id = ${heavy.id}`)).toBe(1);
+    expect(runsOf(`AND claimed_by LIKE '%${killedTag}%'`), "runs left finished by api1").toBe(
+      HEAVY_RUNS - unfinishedAtKill,
+    );
+    expect(runsOf(`AND analysis_id IS NOT NULL`)).toBe(HEAVY_RUNS);
+    expect(pg.count(`SELECT count(*) FROM analyses WHERE dataset_id = ${heavy.id}`)).toBe(HEAVY_RUNS);
     expect(
       pg.count(
         `SELECT count(*) FROM audit_events WHERE study_id = ${heavyStudy} AND action = 'analysis.run'`,
       ),
-    ).toBe(1);
+    ).toBe(HEAVY_RUNS);
+    const { analyses } = await analyst.json<{ analyses: { datasetId: number }[] }>(
+      "GET",
+      `/api/studies/${heavyStudy}/analyses`,
+      undefined,
+      200,
+      proxy.url,
+    );
+    expect(analyses.filter((x) => x.datasetId === heavy.id)).toHaveLength(HEAVY_RUNS);
   }, 900_000);
 });
