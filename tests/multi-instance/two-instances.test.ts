@@ -33,8 +33,11 @@ const HEAVY_RUNS = 4;
 const HEAVY_PER_GROUP = 1000;
 /** Messages queued just before the kill, so it falls while the dispatchers deliver. */
 const LATE_INVITATIONS = 100;
-/** The Message-ID an outbox row is sent with (modules/mail), as SQL over `mail_outbox o`. */
-const OUTBOX_MESSAGE_ID = "o.message_id";
+/**
+ * Matches the Message-ID an outbox row `o` is sent with, `<outbox-{id}.{created, base 36}@domain>`
+ * (outboxMessageId in modules/mail/mail-dispatcher.ts), against a mailbox row `d`.
+ */
+const SAME_MESSAGE = `d.message_id LIKE '<outbox-' || o.id || '.%'`;
 
 let pg: Postgres;
 let a: Instance;
@@ -50,6 +53,7 @@ const instanceEnv = {
   ANALYSIS_RUN_LEASE_SECONDS: "6",
   ANALYSIS_RUN_RENEW_SECONDS: "2",
   ANALYSIS_RUN_SWEEP_SECONDS: "1",
+  MAIL_LEASE_SECONDS: "6",
 };
 
 const people = Array.from({ length: PEOPLE }, (_, i) => ({
@@ -320,7 +324,7 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
     const receipts = pg.count(`SELECT count(*) FROM dev_mailbox`);
     const distinct = pg.count(`SELECT count(DISTINCT message_id) FROM dev_mailbox`);
     const missing = pg.query(
-      `SELECT o.id FROM mail_outbox o WHERE NOT EXISTS (SELECT 1 FROM dev_mailbox d WHERE d.message_id = ${OUTBOX_MESSAGE_ID})`,
+      `SELECT o.id FROM mail_outbox o WHERE NOT EXISTS (SELECT 1 FROM dev_mailbox d WHERE ${SAME_MESSAGE})`,
     );
     console.log(
       `outbox ${outbox} messages; mailbox ${receipts} receipts with ${distinct} distinct Message-IDs`,
