@@ -28,6 +28,8 @@ export async function makeTestApp(opts: { demo?: boolean; uploadLimitMb?: number
   open.push({
     stop: async () => {
       await services.stop();
+      // A send already under way finishes before its database goes (kick() joins a run in flight).
+      await services.mail.kick().catch(() => undefined);
       await closeTestDatabase(ds);
     },
   });
