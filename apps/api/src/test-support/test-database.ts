@@ -46,7 +46,7 @@ export async function openTestDatabase(): Promise<{ ds: DataSource; url: string 
   if (ENTITY_DRIVER !== "postgres") return { ds: await openDatabase(":memory:"), url: null };
   const adminUrl = inject("pgAdminUrl");
   const name = `waymark_test_${randomBytes(6).toString("hex")}`;
-  await adminQuery(adminUrl, `CREATE DATABASE "${name}" TEMPLATE "${PG_TEMPLATE}"`);
+  await adminQuery(adminUrl, `CREATE DATABASE "${name}" TEMPLATE "${PG_TEMPLATE}" STRATEGY FILE_COPY`);
   const url = withDatabase(adminUrl, name);
   // A small pool: many test apps share one cluster, and tests make few concurrent requests.
   const ds = await openDatabase({ driver: "postgres", url, poolSize: 4, statementTimeoutMs: 60_000 });
