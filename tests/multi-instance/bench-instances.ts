@@ -214,10 +214,11 @@ console.log(row("runs /s", (p) => p.runs.perSecond));
 console.log(row("runs p50 / p95 ms", (p) => `${p.runs.p50Ms} / ${p.runs.p95Ms}`));
 console.log(row("runs errors", (p) => p.runs.errors));
 console.log(
-  row("served by", (p) =>
+  row("requests per instance", (p) =>
     Object.entries(p.servedBy)
-      .map(([k, n]) => `${k}:${n}`)
-      .join(" "),
+      .sort()
+      .map(([, n]) => n)
+      .join(" + "),
   ),
 );
 console.log(
