@@ -30,6 +30,7 @@ const activeWithRole = (tx: EntityManager, roles: string[]) =>
     .getRepository(User)
     .createQueryBuilder("u")
     .where("u.role IN (:...roles) AND u.active = :active", { roles, active: true })
+    .orderBy("u.id")
     .getMany();
 
 /** The study's status once this transaction's writes are in, for the e-mails it sends. */
