@@ -1,8 +1,16 @@
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
 import { describe, expect, it } from "vitest";
+import { createApp } from "../app.js";
+import { startServices } from "../bootstrap.js";
+import { loadEnv } from "../config/env.js";
+import { openDatabase } from "../db/data-source.js";
+import { seedDemoUsers } from "../db/seeds/demo-users.js";
 import { anon } from "../test-support/agents.js";
 import { makeTestApp } from "../test-support/test-app.js";
 
-describe("sign-in throttling (express-rate-limit)", () => {
+describe("sign-in throttling (express-rate-limit, counters in the database)", () => {
   it("refuses an account after 10 failed sign-ins in 15 minutes, says when to retry, and audits every attempt", async () => {
     const t = await makeTestApp();
     const client = await anon(t.app);
@@ -28,5 +36,51 @@ describe("sign-in throttling (express-rate-limit)", () => {
     );
     expect(Number(failed[0].n)).toBe(10);
     await t.services.stop();
+  });
+});
+
+describe("sign-in throttling across API instances", () => {
+  it("counts failed sign-ins on two apps sharing one database file together", async () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-two-apps-"));
+    const dbPath = path.join(dir, "shared.sqlite");
+    const env = loadEnv({ NODE_ENV: "test", DATABASE_PATH: dbPath, BCRYPT_COST: "4", WAYMARK_DEMO: "1" });
+    const sources = [await openDatabase(dbPath), await openDatabase(dbPath)];
+    await seedDemoUsers(sources[0]!, env.demoPassword, env.BCRYPT_COST);
+    const instances = await Promise.all(
+      sources.map(async (ds) => {
+        const services = await startServices(ds, env);
+        return { ds, services, client: await anon(createApp(ds, env, services).app) };
+      }),
+    );
+    try {
+      // Ten failures, alternating between the instances: each saw only five.
+      for (let i = 0; i < 10; i++)
+        await instances[i % 2]!.client.post("/api/auth/login")
+          .send({ email: "analyst@waymark.test", password: `wrong-${i}` })
+          .expect(401);
+      for (const { client } of instances)
+        await client
+          .post("/api/auth/login")
+          .send({ email: "analyst@waymark.test", password: env.demoPassword })
+          .expect(429);
+      // A success on either instance takes its own hit back (skipSuccessfulRequests) and counts nothing.
+      await instances[0]!.client
+        .post("/api/auth/login")
+        .send({ email: "writer@waymark.test", password: env.demoPassword })
+        .expect(200);
+      const rows = (await sources[1]!.query(
+        `SELECT "key", "hits" FROM "sign_in_throttle" WHERE "key" LIKE 'account:%' ORDER BY "key"`,
+      )) as { key: string; hits: number }[];
+      expect(rows).toEqual([
+        { key: "account:analyst@waymark.test", hits: 12 },
+        { key: "account:writer@waymark.test", hits: 0 },
+      ]);
+    } finally {
+      for (const { ds, services } of instances) {
+        await services.stop();
+        await ds.destroy();
+      }
+      fs.rmSync(dir, { recursive: true, force: true });
+    }
   });
 });

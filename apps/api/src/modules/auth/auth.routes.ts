@@ -24,7 +24,7 @@ export function authRoutes(
   env: Env,
   sessions: TypeormSessionStore,
 ): RouteSpec[] {
-  const throttle = signInThrottle({
+  const throttle = signInThrottle(ds, {
     perAccount: env.SIGNIN_LIMIT_PER_ACCOUNT,
     perIp: env.SIGNIN_LIMIT_PER_IP,
   });
