@@ -117,6 +117,13 @@ export async function acceptInvitation(
     const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
     if (stateOf(fresh) !== "open")
       throw new HttpError(410, "invitation_used", "This invitation has already been used.");
+    // Marking it used only if still unused makes the check hold across instances too: on
+    // PostgreSQL a second instance's update waits for this row and then finds it used.
+    const marked = await tx
+      .getRepository(Invitation)
+      .update({ id: inv.id, usedAt: IsNull(), revokedAt: IsNull() }, { usedAt: new Date() });
+    if (marked.affected !== 1)
+      throw new HttpError(410, "invitation_used", "This invitation has already been used.");
     const saved = await tx.getRepository(User).save(
       tx.getRepository(User).create({
         email: inv.email,
@@ -126,7 +133,6 @@ export async function acceptInvitation(
         active: true,
       }),
     );
-    await tx.getRepository(Invitation).update({ id: inv.id }, { usedAt: new Date() });
     const user = toPublicUser(saved);
     await recordAudit(
       tx,
