@@ -14,7 +14,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 async function main(): Promise<void> {
   const env = loadEnv();
-  const ds = await openDatabase(env.DATABASE_PATH);
+  const ds = await openDatabase(env.database);
   if (env.WAYMARK_DEMO) {
     await seedDemoUsers(ds, env.demoPassword, env.BCRYPT_COST);
     await seedDemoStudies(ds, env.demoPassword);
@@ -37,7 +37,7 @@ async function main(): Promise<void> {
   });
   server.listen(env.PORT, () => {
     const mode = env.WAYMARK_DEMO ? "demo mode" : env.NODE_ENV;
-    console.log(`Waymark listening on http://localhost:${env.PORT} (${mode}, database ${env.DATABASE_PATH})`);
+    console.log(`Waymark listening on http://localhost:${env.PORT} (${mode}, database ${env.databaseLabel})`);
     if (env.WAYMARK_DEMO)
       console.log(`Demo accounts: analyst|reviewer|writer|admin@waymark.test, password ${env.demoPassword}`);
   });

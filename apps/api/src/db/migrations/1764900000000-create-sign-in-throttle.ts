@@ -1,5 +1,8 @@
 import { Table, TableIndex, type MigrationInterface, type QueryRunner } from "typeorm";
-import { DATETIME } from "../column-types.js";
+import { isPostgres } from "../driver.js";
+
+/** The driver's datetime type (the entities' `DATETIME`), asked of the connection being migrated. */
+const datetime = (q: QueryRunner) => (isPostgres(q.connection) ? "timestamp with time zone" : "datetime");
 
 /**
  * Failed sign-in counters, shared by every API instance on the database: one row per counted key
@@ -16,7 +19,7 @@ export class CreateSignInThrottle1764900000000 implements MigrationInterface {
         columns: [
           { name: "key", type: "varchar", length: "300", isPrimary: true },
           { name: "hits", type: "integer", isNullable: false },
-          { name: "reset_at", type: DATETIME, isNullable: false },
+          { name: "reset_at", type: datetime(q), isNullable: false },
         ],
       }),
     );

@@ -1,5 +1,8 @@
 import { TableColumn, TableIndex, type MigrationInterface, type QueryRunner } from "typeorm";
-import { DATETIME } from "../column-types.js";
+import { isPostgres } from "../driver.js";
+
+/** The driver's datetime type (the entities' `DATETIME`), asked of the connection being migrated. */
+const datetime = (q: QueryRunner) => (isPostgres(q.connection) ? "timestamp with time zone" : "datetime");
 
 /**
  * Outbox messages are claimed by one API instance at a time: `claimed_by` names the instance and
@@ -12,7 +15,7 @@ export class MailOutboxClaims1764900000001 implements MigrationInterface {
   async up(q: QueryRunner): Promise<void> {
     await q.addColumns("mail_outbox", [
       new TableColumn({ name: "claimed_by", type: "varchar", length: "100", isNullable: true }),
-      new TableColumn({ name: "lease_until", type: DATETIME, isNullable: true }),
+      new TableColumn({ name: "lease_until", type: datetime(q), isNullable: true }),
     ]);
     await q.createIndex(
       "mail_outbox",

@@ -10,6 +10,7 @@ import { invitationMessage } from "../mail/messages.js";
 import { enqueueMail } from "../mail/outbox.js";
 import { toPublicUser, User, type PublicUser } from "../users/user.entity.js";
 import { Invitation } from "./invitation.entity.js";
+import { lockRowForWrite } from "../../db/row-lock.js";
 import { inTransaction } from "../../db/in-transaction.js";
 
 export const INVITATION_HOURS = 72;
@@ -114,15 +115,9 @@ export async function acceptInvitation(
   const passwordHash = await hashPassword(input.password, cost);
   return inTransaction(ds, async (tx) => {
     // Re-check inside the transaction so two tabs cannot both use one token.
+    await lockRowForWrite(tx, "invitations", inv.id);
     const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
     if (stateOf(fresh) !== "open")
-      throw new HttpError(410, "invitation_used", "This invitation has already been used.");
-    // Marking it used only if still unused makes the check hold across instances too: on
-    // PostgreSQL a second instance's update waits for this row and then finds it used.
-    const marked = await tx
-      .getRepository(Invitation)
-      .update({ id: inv.id, usedAt: IsNull(), revokedAt: IsNull() }, { usedAt: new Date() });
-    if (marked.affected !== 1)
       throw new HttpError(410, "invitation_used", "This invitation has already been used.");
     const saved = await tx.getRepository(User).save(
       tx.getRepository(User).create({
@@ -133,6 +128,7 @@ export async function acceptInvitation(
         active: true,
       }),
     );
+    await tx.getRepository(Invitation).update({ id: inv.id }, { usedAt: new Date() });
     const user = toPublicUser(saved);
     await recordAudit(
       tx,
