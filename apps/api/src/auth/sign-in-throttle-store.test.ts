@@ -1,13 +1,11 @@
 import { execFile } from "node:child_process";
-import fs from "node:fs";
-import os from "node:os";
 import path from "node:path";
 import { promisify } from "node:util";
 import { fileURLToPath } from "node:url";
 import type { Options } from "express-rate-limit";
 import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { openDatabase } from "../db/data-source.js";
+import { openSharedDatabase } from "../test-support/shared-database.js";
 import { DatabaseRateLimitStore, pruneSignInThrottle } from "./sign-in-throttle-store.js";
 
 const apiRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..");
@@ -18,19 +16,14 @@ const storeWith = (ds: DataSource, prefix: string, windowMs: number) => {
 };
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-let dir: string;
-let dbPath: string;
+let shared: Awaited<ReturnType<typeof openSharedDatabase>>;
 let ds: DataSource;
 
 beforeAll(async () => {
-  dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-throttle-"));
-  dbPath = path.join(dir, "throttle.sqlite");
-  ds = await openDatabase(dbPath);
+  shared = await openSharedDatabase();
+  ds = await shared.connect();
 });
-afterAll(async () => {
-  await ds.destroy();
-  fs.rmSync(dir, { recursive: true, force: true });
-});
+afterAll(() => shared.close());
 
 describe("the database-backed rate-limit store", () => {
   it("counts hits within a window, and starts a new window once the stored one has ended", async () => {
@@ -97,7 +90,14 @@ describe("the database-backed rate-limit store", () => {
       [1, 2, 3].map(() =>
         run(
           process.execPath,
-          ["--import", "tsx", "src/auth/test-fixtures/count-failures.ts", dbPath, "shared", String(each)],
+          [
+            "--import",
+            "tsx",
+            "src/auth/test-fixtures/count-failures.ts",
+            shared.target,
+            "shared",
+            String(each),
+          ],
           { cwd: apiRoot },
         ),
       ),

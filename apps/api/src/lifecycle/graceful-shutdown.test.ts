@@ -1,11 +1,9 @@
-import fs from "node:fs";
 import http from "node:http";
 import net from "node:net";
-import os from "node:os";
-import path from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD } from "../config/env.js";
 import { startApi, type ApiProcess } from "../test-support/api-process.js";
+import { openSharedDatabase } from "../test-support/shared-database.js";
 
 /**
  * SIGTERM to a real server process: readiness turns 503 at once while liveness stays 200; after
@@ -13,12 +11,12 @@ import { startApi, type ApiProcess } from "../test-support/api-process.js";
  * the process exits 0.
  */
 const TIMEOUT = 120_000;
-let dir: string | undefined;
 let api: ApiProcess | undefined;
+let shared: Awaited<ReturnType<typeof openSharedDatabase>> | undefined;
 
 afterAll(async () => {
   await api?.kill();
-  if (dir) fs.rmSync(dir, { recursive: true, force: true });
+  await shared?.close();
 });
 
 /** One request on a connection of its own; resolves with the status and body. */
@@ -47,8 +45,9 @@ describe("graceful shutdown of a real server process", () => {
   it(
     "on SIGTERM: readiness 503, new connections refused after the delay, the request in flight completes, exit 0",
     async () => {
-      dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-shutdown-"));
-      api = await startApi(path.join(dir, "shutdown.sqlite"), 60_000, {
+      // A SQLite file or a PostgreSQL database, as the suite runs.
+      shared = await openSharedDatabase();
+      api = await startApi(shared.target, 60_000, {
         SHUTDOWN_DELAY_SECONDS: "1",
         SHUTDOWN_GRACE_SECONDS: "20",
       });

@@ -19,7 +19,7 @@ describe("readiness and liveness", () => {
       await request(t.app).get("/api/health").expect(200);
       resetShutdownForTests();
 
-      await t.services.stop();
+      // The test app is closed after the file (close-apps.ts), which copes with a closed database.
       await t.ds.destroy();
       const noDb = await request(t.app).get("/api/ready").expect(503);
       expect(noDb.body.error).toEqual({
@@ -29,10 +29,6 @@ describe("readiness and liveness", () => {
       await request(t.app).get("/api/health").expect(200);
     } finally {
       resetShutdownForTests();
-      if (t.ds.isInitialized) {
-        await t.services.stop();
-        await t.ds.destroy();
-      }
     }
   });
 });

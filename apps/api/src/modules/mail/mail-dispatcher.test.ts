@@ -1,10 +1,7 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import { SMTPServer } from "smtp-server";
 import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { openDatabase } from "../../db/data-source.js";
+import { openSharedDatabase } from "../../test-support/shared-database.js";
 import { startFakeSmtpServer } from "./fake-smtp-server.js";
 import { MailDispatcher, outboxMessageId } from "./mail-dispatcher.js";
 import { enqueueMail } from "./outbox.js";
@@ -13,24 +10,21 @@ import { ReceivedMessage } from "./received-message.entity.js";
 
 const FROM = "Waymark <no-reply@waymark.test>";
 
-let dir: string;
-/** Two connections to one database file: two API instances, as far as the outbox can tell. */
+let shared: Awaited<ReturnType<typeof openSharedDatabase>>;
+/** Two connections to one database: two API instances, as far as the outbox can tell. */
 let a: DataSource;
 let b: DataSource;
 let smtp: Awaited<ReturnType<typeof startFakeSmtpServer>>;
 
 beforeAll(async () => {
-  dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-outbox-"));
-  const file = path.join(dir, "outbox.sqlite");
-  a = await openDatabase(file);
-  b = await openDatabase(file);
+  shared = await openSharedDatabase();
+  a = await shared.connect();
+  b = await shared.connect();
   smtp = await startFakeSmtpServer(a);
 });
 afterAll(async () => {
   await smtp.close();
-  await a.destroy();
-  await b.destroy();
-  fs.rmSync(dir, { recursive: true, force: true });
+  await shared.close();
 });
 beforeEach(async () => {
   await a.getRepository(OutboxMessage).clear();

@@ -100,6 +100,7 @@ export class MailDispatcher {
   }
 
   async releaseClaims(): Promise<number> {
+    if (!this.ds.isInitialized) return 0;
     const { affected } = await runSql(
       this.ds,
       `UPDATE "mail_outbox" SET "claimed_by" = NULL, "lease_until" = NULL
