@@ -54,6 +54,7 @@ const instanceEnv = {
   ANALYSIS_RUN_RENEW_SECONDS: "2",
   ANALYSIS_RUN_SWEEP_SECONDS: "1",
   MAIL_LEASE_SECONDS: "6",
+  DATABASE_POOL_SIZE: "20",
 };
 
 const people = Array.from({ length: PEOPLE }, (_, i) => ({
