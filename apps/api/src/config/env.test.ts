@@ -58,3 +58,20 @@ describe("DATABASE_URL chooses PostgreSQL (loadEnv)", () => {
     expect(() => loadEnv({ NODE_ENV: "test", DATABASE_POOL_SIZE: "0" })).toThrow(/DATABASE_POOL_SIZE/);
   });
 });
+
+describe("settings for several instances and shutdown (loadEnv)", () => {
+  it("defaults the mail lease and the shutdown bounds, and refuses values outside their range by name", () => {
+    const env = loadEnv({ NODE_ENV: "test" });
+    expect([env.MAIL_LEASE_SECONDS, env.SHUTDOWN_DELAY_SECONDS, env.SHUTDOWN_GRACE_SECONDS]).toEqual([
+      300, 0, 25,
+    ]);
+    // A lease shorter than a send would let a second instance send the same message meanwhile.
+    expect(() => loadEnv({ NODE_ENV: "test", MAIL_LEASE_SECONDS: "1" })).toThrow(/MAIL_LEASE_SECONDS/);
+    expect(() => loadEnv({ NODE_ENV: "test", SHUTDOWN_GRACE_SECONDS: "-1" })).toThrow(
+      /SHUTDOWN_GRACE_SECONDS/,
+    );
+    expect(() => loadEnv({ NODE_ENV: "test", SHUTDOWN_DELAY_SECONDS: "soon" })).toThrow(
+      /SHUTDOWN_DELAY_SECONDS/,
+    );
+  });
+});

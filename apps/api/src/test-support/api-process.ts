@@ -44,7 +44,11 @@ export interface ApiProcess {
  * database file or PostgreSQL URL, and resolves once /api/health answers. The environment is given in full rather
  * than inherited, so the developer's own settings cannot leak in.
  */
-export async function startApi(databasePath: string, timeoutMs = 60_000): Promise<ApiProcess> {
+export async function startApi(
+  databasePath: string,
+  timeoutMs = 60_000,
+  extraEnv: Record<string, string> = {},
+): Promise<ApiProcess> {
   const port = await freePort();
   const child = spawn(process.execPath, ["--import", "tsx", "src/server.ts"], {
     cwd: apiRoot,
@@ -56,6 +60,7 @@ export async function startApi(databasePath: string, timeoutMs = 60_000): Promis
         : { DATABASE_PATH: databasePath }),
       WAYMARK_DEMO: "1",
       BCRYPT_COST: "4",
+      ...extraEnv,
     },
     stdio: ["ignore", "pipe", "pipe"],
   });

@@ -173,9 +173,9 @@ export async function approve(
     .where("u.id = :id", { id: actor.user.id })
     .getOneOrFail();
   // Checked before the transaction: bcrypt is slow and must not hold the write lock.
-  reauth.check(ds, actor, "an approval signature");
+  await reauth.check(ds, actor, "an approval signature");
   const passwordOk = await verifyPassword(input.password, hashRow.passwordHash);
-  if (passwordOk) reauth.succeeded(ds, actor);
+  if (passwordOk) await reauth.succeeded(ds, actor);
   else await reauth.failed(ds, actor, "an approval signature", studyId);
   await inTransaction(ds, async (tx) => {
     const { study, round, analysis } = await loadForDecision(tx, actor, studyId);
