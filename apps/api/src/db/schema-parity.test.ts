@@ -91,11 +91,13 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
       "idx_audit_events_study_id",
       "idx_datasets_study_version",
       "idx_invitations_email",
+      "idx_mail_outbox_due",
       "idx_mail_outbox_status",
       "idx_review_replies_comment",
       "idx_review_rounds_study_round",
       "idx_sessions_expires_at",
       "idx_sessions_user_id",
+      "idx_sign_in_throttle_reset_at",
       "idx_studies_owner",
     ]);
     // PostgreSQL adds statement triggers refusing TRUNCATE (SQLite has no TRUNCATE); left out here.
