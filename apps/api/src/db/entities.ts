@@ -1,3 +1,4 @@
+import { SignInThrottleCounter } from "../auth/sign-in-throttle-counter.entity.js";
 import { Analysis } from "../modules/analyses/analysis.entity.js";
 import { AuditEvent } from "../modules/audit/audit-event.entity.js";
 import { Dataset } from "../modules/datasets/dataset.entity.js";
@@ -28,5 +29,6 @@ export const entities = [
   OutboxMessage,
   ReceivedMessage,
   Invitation,
+  SignInThrottleCounter,
   OrganizationSettings,
 ];
