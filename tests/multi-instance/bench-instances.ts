@@ -12,7 +12,7 @@
 // How the cores are shared (see CPU_PLAN below): with 2 cores, each instance is pinned to a core
 // of its own (taskset), while PostgreSQL, HAProxy and this load generator float over both; with
 // one instance, it has core 0 and the rest float the same way.
-import { mkdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { Client } from "./client.js";
@@ -34,6 +34,32 @@ const STUDIES = 5;
 const cores = os.availableParallelism();
 /** Which CPUs each instance is pinned to; undefined leaves the scheduler free (one core, or taskset missing). */
 const pin = (i: number) => (cores >= 2 ? String(i % cores) : undefined);
+
+/** CPU seconds a process has used so far (user + system, from /proc), or null where /proc is missing. */
+function cpuSeconds(pid: number | undefined): number | null {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
+    // utime and stime are fields 14 and 15 of the whole line, 12 and 13 after "pid (comm) ".
+    return (Number(fields[11]) + Number(fields[12])) / 100;
+  } catch {
+    return null;
+  }
+}
+
+/** Busy and total CPU time of the whole machine so far (all cores, from /proc/stat), in seconds. */
+function machineCpu(): { busy: number; total: number } | null {
+  try {
+    const [, ...v] = readFileSync("/proc/stat", "utf8").split("\n")[0]!.trim().split(/\s+/);
+    const n = v.map(Number);
+    const idle = n[3]! + (n[4] ?? 0);
+    const total = n.slice(0, 8).reduce((x, y) => x + y, 0);
+    return { busy: (total - idle) / 100, total: total / 100 };
+  } catch {
+    return null;
+  }
+}
+
+const diff = (a: number | null, b: number | null) => (a === null || b === null ? null : round(b - a, 1));
 
 interface Sample {
   kind: "read" | "run";
@@ -107,6 +133,7 @@ async function phase(instances: 1 | 2) {
       const c = new Client(proxy.url, { keepAlive: true });
       const r = await c.signIn("analyst@waymark.test", DEMO_PASSWORD);
       if (r.status !== 200) throw new Error(`sign-in ${i}: ${r.status} ${r.text}`);
+      c.discardBodies = true;
       clients.push(c);
     }
 
@@ -114,6 +141,12 @@ async function phase(instances: 1 | 2) {
     const errorBodies = new Set<string>();
     const stopAt = performance.now() + DURATION_S * 1000;
     const t0 = performance.now();
+    const cpu0 = {
+      machine: machineCpu(),
+      loadGenerator: process.cpuUsage(),
+      instances: started.map((i) => cpuSeconds(i.child.pid)),
+      proxy: cpuSeconds(proxy.child.pid),
+    };
     const record = async (kind: Sample["kind"], send: () => ReturnType<Client["request"]>) => {
       const start = performance.now();
       try {
@@ -143,6 +176,16 @@ async function phase(instances: 1 | 2) {
     );
     // Requests still in flight at the end are counted when they finish, over the whole span.
     const seconds = (performance.now() - t0) / 1000;
+    const m1 = machineCpu();
+    const lg = process.cpuUsage(cpu0.loadGenerator);
+    const cpu = {
+      wallS: round(seconds, 1),
+      machineBusyS: cpu0.machine && m1 ? round(m1.busy - cpu0.machine.busy, 1) : null,
+      machineTotalS: cpu0.machine && m1 ? round(m1.total - cpu0.machine.total, 1) : null,
+      loadGeneratorS: round((lg.user + lg.system) / 1e6, 1),
+      instancesS: started.map((i, k) => diff(cpu0.instances[k] ?? null, cpuSeconds(i.child.pid))),
+      proxyS: diff(cpu0.proxy, cpuSeconds(proxy.child.pid)),
+    };
     const served: Record<string, number> = {};
     for (const c of clients) for (const [k, n] of c.servedBy) served[k] = (served[k] ?? 0) + n;
     return {
@@ -157,6 +200,7 @@ async function phase(instances: 1 | 2) {
         seconds,
       ),
       servedBy: served,
+      cpu,
       errorSamples: [...errorBodies],
     };
   } finally {
@@ -224,5 +268,10 @@ console.log(
 console.log(
   `  two instances completed ${ratio}× the analysis runs of one (goal ≥ 1.6: ${figures.goal.met ? "met" : "NOT met"}); zero errors: ${figures.goal.zeroErrors ? "met" : "NOT met"}`,
 );
+console.log(row("CPU s: api (each)", (p) => p.cpu.instancesS.join(" + ")));
+console.log(row("CPU s: load generator", (p) => p.cpu.loadGeneratorS));
+console.log(row("CPU s: HAProxy", (p) => p.cpu.proxyS));
+console.log(row("CPU s: machine busy", (p) => `${p.cpu.machineBusyS} of ${p.cpu.machineTotalS}`));
+console.log("  (machine busy includes PostgreSQL and anything else running on the machine at the time)");
 for (const e of [...one.errorSamples, ...two.errorSamples]) console.log(`  error sample: ${e}`);
 console.log(`Wrote ${path.relative(repoRoot, path.join(outDir, "instances.json"))}`);

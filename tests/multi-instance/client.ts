@@ -21,6 +21,12 @@ export class Client {
   readonly servedBy = new Map<string, number>();
   private readonly agent: http.Agent | false;
 
+  /**
+   * When set, bodies of successful replies are read but neither kept nor parsed: the benchmark turns
+   * it on after sign-in so the load generator spends its core on sending, not on parsing results.
+   */
+  discardBodies = false;
+
   constructor(
     readonly baseUrl: string,
     { keepAlive = false }: { keepAlive?: boolean } = {},
@@ -56,10 +62,11 @@ export class Client {
         { method, headers: sent, agent: this.agent, timeout: timeoutMs },
         (res) => {
           const chunks: Buffer[] = [];
-          res.on("data", (c: Buffer) => chunks.push(c));
+          const keep = !this.discardBodies || (res.statusCode ?? 0) >= 300;
+          res.on("data", (c: Buffer) => void (keep && chunks.push(c)));
           res.on("error", reject);
           res.on("end", () => {
-            const text = Buffer.concat(chunks).toString("utf8");
+            const text = keep ? Buffer.concat(chunks).toString("utf8") : "";
             let parsed: Record<string, unknown> = {};
             try {
               parsed = text ? (JSON.parse(text) as Record<string, unknown>) : {};
