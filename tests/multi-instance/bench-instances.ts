@@ -269,6 +269,12 @@ console.log(
   `  two instances completed ${ratio}× the analysis runs of one (goal ≥ 1.6: ${figures.goal.met ? "met" : "NOT met"}); zero errors: ${figures.goal.zeroErrors ? "met" : "NOT met"}`,
 );
 console.log(row("CPU s: api (each)", (p) => p.cpu.instancesS.join(" + ")));
+console.log(
+  row("runs per API CPU s", (p) => {
+    const used = p.cpu.instancesS.reduce<number>((x, y) => x + (y ?? 0), 0);
+    return used > 0 ? round(p.runs.completed / used, 2) : null;
+  }),
+);
 console.log(row("CPU s: load generator", (p) => p.cpu.loadGeneratorS));
 console.log(row("CPU s: HAProxy", (p) => p.cpu.proxyS));
 console.log(row("CPU s: machine busy", (p) => `${p.cpu.machineBusyS} of ${p.cpu.machineTotalS}`));
