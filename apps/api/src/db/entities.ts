@@ -1,4 +1,5 @@
 import { Analysis } from "../modules/analyses/analysis.entity.js";
+import { AnalysisRun } from "../modules/analyses/runs/analysis-run.entity.js";
 import { AuditEvent } from "../modules/audit/audit-event.entity.js";
 import { Dataset } from "../modules/datasets/dataset.entity.js";
 import { Invitation } from "../modules/invitations/invitation.entity.js";
@@ -20,6 +21,7 @@ export const entities = [
   Study,
   Dataset,
   Analysis,
+  AnalysisRun,
   AuditEvent,
   ReviewRound,
   ReviewComment,

@@ -42,9 +42,13 @@ export interface ApiProcess {
 /**
  * Starts the real server from its TypeScript sources (tsx, so no build is needed) on a given
  * database file, and resolves once /api/health answers. The environment is given in full rather
- * than inherited, so the developer's own settings cannot leak in.
+ * than inherited, so the developer's own settings cannot leak in; `extraEnv` adds settings a test needs.
  */
-export async function startApi(databasePath: string, timeoutMs = 60_000): Promise<ApiProcess> {
+export async function startApi(
+  databasePath: string,
+  timeoutMs = 60_000,
+  extraEnv: Record<string, string> = {},
+): Promise<ApiProcess> {
   const port = await freePort();
   const child = spawn(process.execPath, ["--import", "tsx", "src/server.ts"], {
     cwd: apiRoot,
@@ -54,6 +58,7 @@ export async function startApi(databasePath: string, timeoutMs = 60_000): Promis
       DATABASE_PATH: databasePath,
       WAYMARK_DEMO: "1",
       BCRYPT_COST: "4",
+      ...extraEnv,
     },
     stdio: ["ignore", "pipe", "pipe"],
   });
