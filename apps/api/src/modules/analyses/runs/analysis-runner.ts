@@ -95,7 +95,10 @@ export class AnalysisRunner {
   /** Starts sweeping every `sweepMs`; the timer does not keep the process alive. */
   start(): void {
     if (this.sweeper) return;
-    this.sweeper = setInterval(() => void this.sweepOnce().catch(logSweepError), this.settings.sweepMs);
+    this.sweeper = setInterval(() => {
+      // A data source closed under a running timer (tests, shutdown) has nothing to sweep.
+      if (this.ds.isInitialized) void this.sweepOnce().catch(logSweepError);
+    }, this.settings.sweepMs);
     this.sweeper.unref();
   }
 
