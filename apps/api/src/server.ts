@@ -9,7 +9,7 @@ import { seedDemoUsers } from "./db/seeds/demo-users.js";
 
 async function main(): Promise<void> {
   const env = loadEnv();
-  const ds = await openDatabase(env.DATABASE_PATH);
+  const ds = await openDatabase(env.database);
   if (env.WAYMARK_DEMO) {
     await seedDemoUsers(ds, env.demoPassword, env.BCRYPT_COST);
     await seedDemoStudies(ds, env.demoPassword);
@@ -19,7 +19,7 @@ async function main(): Promise<void> {
 
   const server = app.listen(env.PORT, () => {
     const mode = env.WAYMARK_DEMO ? "demo mode" : env.NODE_ENV;
-    console.log(`Waymark listening on http://localhost:${env.PORT} (${mode}, database ${env.DATABASE_PATH})`);
+    console.log(`Waymark listening on http://localhost:${env.PORT} (${mode}, database ${env.databaseLabel})`);
     if (env.WAYMARK_DEMO)
       console.log(`Demo accounts: analyst|reviewer|writer|admin@waymark.test, password ${env.demoPassword}`);
   });

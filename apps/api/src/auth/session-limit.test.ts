@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { signedIn } from "../test-support/agents.js";
 import { makeTestApp } from "../test-support/test-app.js";
+import { sql } from "../test-support/sql.js";
 
 describe("session limits", () => {
   it("signs a session out 12 hours after sign-in however active it was (absolute limit)", async () => {
@@ -15,7 +16,10 @@ describe("session limits", () => {
     for (const r of rows) {
       const data = JSON.parse(r.data) as { startedAt: number };
       data.startedAt -= (12 * 60 + 1) * 60_000;
-      await t.ds.query(`UPDATE sessions SET data = ? WHERE sid = ?`, [JSON.stringify(data), r.sid]);
+      await sql(t.ds, `UPDATE sessions SET data = :data WHERE sid = :sid`, {
+        data: JSON.stringify(data),
+        sid: r.sid,
+      });
     }
     await agent.get("/api/auth/me").expect(401);
     await t.services.stop();

@@ -2,7 +2,7 @@ import "reflect-metadata";
 import request from "supertest";
 import { describe, expect, it } from "vitest";
 import { createApp } from "../app.js";
-import { openDatabase } from "../db/data-source.js";
+import { closeTestDatabase, openTestDatabase } from "../test-support/test-database.js";
 import type { MailDispatcher } from "../modules/mail/mail-dispatcher.js";
 import { loadEnv } from "./env.js";
 
@@ -28,11 +28,11 @@ describe("safe defaults outside demo mode (loadEnv)", () => {
 
   it("mounts no dev mailbox for anonymous callers outside demo mode", async () => {
     const env = loadEnv({ SESSION_SECRET: SECRET, DATABASE_PATH: ":memory:" });
-    const ds = await openDatabase(":memory:");
+    const { ds } = await openTestDatabase();
     const mail = { kick: async () => undefined } as unknown as MailDispatcher;
     const { app } = createApp(ds, env, { mail });
     const res = await request(app).get("/api/dev/mail");
     expect(res.status).toBe(404);
-    await ds.destroy();
+    await closeTestDatabase(ds);
   });
 });

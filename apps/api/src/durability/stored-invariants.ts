@@ -2,8 +2,8 @@ import { createHash } from "node:crypto";
 import Database from "better-sqlite3";
 
 /**
- * What a crash must never leave behind, read straight from the database file (read-only, with
- * no server attached): SQLite's own integrity and foreign-key checks, every dataset whole (its
+ * What a crash must never leave behind, read straight from a SQLite database file (read-only,
+ * with no server attached; the kill-and-restart test is about SQLite's file): SQLite's own integrity and foreign-key checks, every dataset whole (its
  * blob matches its recorded size and SHA-256, its values parse) and every dataset and analysis
  * paired one-to-one with the audit event written in the same transaction.
  */
@@ -28,8 +28,18 @@ export function readStoredInvariants(databasePath: string) {
       })
       .map((d) => d.id);
 
-    const ids = (sql: string) =>
-      (db.prepare(sql).pluck().all() as (number | null)[]).sort((a, b) => (a ?? 0) - (b ?? 0));
+    // The audit trail's JSON is read here rather than with SQLite's json functions.
+    const eventIds = (action: string, key: string) =>
+      (
+        db.prepare(`SELECT "after" FROM audit_events WHERE action = ?`).pluck().all(action) as (
+          string | null
+        )[]
+      )
+        .map((after) => {
+          const value = after === null ? null : (JSON.parse(after) as Record<string, unknown>)[key];
+          return typeof value === "number" ? value : null;
+        })
+        .sort((a, b) => (a ?? 0) - (b ?? 0));
     const analyses = db.prepare(`SELECT id, result FROM analyses ORDER BY id`).all() as {
       id: number;
       result: string;
@@ -48,14 +58,10 @@ export function readStoredInvariants(databasePath: string) {
       integrity,
       foreignKeyViolations,
       datasetIds: datasets.map((d) => d.id),
-      uploadEventDatasetIds: ids(
-        `SELECT json_extract("after", '$.datasetId') FROM audit_events WHERE action = 'dataset.uploaded'`,
-      ),
+      uploadEventDatasetIds: eventIds("dataset.uploaded", "datasetId"),
       brokenDatasets,
       analysisIds: analyses.map((a) => a.id),
-      runEventAnalysisIds: ids(
-        `SELECT json_extract("after", '$.analysisId') FROM audit_events WHERE action = 'analysis.run'`,
-      ),
+      runEventAnalysisIds: eventIds("analysis.run", "analysisId"),
       unreadableAnalyses,
     };
   } finally {

@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "../auth/roles.js";
 import { decide } from "../auth/policy.js";
 import { makeTestApp } from "../test-support/test-app.js";
+import { sql } from "../test-support/sql.js";
 import { analysedStudy } from "../test-support/analysed-study.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
@@ -25,14 +26,14 @@ beforeAll(async () => {
   }
   const gone = await anon(t.app);
   await t.ds.query(
-    `INSERT INTO users (email, display_name, role, password_hash, active) SELECT 'gone@waymark.test', 'Former Analyst', 'analyst', password_hash, 1 FROM users WHERE email = 'analyst@waymark.test'`,
+    `INSERT INTO users (email, display_name, role, password_hash, active) SELECT 'gone@waymark.test', 'Former Analyst', 'analyst', password_hash, true FROM users WHERE email = 'analyst@waymark.test'`,
   );
   const goneLogin = await gone
     .post("/api/auth/login")
     .send({ email: "gone@waymark.test", password: t.env.demoPassword })
     .expect(200);
   gone.set("x-csrf-token", goneLogin.headers["x-csrf-token"] as string);
-  await t.ds.query(`UPDATE users SET active = 0 WHERE email = 'gone@waymark.test'`);
+  await t.ds.query(`UPDATE users SET active = false WHERE email = 'gone@waymark.test'`);
   agents.set("deactivated", gone);
   agents.set("signed-out", await anon(t.app));
 });
@@ -95,7 +96,7 @@ describe("authorization matrix (generated from the route table)", () => {
     const list = await writer.get("/api/studies").expect(200);
     expect(list.body.studies.map((s: { id: number }) => s.id)).not.toContain(studyId);
 
-    await t.ds.query(`UPDATE studies SET status = 'approved' WHERE id = ?`, [studyId]);
+    await sql(t.ds, `UPDATE studies SET status = 'approved' WHERE id = :studyId`, { studyId });
     const approved = await asWriter();
     for (const p of reads) expect([p, approved[p] === 403 || approved[p] === 401]).toEqual([p, false]);
     const after = await writer.get("/api/studies").expect(200);

@@ -4,10 +4,27 @@ import path from "node:path";
 import Database from "better-sqlite3";
 import { describe, expect, it } from "vitest";
 import { openDatabase } from "../db/data-source.js";
-import { backupDatabase } from "./backup.js";
+import { loadEnv } from "../config/env.js";
+import { ENTITY_DRIVER } from "../db/column-types.js";
+import { backupDatabase, requireSqlite } from "./backup.js";
 import { restoreDatabase } from "./restore.js";
 
-describe("backup and restore", () => {
+describe("backup and restore refuse a PostgreSQL database, naming pg_dump and pg_restore", () => {
+  it("refuses with the PostgreSQL tools named", () => {
+    const env = loadEnv(
+      { DATABASE_URL: "postgres://waymark@db.example:5432/waymark" },
+      { purpose: "script" },
+    );
+    expect(() => requireSqlite(env, "backup")).toThrow(/pg_dump/);
+    expect(() => requireSqlite(env, "restore")).toThrow(/pg_restore/);
+    expect(requireSqlite(loadEnv({ DATABASE_PATH: "/tmp/w.sqlite" }, { purpose: "script" }), "backup")).toBe(
+      "/tmp/w.sqlite",
+    );
+  });
+});
+
+// These copy SQLite's file; PostgreSQL is backed up with pg_dump, not by this code.
+describe.skipIf(ENTITY_DRIVER === "postgres")("backup and restore", () => {
   it("round-trips a live database through SQLite's online backup", async () => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-backup-"));
     const live = path.join(dir, "live.sqlite");

@@ -2,6 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import Database from "better-sqlite3";
 import { loadEnv } from "../config/env.js";
+import { requireSqlite } from "./backup.js";
 
 /**
  * Restores a backup over the database file. Run it with the app stopped. The backup is checked
@@ -27,13 +28,14 @@ export function restoreDatabase(backup: string, target: string): { kept: string 
 
 function main() {
   const env = loadEnv(undefined, { purpose: "script" });
+  const databasePath = requireSqlite(env, "restore");
   const file = process.argv[2];
   if (!file) {
     console.error("usage: npm run restore -- <backup file>");
     process.exit(2);
   }
-  const { kept } = restoreDatabase(path.resolve(env.INIT_CWD ?? ".", file), env.DATABASE_PATH);
-  console.log(`Restored ${file} to ${env.DATABASE_PATH}${kept ? ` (previous file kept as ${kept})` : ""}`);
+  const { kept } = restoreDatabase(path.resolve(env.INIT_CWD ?? ".", file), databasePath);
+  console.log(`Restored ${file} to ${databasePath}${kept ? ` (previous file kept as ${kept})` : ""}`);
 }
 
 if (process.argv[1] && import.meta.url.endsWith(path.basename(process.argv[1]))) {

@@ -41,7 +41,7 @@ export interface ApiProcess {
 
 /**
  * Starts the real server from its TypeScript sources (tsx, so no build is needed) on a given
- * database file, and resolves once /api/health answers. The environment is given in full rather
+ * database file or PostgreSQL URL, and resolves once /api/health answers. The environment is given in full rather
  * than inherited, so the developer's own settings cannot leak in; `extraEnv` adds settings a test needs.
  */
 export async function startApi(
@@ -55,7 +55,9 @@ export async function startApi(
     env: {
       NODE_ENV: "test",
       PORT: String(port),
-      DATABASE_PATH: databasePath,
+      ...(/^postgres(ql)?:\/\//.test(databasePath)
+        ? { DATABASE_URL: databasePath }
+        : { DATABASE_PATH: databasePath }),
       WAYMARK_DEMO: "1",
       BCRYPT_COST: "4",
       ...extraEnv,

@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { signedIn } from "../../test-support/agents.js";
 import { analysedStudy } from "../../test-support/analysed-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
+import { sql } from "../../test-support/sql.js";
 import { verifyApproval } from "../../modules/reviews/review.service.js";
 import { PosthocMethodIds1764806400000 } from "./1764806400000-posthoc-method-ids.js";
 
@@ -12,11 +13,8 @@ beforeAll(async () => {
 });
 
 const stored = async (id: number) =>
-  (
-    (await t.ds.query(`SELECT "posthoc_method" AS m FROM "analyses" WHERE "id" = ?`, [id])) as {
-      m: string;
-    }[]
-  )[0]?.m;
+  (await sql<{ m: string }>(t.ds, `SELECT "posthoc_method" AS m FROM "analyses" WHERE "id" = :id`, { id }))[0]
+    ?.m;
 
 describe("migration 1764806400000: post-hoc families stored as ids", () => {
   it("converts display text to ids and back, keeps rows immutable, and leaves signatures valid", async () => {

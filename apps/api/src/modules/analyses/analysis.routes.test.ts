@@ -80,7 +80,7 @@ describe("checks and analyses", () => {
     expect(ok.body.analysis.chosenTest).toBe(other);
   });
 
-  it("stores every one of many concurrent runs whole (transactions queued on the one SQLite connection)", async () => {
+  it("stores every one of many concurrent runs whole (queued on SQLite's one connection, pooled on PostgreSQL)", async () => {
     const count = async (sql: string) => Number((await t.ds.query(sql))[0].n);
     const before = await count(`SELECT count(*) AS n FROM analyses`);
     const runs = await Promise.all(

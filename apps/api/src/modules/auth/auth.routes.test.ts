@@ -88,9 +88,9 @@ describe("GET /api/auth/me and POST /api/auth/logout", () => {
       .post("/api/auth/login")
       .send({ email: "writer@waymark.test", password: app.env.demoPassword })
       .expect(200);
-    await app.ds.query(`UPDATE users SET active = 0 WHERE email = 'writer@waymark.test'`);
+    await app.ds.query(`UPDATE users SET active = false WHERE email = 'writer@waymark.test'`);
     await agent.get("/api/auth/me").expect(401);
-    await app.ds.query(`UPDATE users SET active = 1 WHERE email = 'writer@waymark.test'`);
+    await app.ds.query(`UPDATE users SET active = true WHERE email = 'writer@waymark.test'`);
   });
 });
 

@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { signedIn } from "../../test-support/agents.js";
 import { analysedStudy, YIELD_CSV } from "../../test-support/analysed-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
+import { tamper } from "../../test-support/tamper.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let analyst: Awaited<ReturnType<typeof signedIn>>;
@@ -13,10 +14,15 @@ beforeAll(async () => {
 
 /** Datasets are immutable, so simulate damage by lifting the guard for one statement. */
 async function tamperContent(datasetId: number, content: Buffer): Promise<void> {
-  await t.ds.query(`DROP TRIGGER "trg_datasets_no_update"`);
-  await t.ds.query(`UPDATE datasets SET content = ? WHERE id = ?`, [content, datasetId]);
-  await t.ds.query(
-    `CREATE TRIGGER "trg_datasets_no_update" BEFORE UPDATE ON "datasets" BEGIN SELECT RAISE(ABORT, 'datasets rows are immutable'); END`,
+  await tamper(
+    t.ds,
+    "datasets",
+    "trg_datasets_no_update",
+    `UPDATE datasets SET content = :content WHERE id = :id`,
+    {
+      content,
+      id: datasetId,
+    },
   );
 }
 

@@ -1,5 +1,5 @@
 import { Column, Entity, JoinColumn, Index, ManyToOne, PrimaryGeneratedColumn, type Relation } from "typeorm";
-import { DATETIME } from "../../db/column-types.js";
+import { BLOB, DATETIME } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 import type { ExtractedGroups, ValidationReport } from "./extract-groups.js";
 
@@ -29,7 +29,7 @@ export class Dataset {
   @Column("varchar", { name: "media_type", length: 100 })
   mediaType: string;
 
-  @Column("blob", { select: false })
+  @Column(BLOB, { select: false })
   content: Buffer;
 
   @Column("varchar", { length: 8 })

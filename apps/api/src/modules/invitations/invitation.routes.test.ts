@@ -2,6 +2,8 @@ import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
 import { anon, signedIn } from "../../test-support/agents.js";
 import { makeTestApp } from "../../test-support/test-app.js";
+import { Invitation } from "./invitation.entity.js";
+import { IsNull } from "typeorm";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let admin: Awaited<ReturnType<typeof signedIn>>;
@@ -77,9 +79,12 @@ describe("invitations", () => {
     expect(second).not.toBe(first);
     const old = await request(t.app).get(`/api/invitations/${first}`).expect(410);
     expect(old.body.error.code).toBe("invitation_revoked");
-    await t.ds.query(
-      `UPDATE invitations SET expires_at = datetime('now', '-1 hour') WHERE email = 'twice@waymark.test' AND revoked_at IS NULL`,
-    );
+    await t.ds
+      .getRepository(Invitation)
+      .update(
+        { email: "twice@waymark.test", revokedAt: IsNull() },
+        { expiresAt: new Date(Date.now() - 60 * 60_000) },
+      );
     const expired = await request(t.app).get(`/api/invitations/${second}`).expect(410);
     expect(expired.body.error.message).toMatch(/expired/);
     await request(t.app).get(`/api/invitations/not-a-token`).expect(404);

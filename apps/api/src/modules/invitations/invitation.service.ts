@@ -10,6 +10,7 @@ import { invitationMessage } from "../mail/messages.js";
 import { enqueueMail } from "../mail/outbox.js";
 import { toPublicUser, User, type PublicUser } from "../users/user.entity.js";
 import { Invitation } from "./invitation.entity.js";
+import { lockRowForWrite } from "../../db/row-lock.js";
 import { inTransaction } from "../../db/in-transaction.js";
 
 export const INVITATION_HOURS = 72;
@@ -114,6 +115,7 @@ export async function acceptInvitation(
   const passwordHash = await hashPassword(input.password, cost);
   return inTransaction(ds, async (tx) => {
     // Re-check inside the transaction so two tabs cannot both use one token.
+    await lockRowForWrite(tx, "invitations", inv.id);
     const fresh = await tx.getRepository(Invitation).findOneByOrFail({ id: inv.id });
     if (stateOf(fresh) !== "open")
       throw new HttpError(410, "invitation_used", "This invitation has already been used.");

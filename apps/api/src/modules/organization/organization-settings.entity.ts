@@ -1,7 +1,7 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn } from "typeorm";
 import type { PaperSize } from "@waymark/contract";
 import type { Adjustment, Policy } from "@waymark/stats";
-import { DATETIME } from "../../db/column-types.js";
+import { DATETIME, DOUBLE } from "../../db/column-types.js";
 
 /** The organization's single settings row (id 1). */
 @Entity({ name: "organization_settings" })
@@ -12,7 +12,7 @@ export class OrganizationSettings {
   @Column("varchar", { length: 20 })
   policy: Policy;
 
-  @Column("real", { name: "default_alpha" })
+  @Column(DOUBLE, { name: "default_alpha" })
   defaultAlpha: number;
 
   @Column("varchar", { name: "default_adjust", length: 12 })

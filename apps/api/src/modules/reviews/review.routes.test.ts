@@ -3,6 +3,8 @@ import { anon, signedIn } from "../../test-support/agents.js";
 import { analysedStudy } from "../../test-support/analysed-study.js";
 import { lockedStudy } from "../../test-support/locked-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
+import { sql } from "../../test-support/sql.js";
+import { tamper } from "../../test-support/tamper.js";
 
 let t: Awaited<ReturnType<typeof makeTestApp>>;
 let analyst: Awaited<ReturnType<typeof signedIn>>;
@@ -106,10 +108,14 @@ describe("review state machine", () => {
       .send({ password: t.env.demoPassword, meaning: MEANING })
       .expect(200);
     // Analyses are immutable, so simulate tampering by dropping the guard for one statement.
-    await t.ds.query(`DROP TRIGGER "trg_analyses_no_update"`);
-    await t.ds.query(`UPDATE analyses SET chosen_test = 'welch' WHERE id = ?`, [analysisId]);
-    await t.ds.query(
-      `CREATE TRIGGER "trg_analyses_no_update" BEFORE UPDATE ON "analyses" BEGIN SELECT RAISE(ABORT, 'analyses rows are immutable'); END`,
+    await tamper(
+      t.ds,
+      "analyses",
+      "trg_analyses_no_update",
+      `UPDATE analyses SET chosen_test = 'welch' WHERE id = :id`,
+      {
+        id: analysisId,
+      },
     );
     const h = await reviewer.get(`/api/studies/${studyId}/history`).expect(200);
     expect(h.body.approvalValid).toBe(false);
@@ -124,7 +130,7 @@ describe("separation of duties", () => {
     await analyst.post(`/api/studies/${studyId}/submit`).send({}).expect(200);
     // ...but nobody can approve their own: make the admin the owner for this check.
     const adminId = (await admin.get("/api/auth/me")).body.user.id;
-    await t.ds.query(`UPDATE studies SET owner_id = ? WHERE id = ?`, [adminId, studyId]);
+    await sql(t.ds, `UPDATE studies SET owner_id = :adminId WHERE id = :studyId`, { adminId, studyId });
     const res = await admin
       .post(`/api/studies/${studyId}/approve`)
       .send({ password: t.env.demoPassword, meaning: MEANING })

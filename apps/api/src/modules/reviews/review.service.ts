@@ -29,7 +29,7 @@ const activeWithRole = (tx: EntityManager, roles: string[]) =>
   tx
     .getRepository(User)
     .createQueryBuilder("u")
-    .where("u.role IN (:...roles) AND u.active = 1", { roles })
+    .where("u.role IN (:...roles) AND u.active = :active", { roles, active: true })
     .getMany();
 
 /** The study's status once this transaction's writes are in, for the e-mails it sends. */

@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryColumn } from "typeorm";
+import { BIGINT_AS_NUMBER } from "../../db/column-types.js";
 
 /** One express-session record, kept in the app's own database so several API instances can share it. */
 @Entity({ name: "sessions" })
@@ -11,7 +12,7 @@ export class Session {
 
   /** Epoch milliseconds; integer keeps the comparison portable across drivers. */
   @Index()
-  @Column("bigint", { name: "expires_at" })
+  @Column("bigint", { name: "expires_at", transformer: BIGINT_AS_NUMBER })
   expiresAt: number;
 
   @Index()

@@ -1,4 +1,5 @@
 import type { DataSource, EntityManager } from "typeorm";
+import { lockRowForWrite } from "../../db/row-lock.js";
 import { ConflictError, ForbiddenError, NotFoundError } from "../../http/errors.js";
 import { Study } from "./study.entity.js";
 
@@ -6,7 +7,10 @@ type Db = DataSource | EntityManager;
 
 /** Loads a study the caller may read: analysts their own, writers approved ones, other roles any. */
 export async function loadReadableStudy(db: Db, id: number, user: Express.User): Promise<Study> {
-  const study = Number.isInteger(id) && id > 0 ? await db.getRepository(Study).findOneBy({ id }) : null;
+  const valid = Number.isInteger(id) && id > 0;
+  // Within a write transaction the study's state is checked under its row lock (PostgreSQL).
+  if (valid) await lockRowForWrite(db, "studies", id);
+  const study = valid ? await db.getRepository(Study).findOneBy({ id }) : null;
   if (!study) throw new NotFoundError(`There is no study ${id}.`);
   if (user.role === "analyst" && study.ownerId !== user.id)
     throw new ForbiddenError("This study belongs to another analyst.");

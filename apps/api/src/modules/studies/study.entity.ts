@@ -8,7 +8,7 @@ import {
   UpdateDateColumn,
   type Relation,
 } from "typeorm";
-import { DATETIME } from "../../db/column-types.js";
+import { DATETIME, DOUBLE } from "../../db/column-types.js";
 import { User } from "../users/user.entity.js";
 import type { DesignAnswers } from "./design.js";
 import type { PlanSettings } from "./plan.js";
@@ -43,7 +43,7 @@ export class Study {
   @Column("varchar", { name: "control_level", length: 120, nullable: true })
   controlLevel: string | null;
 
-  @Column("real")
+  @Column(DOUBLE)
   alpha: number;
 
   @Column("varchar", { length: 20 })
