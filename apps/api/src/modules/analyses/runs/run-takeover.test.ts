@@ -1,19 +1,26 @@
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import Database from "better-sqlite3";
+import type { DataSource } from "typeorm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD } from "../../../config/env.js";
+import { ENTITY_DRIVER } from "../../../db/column-types.js";
+import { openDatabase } from "../../../db/data-source.js";
 import { largeCsv } from "../../../durability/large-csv.js";
-import { readStoredInvariants } from "../../../durability/stored-invariants.js";
 import { startApi, type ApiProcess } from "../../../test-support/api-process.js";
 import { YIELD_CSV } from "../../../test-support/analysed-study.js";
 import { HttpSession } from "../../../test-support/http-session.js";
+import { sql } from "../../../test-support/sql.js";
+import { closeTestDatabase, openTestDatabase } from "../../../test-support/test-database.js";
+import { AuditEvent } from "../../audit/audit-event.entity.js";
+import { AnalysisRun } from "./analysis-run.entity.js";
 
 /**
- * Two real server processes on one database file. Their sweepers race over runs left by an
- * instance that died; then one of them is killed with SIGKILL while it computes a request's run,
- * and the other takes the run up once the lease lapses and stores its one analysis.
+ * Two real server processes on one database: a SQLite file, or with WAYMARK_TEST_DB=postgres a
+ * fresh PostgreSQL database (claims there use SELECT … FOR UPDATE SKIP LOCKED). Their sweepers
+ * race over runs left by an instance that died; then one of them is killed with SIGKILL while it
+ * computes a request's run, and the other takes the run up once the lease lapses and stores its
+ * one analysis. The test reads and writes the database through a connection of its own.
  */
 const TIMEOUT = 240_000;
 /** Short leases so a dead instance's run is taken up within seconds (renewal at most half the lease). */
@@ -24,37 +31,47 @@ const RUN_ENV = {
 };
 
 let dir: string;
-let dbPath: string;
+/** The test's own connection to the database both servers use. */
+let db: DataSource;
+let target: string;
 let a: ApiProcess;
 let b: ApiProcess;
 let analystA: HttpSession;
 let analystId: number;
 
-interface RunRow {
-  id: number;
-  study_id: number;
-  status: string;
-  claimed_by: string | null;
-  attempts: number;
-  analysis_id: number | null;
-}
+const runsOf = (where: string, params: Record<string, unknown>) =>
+  sql<{
+    id: number;
+    study_id: number;
+    status: string;
+    claimed_by: string | null;
+    attempts: number;
+    analysis_id: number | null;
+  }>(
+    db,
+    `SELECT id, study_id, status, claimed_by, attempts, analysis_id FROM analysis_runs WHERE ${where} ORDER BY id`,
+    params,
+  ).then((rows) =>
+    rows.map((r) => ({
+      ...r,
+      id: Number(r.id),
+      study_id: Number(r.study_id),
+      attempts: Number(r.attempts),
+      analysis_id: r.analysis_id === null ? null : Number(r.analysis_id),
+    })),
+  );
 
-/** Reads the file directly, as a third party: the servers keep running. */
-function query<T>(sql: string, ...params: unknown[]): T[] {
-  const db = new Database(dbPath, { readonly: true, fileMustExist: true });
-  try {
-    return db.prepare(sql).all(...params) as T[];
-  } finally {
-    db.close();
-  }
-}
+const analysisIdsOf = async (studyId: number) =>
+  (
+    await sql<{ id: number }>(db, `SELECT id FROM analyses WHERE study_id = :studyId ORDER BY id`, {
+      studyId,
+    })
+  ).map((r) => Number(r.id));
 
-const sqliteTime = (d: Date) => d.toISOString().replace("T", " ").replace("Z", "");
-
-async function until<T>(what: string, read: () => T | undefined, timeoutMs: number): Promise<T> {
+async function until<T>(what: string, read: () => Promise<T | undefined>, timeoutMs: number): Promise<T> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    const got = read();
+    const got = await read();
     if (got !== undefined) return got;
     if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
     await new Promise((r) => setTimeout(r, 5));
@@ -102,19 +119,29 @@ async function upload(studyId: number, csv: Buffer, fields: Record<string, strin
   return body.dataset.id;
 }
 
-function expectConsistent(): void {
-  const inv = readStoredInvariants(dbPath);
-  expect(inv.integrity).toBe("ok");
-  expect(inv.foreignKeyViolations).toBe(0);
-  expect(inv.unreadableAnalyses).toEqual([]);
-  expect(inv.runEventAnalysisIds).toEqual(inv.analysisIds);
+/** Every analysis paired one-to-one with the "analysis.run" event written in its transaction. */
+async function expectOneEventPerAnalysis(): Promise<void> {
+  const analyses = (await sql<{ id: number }>(db, `SELECT id FROM analyses ORDER BY id`)).map((r) =>
+    Number(r.id),
+  );
+  const events = (await db.getRepository(AuditEvent).findBy({ action: "analysis.run" }))
+    .map((e) => (e.after as { analysisId: number }).analysisId)
+    .sort((x, y) => x - y);
+  expect(events).toEqual(analyses);
 }
 
 beforeAll(async () => {
   dir = fs.mkdtempSync(path.join(os.tmpdir(), "waymark-runs-"));
-  dbPath = path.join(dir, "waymark.sqlite");
-  a = await startApi(dbPath, 60_000, RUN_ENV);
-  b = await startApi(dbPath, 60_000, RUN_ENV);
+  if (ENTITY_DRIVER === "postgres") {
+    const opened = await openTestDatabase();
+    db = opened.ds;
+    target = opened.url!;
+  } else {
+    target = path.join(dir, "waymark.sqlite");
+    db = await openDatabase(target);
+  }
+  a = await startApi(target, 60_000, RUN_ENV);
+  b = await startApi(target, 60_000, RUN_ENV);
   analystA = await HttpSession.signIn(a.url, "analyst@waymark.test", DEMO_PASSWORD);
   analystId = (await analystA.json<{ user: { id: number } }>("GET", "/api/auth/me", undefined, 200)).user.id;
 }, TIMEOUT);
@@ -122,6 +149,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await a?.kill();
   await b?.kill();
+  if (db) await closeTestDatabase(db);
   fs.rmSync(dir, { recursive: true, force: true });
 });
 
@@ -138,32 +166,37 @@ describe("analysis runs across two server processes on one database", () => {
         });
         studies.push({ studyId, datasetId });
       }
-      const db = new Database(dbPath);
-      db.pragma("busy_timeout = 5000");
-      const insert = db.prepare(
-        `INSERT INTO analysis_runs (study_id, dataset_id, request, requested_by_id, status, claimed_by, lease_until, attempts)
-         VALUES (?, ?, '{}', ?, 'running', 'dead-instance', ?, 1)`,
+      const repo = db.getRepository(AnalysisRun);
+      const inserted = await repo.save(
+        studies.map((x) =>
+          repo.create({
+            studyId: x.studyId,
+            datasetId: x.datasetId,
+            request: {},
+            requestedById: analystId,
+            requestedFromIp: null,
+            status: "running",
+            claimedBy: "dead-instance",
+            leaseUntil: new Date(Date.now() - 60_000),
+            attempts: 1,
+          }),
+        ),
       );
-      const lapsed = sqliteTime(new Date(Date.now() - 60_000));
-      const ids = studies.map((s) =>
-        Number(insert.run(s.studyId, s.datasetId, analystId, lapsed).lastInsertRowid),
-      );
-      db.close();
+      const ids = inserted.map((r) => r.id);
 
       const runs = await until(
         "the sweepers to finish every run",
-        () => {
-          const rows = query<RunRow>(`SELECT * FROM analysis_runs WHERE id IN (${ids.join(",")})`);
+        async () => {
+          const rows = await runsOf(`id IN (:...ids)`, { ids });
           return rows.every((r) => r.status === "done" || r.status === "failed") ? rows : undefined;
         },
         60_000,
       );
       for (const run of runs) {
         expect(run).toMatchObject({ status: "done", claimed_by: null, attempts: 2 });
-        const analyses = query<{ id: number }>(`SELECT id FROM analyses WHERE study_id = ?`, run.study_id);
-        expect(analyses.map((x) => x.id)).toEqual([run.analysis_id]);
+        expect(await analysisIdsOf(run.study_id)).toEqual([run.analysis_id]);
       }
-      expectConsistent();
+      await expectOneEventPerAnalysis();
     },
     TIMEOUT,
   );
@@ -187,7 +220,7 @@ describe("analysis runs across two server processes on one database", () => {
       // Kill A as soon as its run is recorded: it then has the dataset and the engine still to go.
       const run = await until(
         "instance A to record its run",
-        () => query<RunRow>(`SELECT * FROM analysis_runs WHERE study_id = ?`, studyId)[0],
+        async () => (await runsOf(`study_id = :studyId`, { studyId }))[0],
         60_000,
       );
       await a.kill();
@@ -197,16 +230,15 @@ describe("analysis runs across two server processes on one database", () => {
 
       const done = await until(
         "instance B to take the run up and finish it",
-        () => {
-          const r = query<RunRow>(`SELECT * FROM analysis_runs WHERE id = ?`, run.id)[0]!;
-          return r.status === "done" || r.status === "failed" ? r : undefined;
+        async () => {
+          const [r] = await runsOf(`id = :id`, { id: run.id });
+          return r!.status === "done" || r!.status === "failed" ? r : undefined;
         },
         180_000,
       );
       expect(done).toMatchObject({ status: "done", attempts: 2, claimed_by: null });
-      const analyses = query<{ id: number }>(`SELECT id FROM analyses WHERE study_id = ?`, studyId);
-      expect(analyses.map((x) => x.id)).toEqual([done.analysis_id]);
-      expectConsistent();
+      expect(await analysisIdsOf(studyId)).toEqual([done.analysis_id]);
+      await expectOneEventPerAnalysis();
       // The analysis shows on the instance that survived, as it would to the web app's list.
       const analystB = await HttpSession.signIn(b.url, "analyst@waymark.test", DEMO_PASSWORD);
       const list = await analystB.json<{ analyses: { id: number }[] }>(
