@@ -1,5 +1,8 @@
 import { Table, TableIndex, type MigrationInterface, type QueryRunner } from "typeorm";
-import { DATETIME } from "../column-types.js";
+import { isPostgres } from "../driver.js";
+
+/** The driver's datetime type (the entities' `DATETIME`), asked of the connection being migrated. */
+const datetime = (q: QueryRunner) => (isPostgres(q.connection) ? "timestamp with time zone" : "datetime");
 
 /**
  * Analysis runs as rows an instance claims with a lease, so a run outlives the instance that took
@@ -27,14 +30,14 @@ export class CreateAnalysisRuns1764900000100 implements MigrationInterface {
           { name: "requested_from_ip", type: "varchar", length: "64", isNullable: true },
           { name: "status", type: "varchar", length: "10" },
           { name: "claimed_by", type: "varchar", length: "120", isNullable: true },
-          { name: "lease_until", type: DATETIME, isNullable: true },
+          { name: "lease_until", type: datetime(q), isNullable: true },
           { name: "attempts", type: "integer", default: 0 },
           { name: "analysis_id", type: "integer", isNullable: true },
           { name: "error_status", type: "integer", isNullable: true },
           { name: "error_code", type: "varchar", length: "60", isNullable: true },
           { name: "error_message", type: "text", isNullable: true },
-          { name: "created_at", type: DATETIME, default: "CURRENT_TIMESTAMP" },
-          { name: "updated_at", type: DATETIME, default: "CURRENT_TIMESTAMP" },
+          { name: "created_at", type: datetime(q), default: "CURRENT_TIMESTAMP" },
+          { name: "updated_at", type: datetime(q), default: "CURRENT_TIMESTAMP" },
         ],
         foreignKeys: [
           { columnNames: ["study_id"], referencedTableName: "studies", referencedColumnNames: ["id"] },

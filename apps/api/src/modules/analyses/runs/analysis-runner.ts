@@ -118,8 +118,10 @@ export class AnalysisRunner {
     return releaseRuns(this.ds, this.instanceId);
   }
 
+  /** For shutdown: no more claims, then every held run given back (a claim being taken lands first). */
   async stop(): Promise<number> {
     this.stopSweeping();
+    await this.claiming?.catch(() => undefined);
     return this.releaseClaims();
   }
 
