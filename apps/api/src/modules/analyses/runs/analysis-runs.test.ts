@@ -169,6 +169,37 @@ describe("a run whose instance died is taken up again", () => {
     }
   });
 
+  it("a run under way keeps its claim: the heartbeat renews the lease, so no sweeper takes it", async () => {
+    const { studyId, runId } = await deadRun();
+    const gate = firstArrivalGate();
+    const remove = holdAt("analysis.before-store", gate.wait);
+    try {
+      // A lease of 1 s renewed every 100 ms: without the heartbeat it would lapse during the wait.
+      const a = new AnalysisRunner(
+        t.ds,
+        { ...SETTINGS, leaseMs: 1000, renewMs: 100 },
+        runEngine,
+        "instance-a",
+      );
+      const slow = a.sweepOnce();
+      await gate.reached;
+      const claimed = await runRow(t.ds, runId);
+      await new Promise((r) => setTimeout(r, 1500));
+      const renewed = await runRow(t.ds, runId);
+      expect(renewed.claimedBy).toBe("instance-a");
+      expect(renewed.leaseUntil!.getTime()).toBeGreaterThan(claimed.leaseUntil!.getTime());
+      expect(renewed.leaseUntil!.getTime()).toBeGreaterThan(Date.now());
+      await runner("instance-b").sweepOnce();
+      expect((await runRow(t.ds, runId)).claimedBy).toBe("instance-a");
+      gate.release();
+      await slow;
+      expect(await runRow(t.ds, runId)).toMatchObject({ status: "done", attempts: 2 });
+      expect(await analysesOf(t.ds, studyId)).toHaveLength(2);
+    } finally {
+      remove();
+    }
+  });
+
   it("claims given back at shutdown are taken up by another instance; the giver's result is dropped", async () => {
     const { studyId, runId } = await deadRun();
     const gate = firstArrivalGate();
