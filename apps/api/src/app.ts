@@ -20,6 +20,7 @@ import { authRoutes } from "./modules/auth/auth.routes.js";
 import { configRoutes } from "./modules/config/config.routes.js";
 import { datasetRoutes } from "./modules/datasets/dataset.routes.js";
 import { healthRoutes } from "./modules/health/health.routes.js";
+import { readinessRoutes } from "./modules/health/readiness.routes.js";
 import { invitationRoutes } from "./modules/invitations/invitation.routes.js";
 import { devMailRoutes } from "./modules/mail/dev-mail.routes.js";
 import type { MailDispatcher } from "./modules/mail/mail-dispatcher.js";
@@ -73,9 +74,12 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   app.use(compression({ threshold: 8 * 1024 })); // below 8 KiB, gzip costs more time than it saves
   app.use(express.json({ limit: "1mb" }));
 
-  // Health answers before any session work: no cookie parsing, no store read, no write.
+  // Health and readiness answer before any session work: no cookie parsing, no store read, no write.
   const early = Router();
-  const healthMounted = mountRoutes(early, "/health", healthRoutes());
+  const healthMounted = [
+    ...mountRoutes(early, "/health", healthRoutes()),
+    ...mountRoutes(early, "/ready", readinessRoutes(ds)),
+  ];
   app.use("/api", early);
 
   const sessionStore = new TypeormSessionStore(ds);

@@ -1,4 +1,6 @@
+import type { Options } from "express-rate-limit";
 import type { DataSource } from "typeorm";
+import { DatabaseRateLimitStore } from "./sign-in-throttle-store.js";
 import type { Actor } from "../http/actor.js";
 import { HttpError } from "../http/errors.js";
 import { recordAudit } from "../modules/audit/audit.service.js";
@@ -7,28 +9,30 @@ import { recordAudit } from "../modules/audit/audit.service.js";
 export const REAUTH_LIMIT = 5;
 const WINDOW_MS = 15 * 60 * 1000;
 
-/** Recent failures per user, per database (test apps in one process keep apart). */
-const failures = new WeakMap<DataSource, Map<number, number[]>>();
-
-function recent(ds: DataSource, userId: number): number[] {
-  let byUser = failures.get(ds);
-  if (!byUser) failures.set(ds, (byUser = new Map()));
-  const now = Date.now();
-  const list = (byUser.get(userId) ?? []).filter((t) => now - t < WINDOW_MS);
-  byUser.set(userId, list);
-  return list;
+/** The counters live in the sign-in throttle table (under "reauth:"), shared by every instance. */
+const stores = new WeakMap<DataSource, DatabaseRateLimitStore>();
+function storeFor(ds: DataSource): DatabaseRateLimitStore {
+  let store = stores.get(ds);
+  if (!store) {
+    store = new DatabaseRateLimitStore(ds, "reauth");
+    store.init({ windowMs: WINDOW_MS } as Options);
+    stores.set(ds, store);
+  }
+  return store;
 }
 
 /**
  * Re-entering one's password (to change it, or to sign an approval) is a second way to guess it,
  * so it is throttled per account like sign-in and every failure is audited. Call `check` before
- * verifying, then `failed` or `succeeded`. Counters live in process memory.
+ * verifying, then `failed` or `succeeded`. Failures count in a window of 15 minutes from the first;
+ * the counters are in the database, so a guess on one instance counts on all.
  */
 export const reauth = {
-  check(ds: DataSource, actor: Actor, what: string): void {
-    const list = recent(ds, actor.user.id);
-    if (list.length >= REAUTH_LIMIT) {
-      const minutes = Math.max(1, Math.ceil((list[0]! + WINDOW_MS - Date.now()) / 60_000));
+  async check(ds: DataSource, actor: Actor, what: string): Promise<void> {
+    const counted = await storeFor(ds).get(String(actor.user.id));
+    if (counted && counted.totalHits >= REAUTH_LIMIT) {
+      const resetAt = counted.resetTime?.getTime() ?? Date.now() + WINDOW_MS;
+      const minutes = Math.max(1, Math.ceil((resetAt - Date.now()) / 60_000));
       throw new HttpError(
         429,
         "too_many_attempts",
@@ -37,14 +41,14 @@ export const reauth = {
     }
   },
   async failed(ds: DataSource, actor: Actor, what: string, studyId?: number): Promise<void> {
-    recent(ds, actor.user.id).push(Date.now());
+    await storeFor(ds).increment(String(actor.user.id));
     await recordAudit(ds, actor, {
       action: "auth.reauth-failed",
       studyId,
       summary: `Wrong password entered for ${what}`,
     });
   },
-  succeeded(ds: DataSource, actor: Actor): void {
-    failures.get(ds)?.delete(actor.user.id);
+  async succeeded(ds: DataSource, actor: Actor): Promise<void> {
+    await storeFor(ds).resetKey(String(actor.user.id));
   },
 };

@@ -1,6 +1,8 @@
 import type { Request, RequestHandler } from "express";
 import { ipKeyGenerator, rateLimit } from "express-rate-limit";
+import type { DataSource } from "typeorm";
 import { HttpError } from "../http/errors.js";
+import { DatabaseRateLimitStore } from "./sign-in-throttle-store.js";
 
 const WINDOW_MS = 15 * 60 * 1000;
 
@@ -19,9 +21,13 @@ function limitReached(req: Request, what: string): HttpError {
 
 /**
  * Throttles failed sign-ins per account and per IP address (successful ones do not count).
- * Counters live in process memory: with several API instances each counts on its own.
+ * Counters live in the database (`sign-in-throttle-store.ts`), so several API instances on one
+ * database count failures together.
  */
-export function signInThrottle(opts: { perAccount: number; perIp: number }): RequestHandler[] {
+export function signInThrottle(
+  ds: DataSource,
+  opts: { perAccount: number; perIp: number },
+): RequestHandler[] {
   const common = {
     windowMs: WINDOW_MS,
     skipSuccessfulRequests: true,
@@ -32,14 +38,15 @@ export function signInThrottle(opts: { perAccount: number; perIp: number }): Req
     rateLimit({
       ...common,
       limit: opts.perIp,
+      store: new DatabaseRateLimitStore(ds, "ip"),
       keyGenerator: (req) => ipKeyGenerator(req.ip ?? "unknown"),
       handler: (req, _res, next) => next(limitReached(req, "from this network address")),
     }),
     rateLimit({
       ...common,
       limit: opts.perAccount,
-      keyGenerator: (req) =>
-        `account:${String((req.body as { email?: unknown } | undefined)?.email ?? "").toLowerCase()}`,
+      store: new DatabaseRateLimitStore(ds, "account"),
+      keyGenerator: (req) => String((req.body as { email?: unknown } | undefined)?.email ?? "").toLowerCase(),
       handler: (req, _res, next) => next(limitReached(req, "for this account")),
     }),
   ];

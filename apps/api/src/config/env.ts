@@ -63,6 +63,13 @@ const schema = z.object({
   TASK_TIMEOUT_SECONDS: z.coerce.number().positive().max(3600).default(60),
   /** Heap one worker may use; past it the worker dies, is replaced, and the request gets 413. */
   WORKER_MEMORY_MB: z.coerce.number().int().min(64).max(16384).default(1024),
+  // Several instances on one database, and stopping one cleanly.
+  /** How long an instance's claim on an outbox message holds; past it another instance may send it. */
+  MAIL_LEASE_SECONDS: z.coerce.number().int().min(5).max(3600).default(300),
+  /** After SIGTERM, how long to keep accepting connections (readiness answering 503) so a load balancer can notice. */
+  SHUTDOWN_DELAY_SECONDS: z.coerce.number().min(0).max(120).default(0),
+  /** After SIGTERM, how long requests in flight may take to finish before their connections are cut. */
+  SHUTDOWN_GRACE_SECONDS: z.coerce.number().min(0).max(600).default(25),
   /** Set by npm to the folder the command was typed in; scripts resolve file arguments against it. */
   INIT_CWD: z.string().optional(),
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),

@@ -5,6 +5,8 @@ import { CreateReviewMailPeople1764637200000 } from "./1764637200000-create-revi
 import { AddActiveDataset1764700000000 } from "./1764700000000-add-active-dataset.js";
 import { CreateReviewReplies1764700000001 } from "./1764700000001-create-review-replies.js";
 import { PosthocMethodIds1764806400000 } from "./1764806400000-posthoc-method-ids.js";
+import { CreateSignInThrottle1764900000000 } from "./1764900000000-create-sign-in-throttle.js";
+import { MailOutboxClaims1764900000001 } from "./1764900000001-mail-outbox-claims.js";
 import { CreateAnalysisRuns1764900000100 } from "./1764900000100-create-analysis-runs.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
@@ -16,5 +18,7 @@ export const migrations = [
   AddActiveDataset1764700000000,
   CreateReviewReplies1764700000001,
   PosthocMethodIds1764806400000,
+  CreateSignInThrottle1764900000000,
+  MailOutboxClaims1764900000001,
   CreateAnalysisRuns1764900000100,
 ];

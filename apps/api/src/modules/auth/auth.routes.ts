@@ -24,7 +24,7 @@ export function authRoutes(
   env: Env,
   sessions: TypeormSessionStore,
 ): RouteSpec[] {
-  const throttle = signInThrottle({
+  const throttle = signInThrottle(ds, {
     perAccount: env.SIGNIN_LIMIT_PER_ACCOUNT,
     perIp: env.SIGNIN_LIMIT_PER_IP,
   });
@@ -88,12 +88,12 @@ export function authRoutes(
       .where("u.id = :id", { id: req.user!.id })
       .getOneOrFail();
     const actor = actorOf(req);
-    reauth.check(ds, actor, "a password change");
+    await reauth.check(ds, actor, "a password change");
     if (!(await verifyPassword(body.currentPassword, row.passwordHash))) {
       await reauth.failed(ds, actor, "a password change");
       throw new HttpError(403, "wrong_password", "currentPassword: That is not your current password.");
     }
-    reauth.succeeded(ds, actor);
+    await reauth.succeeded(ds, actor);
     const problem = passwordProblem(body.newPassword, [row.email, row.displayName]);
     if (problem) throw new HttpError(400, "weak_password", `newPassword: ${problem}`);
     await users.update(

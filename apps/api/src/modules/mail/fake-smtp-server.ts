@@ -23,6 +23,7 @@ export async function startFakeSmtpServer(
             subject: mail.subject ?? "",
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : "",
+            messageId: mail.messageId ?? null,
           }),
         )
         .then(() => callback())

@@ -5,6 +5,7 @@ export type OutboxStatus = "pending" | "sent" | "failed";
 
 /** A message waiting to be sent, or the record of having sent it. Kept in the database so any API instance can send it. */
 @Entity({ name: "mail_outbox" })
+@Index("idx_mail_outbox_due", ["status", "nextAttemptAt"])
 export class OutboxMessage {
   @PrimaryGeneratedColumn("increment")
   id: number;
@@ -21,7 +22,7 @@ export class OutboxMessage {
   @Column("text")
   html: string;
 
-  @Index()
+  @Index("idx_mail_outbox_status")
   @Column("varchar", { length: 10 })
   status: OutboxStatus;
 
@@ -39,4 +40,12 @@ export class OutboxMessage {
 
   @Column(DATETIME, { name: "sent_at", nullable: true })
   sentAt: Date | null;
+
+  /** The instance sending (or that sent) the message; see mail-dispatcher.ts. */
+  @Column("varchar", { name: "claimed_by", length: 100, nullable: true })
+  claimedBy: string | null;
+
+  /** Until when the claim holds; past it, another instance may take the message over. */
+  @Column(DATETIME, { name: "lease_until", nullable: true })
+  leaseUntil: Date | null;
 }

@@ -20,5 +20,7 @@ export async function enqueueMail(tx: EntityManager, m: MailContent): Promise<vo
     nextAttemptAt: new Date(),
     lastError: null,
     sentAt: null,
+    claimedBy: null,
+    leaseUntil: null,
   });
 }

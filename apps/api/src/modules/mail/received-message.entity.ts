@@ -22,6 +22,10 @@ export class ReceivedMessage {
   @Column("text")
   html: string;
 
+  /** The Message-ID header as sent: a message sent twice shows up twice with the same id. */
+  @Column("varchar", { name: "message_id", length: 300, nullable: true })
+  messageId: string | null;
+
   @CreateDateColumn({ name: "received_at", type: DATETIME })
   receivedAt: Date;
 }

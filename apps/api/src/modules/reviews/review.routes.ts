@@ -207,7 +207,9 @@ export function reviewQueueRoutes(ds: DataSource): RouteSpec[] {
       summary: "Studies waiting for review",
       handlers: [
         async (_req, res) => {
-          const studies = await ds.getRepository(Study).find({ where: { status: "in_review" } });
+          const studies = await ds
+            .getRepository(Study)
+            .find({ where: { status: "in_review" }, order: { id: "ASC" } });
           const items = await Promise.all(
             studies.map(async (s) => {
               const round = await ds

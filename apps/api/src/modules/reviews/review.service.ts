@@ -24,12 +24,14 @@ import { Signature } from "./signature.entity.js";
 import { roundChanges, type RoundRecord } from "./round-changes.js";
 import { roundRecords } from "./round-records.js";
 import { inTransaction } from "../../db/in-transaction.js";
+import { readAll } from "../../db/read-all.js";
 
 const activeWithRole = (tx: EntityManager, roles: string[]) =>
   tx
     .getRepository(User)
     .createQueryBuilder("u")
     .where("u.role IN (:...roles) AND u.active = :active", { roles, active: true })
+    .orderBy("u.id")
     .getMany();
 
 /** The study's status once this transaction's writes are in, for the e-mails it sends. */
@@ -171,9 +173,9 @@ export async function approve(
     .where("u.id = :id", { id: actor.user.id })
     .getOneOrFail();
   // Checked before the transaction: bcrypt is slow and must not hold the write lock.
-  reauth.check(ds, actor, "an approval signature");
+  await reauth.check(ds, actor, "an approval signature");
   const passwordOk = await verifyPassword(input.password, hashRow.passwordHash);
-  if (passwordOk) reauth.succeeded(ds, actor);
+  if (passwordOk) await reauth.succeeded(ds, actor);
   else await reauth.failed(ds, actor, "an approval signature", studyId);
   await inTransaction(ds, async (tx) => {
     const { study, round, analysis } = await loadForDecision(tx, actor, studyId);
@@ -263,10 +265,11 @@ export async function verifyApproval(
   const signature = await db.getRepository(Signature).findOne({ where: { studyId }, order: { id: "DESC" } });
   if (!signature) return { valid: false, reason: "The study has not been approved." };
   const round = await db.getRepository(ReviewRound).findOneByOrFail({ id: signature.roundId });
-  const [study, analysis] = await Promise.all([
-    db.getRepository(Study).findOneByOrFail({ id: studyId }),
-    db.getRepository(Analysis).findOneByOrFail({ id: round.analysisId }),
-  ]);
+  const [study, analysis] = await readAll(
+    db,
+    () => db.getRepository(Study).findOneByOrFail({ id: studyId }),
+    () => db.getRepository(Analysis).findOneByOrFail({ id: round.analysisId }),
+  );
   if (study.status !== "approved")
     return { valid: false, reason: `The study is ${study.status.replace("_", " ")}, not approved.` };
   const dataset = await db.getRepository(Dataset).findOneByOrFail({ id: analysis.datasetId });

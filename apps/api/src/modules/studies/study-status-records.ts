@@ -1,4 +1,5 @@
 import type { DataSource, EntityManager } from "typeorm";
+import { readAll } from "../../db/read-all.js";
 import { Analysis } from "../analyses/analysis.entity.js";
 import { Dataset } from "../datasets/dataset.entity.js";
 import { ReviewComment } from "../reviews/review-comment.entity.js";
@@ -28,21 +29,24 @@ export async function loadStatusRecords(
 ): Promise<StudyStatusRecords & { activeDatasetRow: Dataset | null }> {
   const active = await activeDataset(db, study);
   const analyses = db.getRepository(Analysis);
-  const [onActive, latest, round] = await Promise.all([
-    active
-      ? analyses.findOne({
-          where: { studyId: study.id, datasetId: active.id },
-          order: { id: "DESC" },
-          select: { id: true },
-        })
-      : null,
-    analyses.findOne({
-      where: { studyId: study.id },
-      order: { id: "DESC" },
-      select: { id: true, datasetId: true },
-    }),
-    db.getRepository(ReviewRound).findOne({ where: { studyId: study.id }, order: { round: "DESC" } }),
-  ]);
+  const [onActive, latest, round] = await readAll(
+    db,
+    () =>
+      active
+        ? analyses.findOne({
+            where: { studyId: study.id, datasetId: active.id },
+            order: { id: "DESC" },
+            select: { id: true },
+          })
+        : Promise.resolve(null),
+    () =>
+      analyses.findOne({
+        where: { studyId: study.id },
+        order: { id: "DESC" },
+        select: { id: true, datasetId: true },
+      }),
+    () => db.getRepository(ReviewRound).findOne({ where: { studyId: study.id }, order: { round: "DESC" } }),
+  );
   const versionOf = async (datasetId: number) =>
     (
       await db

@@ -5,6 +5,7 @@ import type { Env } from "../../../config/env.js";
 import { inTransaction } from "../../../db/in-transaction.js";
 import { pauseAt } from "../../../db/pause-points.js";
 import type { Actor } from "../../../http/actor.js";
+import { isDraining } from "../../../lifecycle/shutdown.js";
 import { toHttpError } from "../../../http/error-handler.js";
 import { HttpError } from "../../../http/errors.js";
 import { toPublicUser, User } from "../../users/user.entity.js";
@@ -96,8 +97,8 @@ export class AnalysisRunner {
   start(): void {
     if (this.sweeper) return;
     this.sweeper = setInterval(() => {
-      // A data source closed under a running timer (tests, shutdown) has nothing to sweep.
-      if (this.ds.isInitialized) void this.sweepOnce().catch(logSweepError);
+      // A draining instance takes no new work; a closed data source (tests) has nothing to sweep.
+      if (this.ds.isInitialized && !isDraining()) void this.sweepOnce().catch(logSweepError);
     }, this.settings.sweepMs);
     this.sweeper.unref();
   }
