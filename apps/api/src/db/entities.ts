@@ -1,3 +1,4 @@
+import { SignInThrottleCounter } from "../auth/sign-in-throttle-counter.entity.js";
 import { Analysis } from "../modules/analyses/analysis.entity.js";
 import { AnalysisRun } from "../modules/analyses/runs/analysis-run.entity.js";
 import { AuditEvent } from "../modules/audit/audit-event.entity.js";
@@ -30,5 +31,6 @@ export const entities = [
   OutboxMessage,
   ReceivedMessage,
   Invitation,
+  SignInThrottleCounter,
   OrganizationSettings,
 ];

@@ -47,11 +47,11 @@ async function indexNames(): Promise<string[]> {
   const rows = isPostgres(ds)
     ? await sql<{ name: string }>(
         ds,
-        `SELECT indexname AS name FROM pg_indexes WHERE schemaname = 'public' AND indexname LIKE 'idx_%'`,
+        `SELECT indexname AS name FROM pg_indexes WHERE schemaname = 'public' AND (indexname LIKE 'idx_%' OR indexname LIKE 'uq_%')`,
       )
     : await sql<{ name: string }>(
         ds,
-        `SELECT name FROM sqlite_master WHERE type = 'index' AND name LIKE 'idx_%'`,
+        `SELECT name FROM sqlite_master WHERE type = 'index' AND (name LIKE 'idx_%' OR name LIKE 'uq_%')`,
       );
   return rows.map((r) => r.name).sort();
 }
@@ -80,6 +80,8 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
     }
   });
 
+  // Named indexes only (idx_…, uq_…): each driver names the ones behind UNIQUE columns its own way.
+  // A migration that adds an index adds its name here, and both suites then check it.
   it("has the same named indexes and immutability triggers", async () => {
     expect(await indexNames()).toEqual([
       "idx_analyses_study",
@@ -89,11 +91,13 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
       "idx_audit_events_study_id",
       "idx_datasets_study_version",
       "idx_invitations_email",
+      "idx_mail_outbox_due",
       "idx_mail_outbox_status",
       "idx_review_replies_comment",
       "idx_review_rounds_study_round",
       "idx_sessions_expires_at",
       "idx_sessions_user_id",
+      "idx_sign_in_throttle_reset_at",
       "idx_studies_owner",
     ]);
     // PostgreSQL adds statement triggers refusing TRUNCATE (SQLite has no TRUNCATE); left out here.

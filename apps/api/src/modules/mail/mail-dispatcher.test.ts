@@ -94,36 +94,15 @@ describe("the mail outbox shared by several instances", () => {
   });
 
   it("on stop, finishes the message being sent and gives back the rest of its claims", async () => {
-    // A mail server that takes 300 ms to accept each message, so the stop lands mid-batch.
-    const accepted: string[] = [];
-    let receiving = () => {};
-    const firstMessageArrives = new Promise<void>((r) => (receiving = r));
-    const slow = new SMTPServer({
-      authOptional: true,
-      disabledCommands: ["STARTTLS"],
-      logger: false,
-      onData(stream, _session, callback) {
-        let body = "";
-        receiving();
-        stream.on("data", (c: Buffer) => (body += c.toString()));
-        stream.on("end", () =>
-          setTimeout(() => {
-            accepted.push(/^Subject: (.*)$/m.exec(body)?.[1] ?? "");
-            callback();
-          }, 300),
-        );
-      },
-    });
-    await new Promise<void>((r) => slow.listen(0, "127.0.0.1", () => r()));
-    const { port } = slow.server.address() as { port: number };
+    const slow = await slowMailServer(300);
     try {
       await enqueue(3, "stop");
-      const leaving = new MailDispatcher(a, `smtp://127.0.0.1:${port}`, FROM);
+      const leaving = new MailDispatcher(a, slow.url, FROM);
       const run = leaving.kick();
-      await firstMessageArrives;
+      await slow.firstMessageArrives;
       await leaving.stop();
       await run;
-      expect(accepted).toEqual(["stop 0"]);
+      expect(slow.accepted).toEqual(["stop 0"]);
       expect((await outbox()).map((r) => [r.subject, r.status, r.claimedBy, r.leaseUntil])).toEqual([
         ["stop 0", "sent", leaving.instanceId, null],
         ["stop 1", "pending", null, null],
@@ -138,7 +117,61 @@ describe("the mail outbox shared by several instances", () => {
       await leaving.kick();
       expect(await a.getRepository(OutboxMessage).countBy({ status: "pending" })).toBe(1);
     } finally {
-      await new Promise<void>((r) => slow.close(() => r()));
+      await slow.close();
+    }
+  });
+
+  it("stops waiting for a send that takes too long, keeping that one message's claim", async () => {
+    const slow = await slowMailServer(1500);
+    try {
+      await enqueue(2, "hung");
+      const leaving = new MailDispatcher(a, slow.url, FROM);
+      const run = leaving.kick();
+      await slow.firstMessageArrives;
+      await leaving.stop(100);
+      // Given back, the message being sent could go out from two instances at once: it stays claimed.
+      expect((await outbox()).map((r) => [r.subject, r.status, r.claimedBy])).toEqual([
+        ["hung 0", "pending", leaving.instanceId],
+        ["hung 1", "pending", null],
+      ]);
+      await run;
+      expect((await outbox()).map((r) => [r.subject, r.status])).toEqual([
+        ["hung 0", "sent"],
+        ["hung 1", "pending"],
+      ]);
+    } finally {
+      await slow.close();
     }
   });
 });
+
+/** A mail server that takes `delayMs` to accept each message, so a stop can land mid-send. */
+async function slowMailServer(delayMs: number) {
+  const accepted: string[] = [];
+  let receiving = () => {};
+  const firstMessageArrives = new Promise<void>((r) => (receiving = r));
+  const server = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ["STARTTLS"],
+    logger: false,
+    onData(stream, _session, callback) {
+      let body = "";
+      receiving();
+      stream.on("data", (c: Buffer) => (body += c.toString()));
+      stream.on("end", () =>
+        setTimeout(() => {
+          accepted.push(/^Subject: (.*)$/m.exec(body)?.[1] ?? "");
+          callback();
+        }, delayMs),
+      );
+    },
+  });
+  await new Promise<void>((r) => server.listen(0, "127.0.0.1", () => r()));
+  const { port } = server.server.address() as { port: number };
+  return {
+    url: `smtp://127.0.0.1:${port}`,
+    accepted,
+    firstMessageArrives,
+    close: () => new Promise<void>((r) => server.close(() => r())),
+  };
+}

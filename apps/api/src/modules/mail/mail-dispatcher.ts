@@ -42,6 +42,8 @@ export class MailDispatcher {
   private running: Promise<void> | null = null;
   private timer: NodeJS.Timeout | null = null;
   private stopping = false;
+  /** The message handed to the mail server right now, if any. */
+  private sendingId: number | null = null;
   private readonly leaseMs: number;
 
   constructor(
@@ -71,13 +73,17 @@ export class MailDispatcher {
   }
 
   /**
-   * Stops the loop, lets the message being sent finish, and gives back the claims not yet sent,
-   * so another instance sends them at once instead of after the lease.
+   * Stops the loop, lets the message being sent finish (waiting at most `waitMs`), and gives back
+   * the claims not yet sent, so another instance sends them at once instead of after the lease.
+   * A message still being sent after the wait keeps its claim: released, another instance could
+   * send it at the same time; kept, it is sent again only if this one never marks it sent.
    */
-  async stop(): Promise<void> {
+  async stop(waitMs = 10_000): Promise<void> {
     this.stopping = true;
     if (this.timer) clearInterval(this.timer);
-    await this.running;
+    let timer: NodeJS.Timeout | undefined;
+    await Promise.race([this.running, new Promise((r) => (timer = setTimeout(r, waitMs)))]);
+    clearTimeout(timer);
     await this.releaseClaims().catch((e: unknown) => this.report("giving back claims", e));
   }
 
@@ -86,7 +92,8 @@ export class MailDispatcher {
    * reported and the next run tries again (callers fire and forget).
    */
   kick(): Promise<void> {
-    if (this.stopping) return Promise.resolve();
+    // Once stopping, nothing new starts; a caller still joins a send under way.
+    if (this.stopping) return this.running ?? Promise.resolve();
     this.running ??= this.sendDue()
       .catch((e: unknown) => this.report("sending queued mail", e))
       .finally(() => {
@@ -104,8 +111,8 @@ export class MailDispatcher {
     const { affected } = await runSql(
       this.ds,
       `UPDATE "mail_outbox" SET "claimed_by" = NULL, "lease_until" = NULL
-       WHERE "claimed_by" = :me AND "status" = 'pending'`,
-      { me: this.instanceId },
+       WHERE "claimed_by" = :me AND "status" = 'pending' AND "id" <> :sending`,
+      { me: this.instanceId, sending: this.sendingId ?? 0 },
     );
     return affected;
   }
@@ -151,6 +158,7 @@ export class MailDispatcher {
       for (const m of claimed) {
         if (this.stopping) return; // the rest are given back by stop()
         if (!(await this.renew(m))) continue;
+        this.sendingId = m.id;
         try {
           if (!this.transport) throw new Error("no SMTP_URL is configured");
           await this.transport.sendMail({
@@ -161,19 +169,18 @@ export class MailDispatcher {
             html: m.html,
             messageId: outboxMessageId(m, this.from),
           });
-          await repo.update(
-            { id: m.id, claimedBy: this.instanceId },
-            {
-              status: "sent",
-              sentAt: new Date(),
-              attempts: m.attempts + 1,
-              lastError: null,
-              leaseUntil: null,
-            },
-          );
         } catch (e) {
           await this.recordFailure(m, e);
+          continue;
+        } finally {
+          this.sendingId = null;
         }
+        // If this write fails the message keeps its claim and is sent again once the lease runs
+        // out: at least once, never lost.
+        await repo.update(
+          { id: m.id, claimedBy: this.instanceId },
+          { status: "sent", sentAt: new Date(), attempts: m.attempts + 1, lastError: null, leaseUntil: null },
+        );
       }
       if (claimed.length < BATCH) return;
     }
