@@ -14,6 +14,7 @@ import { errorHandler, notFoundHandler } from "./http/error-handler.js";
 import { HttpError } from "./http/errors.js";
 import { mountRoutes, type MountedRoute } from "./http/route-table.js";
 import { analysisRoutes } from "./modules/analyses/analysis.routes.js";
+import { AnalysisRunner, runSettingsFrom } from "./modules/analyses/runs/analysis-runner.js";
 import { auditRoutes } from "./modules/audit/audit.routes.js";
 import { authRoutes } from "./modules/auth/auth.routes.js";
 import { configRoutes } from "./modules/config/config.routes.js";
@@ -42,6 +43,8 @@ export interface BuiltApp {
   app: express.Express;
   routes: MountedRoute[];
   sessionStore: TypeormSessionStore;
+  /** Analysis runs: started here; on shutdown call `stopSweeping()`, then `releaseClaims()` once requests end. */
+  analysisRuns: AnalysisRunner;
 }
 
 /** Builds the Express app around an open data source; server.ts listens, tests use supertest. */
@@ -51,6 +54,8 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
     memoryMb: env.WORKER_MEMORY_MB,
     threads: env.TASK_WORKER_THREADS,
   });
+  const analysisRuns = new AnalysisRunner(ds, runSettingsFrom(env));
+  analysisRuns.start();
   const app = express();
   app.disable("x-powered-by");
   if (env.TRUST_PROXY) app.set("trust proxy", 1);
@@ -124,7 +129,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
     ...mountRoutes(api, "/auth", authRoutes(pp, ds, env, sessionStore)),
     ...mountRoutes(api, "/studies", studyRoutes(ds)),
     ...mountRoutes(api, "/studies", datasetRoutes(ds, env)),
-    ...mountRoutes(api, "/studies", analysisRoutes(ds)),
+    ...mountRoutes(api, "/studies", analysisRoutes(ds, analysisRuns)),
     ...mountRoutes(api, "/studies", studyReviewRoutes(ds, env)),
     ...mountRoutes(api, "/studies", reportRoutes(ds)),
     ...mountRoutes(api, "/reviews", reviewQueueRoutes(ds)),
@@ -141,7 +146,7 @@ export function createApp(ds: DataSource, env: Env, services: AppServices): Buil
   serveWebApp(app, env.WEB_DIST);
   app.use(errorHandler);
   // The table records full paths, as a client sees them.
-  return { app, routes: routes.map((r) => ({ ...r, path: `/api${r.path}` })), sessionStore };
+  return { app, routes: routes.map((r) => ({ ...r, path: `/api${r.path}` })), sessionStore, analysisRuns };
 }
 
 /** A row id in the address: a whole number from 1 to 2^31 − 1, written plainly. */

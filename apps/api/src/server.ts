@@ -8,7 +8,7 @@ import { loadEnv } from "./config/env.js";
 import { openDatabase } from "./db/data-source.js";
 import { seedDemoStudies } from "./db/seeds/demo-studies.js";
 import { seedDemoUsers } from "./db/seeds/demo-users.js";
-import { isDraining, runShutdownHooks, startDraining } from "./lifecycle/shutdown.js";
+import { isDraining, onShutdown, runShutdownHooks, startDraining } from "./lifecycle/shutdown.js";
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -20,7 +20,9 @@ async function main(): Promise<void> {
     await seedDemoStudies(ds, env.demoPassword);
   }
   const services = await startServices(ds, env);
-  const { app, sessionStore } = createApp(ds, env, services);
+  const { app, sessionStore, analysisRuns } = createApp(ds, env, services);
+  // Runs this instance still holds when requests have ended are given back for another instance.
+  onShutdown("Giving back analysis runs", () => analysisRuns.stop().then(() => undefined));
 
   // Responses in flight when draining begins, so they can be told to close their connection.
   const inFlight = new Set<http.ServerResponse>();

@@ -75,3 +75,23 @@ describe("settings for several instances and shutdown (loadEnv)", () => {
     );
   });
 });
+
+describe("analysis run settings (loadEnv)", () => {
+  it("defaults the lease, renewal, sweep and attempts, and refuses a renewal longer than half the lease", () => {
+    const env = loadEnv({ NODE_ENV: "test" });
+    expect([
+      env.ANALYSIS_RUN_LEASE_SECONDS,
+      env.ANALYSIS_RUN_RENEW_SECONDS,
+      env.ANALYSIS_RUN_SWEEP_SECONDS,
+      env.ANALYSIS_RUN_MAX_ATTEMPTS,
+      env.ANALYSIS_RUN_SWEEP_CONCURRENCY,
+    ]).toEqual([30, 10, 3, 3, 2]);
+    // One late renewal must not let another instance take a run that is still computing.
+    expect(() =>
+      loadEnv({ NODE_ENV: "test", ANALYSIS_RUN_LEASE_SECONDS: "10", ANALYSIS_RUN_RENEW_SECONDS: "6" }),
+    ).toThrow(/ANALYSIS_RUN_RENEW_SECONDS: 6 must be at most half of ANALYSIS_RUN_LEASE_SECONDS \(10\)/);
+    expect(() => loadEnv({ NODE_ENV: "test", ANALYSIS_RUN_MAX_ATTEMPTS: "0" })).toThrow(
+      /ANALYSIS_RUN_MAX_ATTEMPTS/,
+    );
+  });
+});

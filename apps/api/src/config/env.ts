@@ -18,6 +18,23 @@ const flag = z
   .optional()
   .transform((v) => v === "1" || v === "true");
 
+/**
+ * Analysis runs are rows an instance claims for a lease it renews while the run computes; a run
+ * whose lease lapsed (its instance died) is taken up by another instance's sweeper.
+ */
+const analysisRunSettings = {
+  /** How long a claim holds without renewal; another instance takes the run up after it. */
+  ANALYSIS_RUN_LEASE_SECONDS: z.coerce.number().int().min(2).max(3600).default(30),
+  /** How often a running instance renews its leases; must be well under the lease. */
+  ANALYSIS_RUN_RENEW_SECONDS: z.coerce.number().positive().max(1200).default(10),
+  /** How often every instance looks for queued runs and runs whose lease lapsed. */
+  ANALYSIS_RUN_SWEEP_SECONDS: z.coerce.number().positive().max(600).default(3),
+  /** Claims of one run before it is marked failed (a run that keeps killing its instance stops). */
+  ANALYSIS_RUN_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(20).default(3),
+  /** Runs one instance's sweeper computes at a time (requests run their own as they arrive). */
+  ANALYSIS_RUN_SWEEP_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(2),
+};
+
 const schema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
@@ -67,6 +84,7 @@ const schema = z.object({
   WEB_DIST: z.string().default(path.join(repoRoot, "apps", "web", "dist")),
   /** The API tests' database: each test app gets a fresh SQLite :memory: database, or a fresh PostgreSQL one. */
   WAYMARK_TEST_DB: z.enum(["sqlite", "postgres"]).default("sqlite"),
+  ...analysisRunSettings,
 });
 
 export type DatabaseDriver = "sqlite" | "postgres";
@@ -105,6 +123,11 @@ export function loadEnv(
   if (purpose === "server" && !throwaway && !env.SESSION_SECRET) {
     throw new Error(
       "Invalid configuration:\n  SESSION_SECRET: required outside demo mode (16+ random characters, e.g. from `openssl rand -hex 32`); for a demo with throwaway data, start with WAYMARK_DEMO=1 (`npm run demo`)",
+    );
+  }
+  if (purpose === "server" && env.ANALYSIS_RUN_RENEW_SECONDS * 2 > env.ANALYSIS_RUN_LEASE_SECONDS) {
+    throw new Error(
+      `Invalid configuration:\n  ANALYSIS_RUN_RENEW_SECONDS: ${env.ANALYSIS_RUN_RENEW_SECONDS} must be at most half of ANALYSIS_RUN_LEASE_SECONDS (${env.ANALYSIS_RUN_LEASE_SECONDS}), so one late renewal does not lose a running analysis to another instance`,
     );
   }
   const database: DatabaseLocation = env.DATABASE_URL

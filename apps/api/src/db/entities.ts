@@ -1,5 +1,6 @@
 import { SignInThrottleCounter } from "../auth/sign-in-throttle-counter.entity.js";
 import { Analysis } from "../modules/analyses/analysis.entity.js";
+import { AnalysisRun } from "../modules/analyses/runs/analysis-run.entity.js";
 import { AuditEvent } from "../modules/audit/audit-event.entity.js";
 import { Dataset } from "../modules/datasets/dataset.entity.js";
 import { Invitation } from "../modules/invitations/invitation.entity.js";
@@ -21,6 +22,7 @@ export const entities = [
   Study,
   Dataset,
   Analysis,
+  AnalysisRun,
   AuditEvent,
   ReviewRound,
   ReviewComment,

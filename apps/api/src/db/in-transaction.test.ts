@@ -63,19 +63,21 @@ describe.skipIf(ENTITY_DRIVER !== "postgres")(
     it("runs overlapping transactions at once on their own connections, each committed whole", async () => {
       const { ds } = await openTestDatabase();
       expect(isPostgres(ds)).toBe(true);
-      let open = 0;
-      let mostOpen = 0;
+      // Each waits (up to 5 s) until all three are open: with a queue they never would be.
+      let started = 0;
+      let allStarted!: () => void;
+      const together = new Promise<void>((r) => (allStarted = r));
+      const sawAll: boolean[] = [];
       const work = (label: string) =>
         inTransaction(ds, async (tx) => {
-          mostOpen = Math.max(mostOpen, ++open);
           await insert(tx, `${label} start`);
-          await pause(20);
+          if (++started === 3) allStarted();
+          sawAll.push(await Promise.race([together.then(() => true), pause(5000).then(() => false)]));
           await insert(tx, `${label} end`);
-          open--;
         });
       await Promise.all(["a", "b", "c"].map(work));
       // No queue: the three were open together, and each left both of its rows.
-      expect(mostOpen).toBe(3);
+      expect(sawAll).toEqual([true, true, true]);
       expect((await summaries(ds)).sort()).toEqual([
         "a end",
         "a start",
@@ -101,7 +103,7 @@ describe.skipIf(ENTITY_DRIVER !== "postgres")(
       const first = inTransaction(ds, async (tx) => {
         await lockRowForWrite(tx, "users", user!.id);
         firstHasLock();
-        await pause(100);
+        await pause(300); // long enough that, without the lock, the second would read the old name
         await sql(tx, `UPDATE users SET display_name = 'B' WHERE id = :id`, { id: user!.id });
       });
       await locked;

@@ -85,6 +85,8 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
   it("has the same named indexes and immutability triggers", async () => {
     expect(await indexNames()).toEqual([
       "idx_analyses_study",
+      "idx_analysis_runs_due",
+      "idx_analysis_runs_study",
       "idx_audit_events_action",
       "idx_audit_events_actor_id",
       "idx_audit_events_at",
@@ -99,6 +101,7 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
       "idx_sessions_user_id",
       "idx_sign_in_throttle_reset_at",
       "idx_studies_owner",
+      "uq_analysis_runs_analysis",
     ]);
     // PostgreSQL adds statement triggers refusing TRUNCATE (SQLite has no TRUNCATE); left out here.
     expect(await triggerNames()).toEqual([

@@ -12,7 +12,8 @@ import { readStoredInvariants } from "./stored-invariants.js";
 
 /**
  * Kills the real server process with SIGKILL in the middle of a large upload and of an
- * analysis, restarts it on the same file and checks nothing half-written survived. To land the
+ * analysis, restarts it on the same file and checks nothing half-written survived, and that the
+ * analysis run the kill cut off is taken up again by the restarted server. To land the
  * kill while the request is writing, not merely parsing or computing, the test empties the WAL
  * first and kills as soon as it grows (a 10 MB dataset spills pages into the WAL before its
  * commit). Whether the kill then falls before or after the commit varies with the machine, so
@@ -45,13 +46,15 @@ function emptyWal(): void {
 }
 
 /**
- * Sends a request and SIGKILLs the server once the WAL holds at least `walAtLeast` bytes, or
- * after `giveUpMs` if it never does; reports when the kill fell and how far the request got.
+ * Sends a request and SIGKILLs the server once the WAL grew by at least `walAtLeast` bytes since
+ * `armed()` first held (at once by default), or after `giveUpMs` if it never does; reports when
+ * the kill fell and how far the request got.
  */
 async function killWhileWriting(
   send: () => Promise<Response>,
   walAtLeast: number,
   giveUpMs: number,
+  armed: () => boolean = () => true,
 ): Promise<string> {
   emptyWal();
   let answered = false;
@@ -60,11 +63,40 @@ async function killWhileWriting(
     (e: unknown) => `cut off (${e instanceof Error ? e.message : String(e)})`,
   );
   const t0 = performance.now();
-  while (walBytes() < walAtLeast && !answered && performance.now() - t0 < giveUpMs)
-    await new Promise((r) => setTimeout(r, 2));
+  const waiting = () => !answered && performance.now() - t0 < giveUpMs;
+  while (!armed() && waiting()) await new Promise((r) => setTimeout(r, 2));
+  const from = walBytes();
+  while (walBytes() - from < walAtLeast && waiting()) await new Promise((r) => setTimeout(r, 2));
   const at = `${walBytes()} WAL bytes at ${(performance.now() - t0).toFixed(0)} ms`;
   await api.kill();
   return `killed with ${at}: ${await pending}`;
+}
+
+interface RunRow {
+  id: number;
+  status: string;
+}
+
+/** The newest analysis run, read straight from the file while the server runs. */
+function latestRun(): RunRow | undefined {
+  const db = new Database(dbPath, { readonly: true, fileMustExist: true });
+  try {
+    return db.prepare(`SELECT id, status FROM analysis_runs ORDER BY id DESC LIMIT 1`).get() as
+      RunRow | undefined;
+  } finally {
+    db.close();
+  }
+}
+
+async function runEnded(id: number): Promise<RunRow> {
+  const deadline = Date.now() + 120_000;
+  for (;;) {
+    const db = new Database(dbPath, { readonly: true, fileMustExist: true });
+    const row = db.prepare(`SELECT id, status FROM analysis_runs WHERE id = ?`).get(id) as RunRow;
+    db.close();
+    if (row.status === "done" || row.status === "failed" || Date.now() > deadline) return row;
+    await new Promise((r) => setTimeout(r, 100));
+  }
 }
 
 function expectConsistent(inv: ReturnType<typeof readStoredInvariants>): void {
@@ -164,13 +196,31 @@ describe.skipIf(ENTITY_DRIVER === "postgres")("a server killed mid-request leave
       const [first, ms] = await timed(run);
       expect(first.status, await first.text()).toBe(201);
 
-      // Waiting for the WAL's 32-byte header plus one whole frame (24 + 4096 bytes) puts this kill
-      // inside the result's write transaction or just after its commit.
-      const outcome = await killWhileWriting(run, 32 + 24 + 4096, 3 * ms);
+      // The request first records its run (analysis_runs), then computes. Waiting for that row and
+      // then for one more whole WAL frame (24 + 4096 bytes) puts this kill inside the result's
+      // write transaction or just after its commit.
+      const lastRun = latestRun()?.id ?? 0;
+      const outcome = await killWhileWriting(run, 24 + 4096, 3 * ms, () => (latestRun()?.id ?? 0) > lastRun);
       console.log(`analysis of ${ROWS} values took ${ms.toFixed(0)} ms; ${outcome}`);
       expectConsistent(readStoredInvariants(dbPath));
+      const analysesBeforeKill = readStoredInvariants(dbPath).analysisIds.length;
+      const killed = latestRun()!;
+      expect(killed.id).toBeGreaterThan(lastRun);
+      // The killed instance's lease would lapse within 30 s; the test moves it into the past.
+      const db = new Database(dbPath);
+      db.prepare(`UPDATE analysis_runs SET lease_until = '2000-01-01 00:00:00.000' WHERE id = ?`).run(
+        killed.id,
+      );
+      db.close();
 
       await restart();
+      // A run cut off before its commit is taken up by the restarted server's sweeper and stores
+      // one analysis; a run that committed before the kill is left as it is.
+      const ended = await runEnded(killed.id);
+      expect(ended.status).toBe("done");
+      expect(readStoredInvariants(dbPath).analysisIds.length).toBe(
+        analysesBeforeKill + (killed.status === "done" ? 0 : 1),
+      );
       const health = await analyst.request("GET", "/api/health");
       expect(health.status).toBe(200);
       const before = readStoredInvariants(dbPath).analysisIds.length;

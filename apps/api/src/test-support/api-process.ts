@@ -42,7 +42,7 @@ export interface ApiProcess {
 /**
  * Starts the real server from its TypeScript sources (tsx, so no build is needed) on a given
  * database file or PostgreSQL URL, and resolves once /api/health answers. The environment is given in full rather
- * than inherited, so the developer's own settings cannot leak in.
+ * than inherited, so the developer's own settings cannot leak in; `extraEnv` adds settings a test needs.
  */
 export async function startApi(
   databasePath: string,

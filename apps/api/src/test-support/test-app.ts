@@ -27,6 +27,7 @@ export async function makeTestApp(opts: { demo?: boolean; uploadLimitMb?: number
   const built = createApp(ds, env, services);
   open.push({
     stop: async () => {
+      built.analysisRuns.stopSweeping();
       await services.stop();
       // A send already under way finishes before its database goes (kick() joins a run in flight).
       await services.mail.kick().catch(() => undefined);

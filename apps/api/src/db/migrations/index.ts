@@ -7,6 +7,7 @@ import { CreateReviewReplies1764700000001 } from "./1764700000001-create-review-
 import { PosthocMethodIds1764806400000 } from "./1764806400000-posthoc-method-ids.js";
 import { CreateSignInThrottle1764900000000 } from "./1764900000000-create-sign-in-throttle.js";
 import { MailOutboxClaims1764900000001 } from "./1764900000001-mail-outbox-claims.js";
+import { CreateAnalysisRuns1764900000100 } from "./1764900000100-create-analysis-runs.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   PosthocMethodIds1764806400000,
   CreateSignInThrottle1764900000000,
   MailOutboxClaims1764900000001,
+  CreateAnalysisRuns1764900000100,
 ];

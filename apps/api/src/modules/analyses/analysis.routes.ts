@@ -7,11 +7,12 @@ import { Dataset } from "../datasets/dataset.entity.js";
 import { loadReadableStudy } from "../studies/study.access.js";
 import { Analysis } from "./analysis.entity.js";
 import { runAnalysisSchema } from "./analysis.schema.js";
-import { loadAnalysis, presentAnalysis, runAnalysis } from "./analysis.service.js";
+import { loadAnalysis, presentAnalysis } from "./analysis.service.js";
+import type { AnalysisRunner } from "./runs/analysis-runner.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
 
-export function analysisRoutes(ds: DataSource): RouteSpec[] {
+export function analysisRoutes(ds: DataSource, runs: AnalysisRunner): RouteSpec[] {
   const versionOf = async (datasetId: number) =>
     (
       await ds
@@ -26,8 +27,8 @@ export function analysisRoutes(ds: DataSource): RouteSpec[] {
       summary: "Run the locked plan on a dataset version and store the result",
       handlers: [
         async (req, res) => {
-          const a = await runAnalysis(
-            ds,
+          // A run row this instance claims and computes; it outlives this instance if it dies.
+          const a = await runs.request(
             actorOf(req),
             Number(req.params.id),
             parseBody(runAnalysisSchema, req.body),
