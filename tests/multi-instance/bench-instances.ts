@@ -11,7 +11,7 @@
 //
 // How the cores are shared (see CPU_PLAN below): with 2 cores, each instance is pinned to a core
 // of its own (taskset), while PostgreSQL, HAProxy and this load generator float over both; with
-// one instance, it has core 0 and the rest float the same way.
+// one instance, it has core 0 and the rest float the same way. BENCH_PIN=0 leaves all to the scheduler.
 import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -33,7 +33,8 @@ const GROUP_SIZE = Number(process.env.BENCH_GROUP_SIZE ?? 50);
 const STUDIES = 5;
 const cores = os.availableParallelism();
 /** Which CPUs each instance is pinned to; undefined leaves the scheduler free (one core, or taskset missing). */
-const pin = (i: number) => (cores >= 2 ? String(i % cores) : undefined);
+const pinned = cores >= 2 && process.env.BENCH_PIN !== "0";
+const pin = (i: number) => (pinned ? String(i % cores) : undefined);
 
 /** CPU seconds a process has used so far (user + system, from /proc), or null where /proc is missing. */
 function cpuSeconds(pid: number | undefined): number | null {
@@ -222,8 +223,9 @@ const figures = {
     proxy: "HAProxy with deploy/haproxy.cfg (round robin, readiness checks)",
     server:
       "node apps/api/dist/server.js, NODE_ENV=production, WAYMARK_DEMO=1, one analysis worker thread per instance",
-    cpuPlan:
-      cores >= 2
+    cpuPlan: !pinned
+      ? "no pinning (BENCH_PIN=0 or one core): the scheduler shares the cores among instances, PostgreSQL, HAProxy and the load generator"
+      : cores >= 2
         ? "each instance pinned to its own core with taskset (api1: core 0, api2: core 1); PostgreSQL, HAProxy and the load generator unpinned, sharing both cores"
         : "one core: everything shares it",
     connections: CONNECTIONS,
