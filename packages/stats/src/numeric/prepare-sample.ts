@@ -3,7 +3,7 @@ import type { CentredGroup, CentredSample, CentringMethod, SampleInput } from ".
 import { parseDecimal, type DecimalParse } from "./parse-decimal.js";
 import { parseDecimalBig } from "./parse-decimal-big.js";
 import { POWERS_OF_TEN, powerOfTen } from "./powers-of-ten.js";
-import { shortDecimalOfNumber } from "./short-decimal-of-number.js";
+import { shortDecimalOfNumberFrom } from "./short-decimal-of-number.js";
 
 /** Beyond this spread of decimal exponents exact centring gains nothing and BigInts get long. */
 const MAX_EXPONENT_SPREAD = 40;
@@ -79,6 +79,7 @@ export function prepareSample(input: SampleInput): CentredSample {
   let maxExp = -Infinity;
   let k = 0;
   const scratch = { mantissa: 0, exponent: 0 };
+  let lastDecimals = 0; // the previous number's decimals: the first guess for the next one
   const textScratch: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long: false };
 
   for (const g of groups) {
@@ -102,9 +103,10 @@ export function prepareSample(input: SampleInput): CentredSample {
             infinite.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
           continue;
         }
-        if (shortDecimalOfNumber(v, scratch)) {
+        if (shortDecimalOfNumberFrom(v, scratch, lastDecimals)) {
           mantissa = scratch.mantissa;
           exponent = scratch.exponent;
+          lastDecimals = -exponent;
         } else {
           // Try the shortest text: fewer than 16 digits still means a decimal was intended.
           const parsed = parseDecimal(String(v), textScratch);
