@@ -135,18 +135,27 @@ export function outliers(input: SampleInput): OutlierReport | Unavailable {
       for (let i = n - 1; i >= bottom && (sorted[i] as number) - m.mean > limit; i--)
         out.largeResidualCount++;
     }
-    // The listed values come in input order: read the data only until every list is complete.
+    // The listed values come in input order: read the data only until every list is complete
+    // (checked only when a value is listed, so the loop stays two comparisons a value).
     const complete = () =>
       out.extreme.length >= Math.min(out.extremeCount, MAX_LISTED_OUTLIERS) &&
       out.mild.length >= Math.min(out.mildCount, MAX_LISTED_OUTLIERS) &&
       out.largeResidual.length >= Math.min(out.largeResidualCount, MAX_LISTED_OUTLIERS);
+    const mean = m.mean;
+    const checkResiduals = scale > 0;
     for (let i = 0; i < n && !complete(); i++) {
+      for (; i < n; i++) {
+        const x = centred[i] as number;
+        const e = x - mean;
+        if (x < lowMild || x > highMild || (checkResiduals && (e > limit || e < -limit))) break;
+      }
+      if (i === n) break;
       const x = centred[i] as number;
       if (mildSide(x)) {
-        const r = scale > 0 ? (x - m.mean) / scale : 0;
+        const r = scale > 0 ? (x - mean) / scale : 0;
         flag(extremeSide(x) ? out.extreme : out.mild, i, r);
       }
-      if (isLargeResidual(x)) flag(out.largeResidual, i, (x - m.mean) / scale);
+      if (isLargeResidual(x)) flag(out.largeResidual, i, (x - mean) / scale);
     }
     totalMild += out.mildCount;
     totalExtreme += out.extremeCount;

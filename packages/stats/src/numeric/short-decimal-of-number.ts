@@ -55,7 +55,10 @@ export function shortDecimalOfNumberFrom(
   if (s0 > 0 && s0 <= 22) {
     const p = POWERS_OF_TEN[s0] as number;
     const m = Math.round(x * p);
-    if (m % 10 !== 0 && Math.abs(m) <= MAX_FAST_MANTISSA && m / p === x) {
+    // m not a multiple of 10, tested without the slow remainder of a double: m·0.1 rounds to
+    // the whole number m/10 exactly when m is a multiple (|m| < 2^52 keeps the error far
+    // below one half), and lies at least 0.1 away from one otherwise.
+    if (Math.abs(m) <= MAX_FAST_MANTISSA && m / p === x && Math.round(m * 0.1) * 10 !== m) {
       out.mantissa = m;
       out.exponent = -s0;
       return true;
