@@ -65,7 +65,8 @@ export function prepareSample(input: SampleInput): CentredSample {
   for (const g of groups) total += g.values.length;
   const mantissas = new Float64Array(total);
   const exponents = new Int32Array(total);
-  const kinds = new Uint8Array(total);
+  // Kinds other than SHORT are rare: the array is made when the first one appears.
+  let kinds: Uint8Array | undefined;
   const sizes: number[] = [];
   const missingCounts: number[] = [];
   const keptRows: (number[] | undefined)[] = [];
@@ -77,6 +78,7 @@ export function prepareSample(input: SampleInput): CentredSample {
   let anyBinary = false;
   let minExp = Infinity;
   let maxExp = -Infinity;
+  let maxMantissa = 0; // largest |mantissa| of the decimal values
   let k = 0;
   const scratch = { mantissa: 0, exponent: 0 };
   let lastDecimals = 0; // the previous number's decimals: the first guess for the next one
@@ -143,10 +145,12 @@ export function prepareSample(input: SampleInput): CentredSample {
       }
       mantissas[k] = mantissa;
       exponents[k] = exponent;
-      kinds[k] = kind;
+      if (kind !== SHORT) (kinds ??= new Uint8Array(total))[k] = kind;
       if (kind === LONG) anyLong = true;
       if (kind === BINARY) anyBinary = true;
       else if (mantissa !== 0) {
+        const a = Math.abs(mantissa);
+        if (a > maxMantissa) maxMantissa = a;
         if (exponent < minExp) minExp = exponent;
         if (exponent > maxExp) maxExp = exponent;
       }
@@ -174,7 +178,9 @@ export function prepareSample(input: SampleInput): CentredSample {
   let method: CentringMethod = "scaled-integer";
   if (anyBinary || maxExp - minExp > MAX_EXPONENT_SPREAD || minExp < -300) method = "binary";
   else if (anyLong) method = "big-integer";
-  else {
+  else if (!(maxExp - minExp <= 22 && maxMantissa * (POWERS_OF_TEN[maxExp - minExp] as number) < 2 ** 53)) {
+    // Only when the largest mantissa at the largest shift might not fit is each value checked
+    // (rounding is monotone, so that bound covers every value).
     const P = POWERS_OF_TEN;
     for (let i = 0; i < k; i++) {
       const m = mantissas[i] as number;
@@ -221,7 +227,7 @@ export function prepareSample(input: SampleInput): CentredSample {
     for (let i = 0; i < k; i++) {
       const t = texts[i];
       const b =
-        kinds[i] === LONG && t !== undefined
+        kinds?.[i] === LONG && t !== undefined
           ? parseDecimalBig(t)
           : { mantissa: BigInt(mantissas[i] as number), exponent: exponents[i] as number };
       exact.push(b);
@@ -234,7 +240,7 @@ export function prepareSample(input: SampleInput): CentredSample {
     offset = Number(`${C}e${e}`);
   } else {
     const value = (i: number): number => {
-      if (kinds[i] === BINARY) return mantissas[i] as number;
+      if (kinds?.[i] === BINARY) return mantissas[i] as number;
       return Number(`${mantissas[i]}e${exponents[i]}`);
     };
     offset = k > 0 ? value(pick) : 0;
