@@ -194,7 +194,9 @@ export function prepareSample(input: SampleInput): CentredSample {
   }
 
   const pick = pickOffsetIndex(mantissas, exponents, k);
-  const centredAll = new Float64Array(k);
+  // The centred values overwrite the mantissas in place (each is read before it is written,
+  // and the offset is taken first), which saves a second array of N doubles.
+  const centredAll = mantissas.subarray(0, k);
   let offset = 0;
   let offsetInteger = 0;
   const E = minExp;

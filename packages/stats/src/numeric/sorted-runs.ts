@@ -7,6 +7,11 @@ export interface SortedRuns {
 
 const cache = new WeakMap<object, SortedRuns>();
 
+/** Records runs already known for a sorted array (the counting sort finds them as it goes). */
+export function rememberRuns(sorted: Float64Array, runs: SortedRuns): void {
+  cache.set(sorted, runs);
+}
+
 /**
  * The runs of equal values in an ascending array, found once per array and shared (by
  * identity: the per-group sorted arrays from sortedValues are made once). Measured data
