@@ -109,6 +109,10 @@ export function prepareSample(input: SampleInput): CentredSample {
           mantissa = scratch.mantissa;
           exponent = scratch.exponent;
           lastDecimals = -exponent;
+        } else if (!mayHaveShortDecimal(v)) {
+          // No decimal of 15 digits or fewer rounds to v: String(v) would have 16–17 digits.
+          mantissa = v;
+          kind = BINARY;
         } else {
           // Try the shortest text: fewer than 16 digits still means a decimal was intended.
           const parsed = parseDecimal(String(v), textScratch);
@@ -264,6 +268,26 @@ export function prepareSample(input: SampleInput): CentredSample {
     start += n;
   });
   return { kind: "centred-sample", groups: out, offset, centring: method, scaleExponent: E, offsetInteger };
+}
+
+/**
+ * False only when no decimal of at most 15 significant digits rounds to x, found without
+ * building String(x) (full-precision doubles would otherwise each be printed and re-read).
+ * If x = fl(M·10^-s) with M < 10^15, then x·10^s lies within 0.25 of M, so M = round(x·10^s)
+ * and M/10^s (correctly rounded: M < 2^53, 10^s exact) gives back x. The scale s that gives
+ * M 15 digits comes from log10, which may be off by one near powers of ten, so s ± 1 are
+ * tried too. Outside 10^-7 ≤ |x| < 10^14 (scales beyond the exact powers) it answers true.
+ */
+function mayHaveShortDecimal(x: number): boolean {
+  const ax = Math.abs(x);
+  if (!(ax >= 1e-7 && ax < 1e14)) return true;
+  const s0 = 14 - Math.floor(Math.log10(ax));
+  for (let s = s0 - 1; s <= s0 + 1; s++) {
+    const p = POWERS_OF_TEN[s] as number;
+    const m = Math.round(ax * p);
+    if (m < 2 ** 53 && m / p === ax) return true;
+  }
+  return false;
 }
 
 /** Index of a value near the middle of the data (median of evenly spaced probes). */
