@@ -1,6 +1,7 @@
 import Papa from "papaparse";
 import type { GroupInput } from "../numeric/centred-sample.js";
 import type { DecimalParse } from "../numeric/parse-decimal.js";
+import { POWERS_OF_TEN } from "../numeric/powers-of-ten.js";
 import { readValue, type ValueReading } from "../input/read-value.js";
 import { CliError } from "./cli-error.js";
 
@@ -222,7 +223,16 @@ export function readGroupedCsv(text: string, groupColumn: string, outcomeColumn:
       else if (whole) (entry.wholeTexts ??= new Map()).set(entry.length, reading.text);
       exponents.add(d.exponent, whole);
     }
-    entry.push(Number(reading.text), start);
+    // m·10^e with |m| < 10^15 and an exact power of ten is one correctly rounded division
+    // (Clinger 1990), the same double Number(text) gives; other shapes go through Number.
+    const e = d.exponent;
+    const value =
+      d.long || d.mantissa === 0 || e < -22 || e > 0
+        ? Number(reading.text)
+        : e === 0
+          ? d.mantissa
+          : d.mantissa / (POWERS_OF_TEN[-e] as number);
+    entry.push(value, start);
   };
 
   if (body.indexOf('"') < 0) {
