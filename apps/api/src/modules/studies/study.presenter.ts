@@ -5,9 +5,7 @@ import { missingDesignAnswer, outOfScopeReason } from "./design.js";
 import { comparisonsOf, testPlanOf } from "./plan.js";
 import type { Study } from "./study.entity.js";
 import type { StudyStatus } from "./study-status.js";
-import type { openReviewComments } from "./study-status-records.js";
-
-type OpenReview = Awaited<ReturnType<typeof openReviewComments>>;
+import type { OpenReview } from "./study-status-records.js";
 
 function plannedFamilyWise(k: number, alpha: number, comparisons: "all-pairs" | "vs-control") {
   if (k < 2) return null;

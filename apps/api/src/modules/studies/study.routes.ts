@@ -6,7 +6,15 @@ import { parseBody } from "../../http/validate.js";
 import { loadSettings } from "../organization/organization.routes.js";
 import { loadReadableStudy } from "./study.access.js";
 import { createStudySchema, designSchema, planSchema, updateStudySchema } from "./study.schema.js";
-import { createStudy, lockPlan, saveDesign, savePlan, studyDto, updateStudy } from "./study.service.js";
+import {
+  createStudy,
+  lockPlan,
+  saveDesign,
+  savePlan,
+  studyDto,
+  studyDtos,
+  updateStudy,
+} from "./study.service.js";
 import { Study } from "./study.entity.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
@@ -32,7 +40,7 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
                   : {},
             order: { updatedAt: "DESC" },
           });
-          res.json({ studies: await Promise.all(studies.map((s) => studyDto(ds, s))) });
+          res.json({ studies: await studyDtos(ds, studies) });
         },
       ],
     },
@@ -63,7 +71,7 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       handlers: [
         async (req, res) => {
           const study = await loadReadableStudy(ds, id(req.params.id), req.user!);
-          res.json({ study: await studyDto(ds, study) });
+          res.json({ study: (await studyDtos(ds, [study]))[0] });
         },
       ],
     },
