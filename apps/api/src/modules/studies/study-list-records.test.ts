@@ -6,6 +6,7 @@ import { lockedStudy } from "../../test-support/locked-study.js";
 import { makeTestApp } from "../../test-support/test-app.js";
 import { Study } from "./study.entity.js";
 import { studyDto, studyDtos } from "./study.service.js";
+import { findStudies } from "./study-list-records.js";
 
 // The list reads many studies' records in a few queries; the study page and every write read
 // one study's records query by query. Both must give the same DTO, field by field, so the one
@@ -194,6 +195,20 @@ describe("the studies list's batched records", () => {
     const all = await t.ds.getRepository(Study).find();
     const states = new Set((await studyDtos(t.ds, all)).map((s) => s.progress.state));
     for (const s of ["approved", "in-review", "changes-requested", "plan-open"]) expect(states).toContain(s);
+  });
+
+  it("reads each role's list as the eager find does: the same studies, order, owners and lockers", async () => {
+    const analystId = (await t.ds.getRepository(Study).findOneByOrFail({ id: stages.get("draft")! })).ownerId;
+    for (const filter of [{ ownerId: analystId }, { status: "approved" as const }, {}]) {
+      const lean = await findStudies(t.ds, filter);
+      const eager = await t.ds
+        .getRepository(Study)
+        .find({ where: filter, order: { updatedAt: "DESC", id: "DESC" } });
+      expect(lean.map((s) => s.id).sort()).toEqual(eager.map((s) => s.id).sort());
+      const byId = new Map(eager.map((s) => [s.id, s]));
+      for (const s of lean) expect(s).toEqual(byId.get(s.id));
+      expect(lean.length).toBeGreaterThan(0);
+    }
   });
 
   it("serves the list through the batched path: the same studies as reading each", async () => {

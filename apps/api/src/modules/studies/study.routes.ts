@@ -15,7 +15,7 @@ import {
   studyDtos,
   updateStudy,
 } from "./study.service.js";
-import { Study } from "./study.entity.js";
+import { findStudies } from "./study-list-records.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
 const ANALYST = policy.roles("analyst");
@@ -31,15 +31,14 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       handlers: [
         async (req, res) => {
           const user = req.user!;
-          const studies = await ds.getRepository(Study).find({
-            where:
-              user.role === "analyst"
-                ? { ownerId: user.id }
-                : user.role === "writer"
-                  ? { status: "approved" }
-                  : {},
-            order: { updatedAt: "DESC" },
-          });
+          const studies = await findStudies(
+            ds,
+            user.role === "analyst"
+              ? { ownerId: user.id }
+              : user.role === "writer"
+                ? { status: "approved" }
+                : {},
+          );
           res.json({ studies: await studyDtos(ds, studies) });
         },
       ],
