@@ -38,8 +38,9 @@ const byKey = <T, K>(rows: T[], key: (r: T) => K) => {
   return m;
 };
 
-/** Which studies a list shows; the route decides by the caller's role. */
-export type StudyFilter = { ownerId: number } | { status: "approved" } | Record<string, never>;
+/** Which studies a list shows (the route decides by the caller's role), or one study by id. */
+export type StudyFilter =
+  { id: number } | { ownerId: number } | { status: "approved" } | Record<string, never>;
 
 /**
  * The studies a list shows, newest change first, with their owner and the person who locked the

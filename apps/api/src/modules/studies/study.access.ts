@@ -1,12 +1,13 @@
 import type { DataSource, EntityManager } from "typeorm";
 import { ConflictError, ForbiddenError, NotFoundError } from "../../http/errors.js";
-import { Study } from "./study.entity.js";
+import type { Study } from "./study.entity.js";
+import { findStudies } from "./study-list-records.js";
 
 type Db = DataSource | EntityManager;
 
 /** Loads a study the caller may read: analysts their own, writers approved ones, other roles any. */
 export async function loadReadableStudy(db: Db, id: number, user: Express.User): Promise<Study> {
-  const study = Number.isInteger(id) && id > 0 ? await db.getRepository(Study).findOneBy({ id }) : null;
+  const study = Number.isInteger(id) && id > 0 ? ((await findStudies(db, { id }))[0] ?? null) : null;
   if (!study) throw new NotFoundError(`There is no study ${id}.`);
   if (user.role === "analyst" && study.ownerId !== user.id)
     throw new ForbiddenError("This study belongs to another analyst.");
