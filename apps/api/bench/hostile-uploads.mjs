@@ -65,11 +65,15 @@ try {
     await call("PUT", `/api/studies/${id}/design`, {
       independence: "independent",
       scale: "continuous",
+      question: "means",
+      groupSizes: "equal",
       hasControl: "no",
       comparisons: "all-pairs",
       assignment: "randomized",
     });
-    await call("POST", `/api/studies/${id}/plan/lock`);
+    const locked = await call("POST", `/api/studies/${id}/plan/lock`);
+    if (locked.status !== 200)
+      throw new Error(`could not lock the plan: ${locked.status} ${JSON.stringify(locked.json)}`);
     return id;
   };
   const studyId = await lockedStudy("Hostile uploads");

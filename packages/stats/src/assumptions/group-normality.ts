@@ -1,6 +1,7 @@
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
+import { sortedValues } from "../numeric/sorted-values.js";
 import { formatP } from "../reporting/format.js";
 import type { CheckReading } from "./check-reading.js";
 import { SHAPIRO_WILK_MAX_N, shapiroWilk } from "./shapiro-wilk.js";
@@ -76,7 +77,11 @@ export function groupNormality(input: SampleInput, alpha = 0.05): GroupNormality
       };
     }
     const sd = Math.sqrt(m.ss / (n - 1));
-    const z = Float64Array.from(g.centred, (x) => (x - m.mean) / sd).sort();
+    // (x − mean)/sd is monotone in x, so mapping the shared sorted values gives the sorted
+    // standardized residuals without another sort (the same doubles as sorting them).
+    const sorted = sortedValues(g);
+    const z = new Float64Array(n);
+    for (let i = 0; i < n; i++) z[i] = ((sorted[i] as number) - m.mean) / sd;
     const sw = shapiroWilk(z);
     if (!sw.available) {
       return {

@@ -37,14 +37,24 @@ export function levene(input: SampleInput, center: "mean" | "median"): LeveneRes
   const sample = prepareSample(input);
   const name = center === "mean" ? "Levene's test" : "The Brown–Forsythe test";
   requireGroupSizes(sample, name, 2);
+  // The largest |x| and |x − c| are gathered in the same pass (for the rounding-noise test).
+  let maxAbs = 0;
   const deviations = sample.groups.map((g) => {
     const c = center === "mean" ? groupMoments(g).mean : quantileSorted(sortedValues(g), 0.5);
-    const d = new Float64Array(g.centred.length);
-    for (let i = 0; i < d.length; i++) d[i] = Math.abs((g.centred[i] as number) - c);
+    const x = g.centred;
+    const d = new Float64Array(x.length);
+    let top = maxAbs;
+    for (let i = 0; i < d.length; i++) {
+      const v = x[i] as number;
+      const dev = Math.abs(v - c);
+      d[i] = dev;
+      top = Math.max(top, Math.abs(v), dev);
+    }
+    maxAbs = top;
     return { name: g.name, values: d };
   });
   const result = oneWayAnova(sampleFromArrays(deviations));
-  if (result.available && withinIsRoundingNoise(result.ssWithin, result.ssTotal, sample, deviations)) {
+  if (result.available && withinIsRoundingNoise(result.ssWithin, result.ssTotal, maxAbs, sample)) {
     return {
       available: false,
       reason: `${name} is undefined: within every group the absolute deviations from the group ${center} are equal (as they always are with two values in a group), so they show no spread within groups and F would be rounding noise`,
@@ -73,23 +83,17 @@ export const LEVENE_RELATIVE_TOLERANCE = 1e-12;
 /**
  * Whether the within-group sum of squares of the deviations is zero up to rounding: relative to
  * the total, or to the error of deviations formed from centred values as large as max|x|
- * (each carries at most a few ulps of max|x|). Cost: O(N).
+ * (each carries at most a few ulps of max|x|); maxAbs is the largest |x| and |x − c|. Cost: O(k).
  */
 function withinIsRoundingNoise(
   ssWithin: number,
   ssTotal: number,
+  maxAbs: number,
   sample: { groups: readonly { centred: Float64Array }[] },
-  deviations: readonly { values: Float64Array }[],
 ): boolean {
   if (ssWithin <= LEVENE_RELATIVE_TOLERANCE * ssTotal) return true;
-  let maxAbs = 0;
   let N = 0;
-  for (const g of sample.groups) {
-    N += g.centred.length;
-    for (let i = 0; i < g.centred.length; i++) maxAbs = Math.max(maxAbs, Math.abs(g.centred[i] as number));
-  }
-  for (const d of deviations)
-    for (let i = 0; i < d.values.length; i++) maxAbs = Math.max(maxAbs, d.values[i] as number);
+  for (const g of sample.groups) N += g.centred.length;
   const noise = 16 * Number.EPSILON * maxAbs;
   return ssWithin <= N * noise * noise;
 }

@@ -58,7 +58,8 @@ export interface OutlierReport {
  * References: Tukey, J. W. (1977). Exploratory Data Analysis, ch. 2; Cook, R. D. & Weisberg,
  * S. (1982). Residuals and Influence in Regression, §2.2 (studentized residuals).
  * Example: values 1..9 and 40 in one group → 40 is beyond the 3 IQR fence (Q3 = 7.75, IQR = 4.5).
- * Cost: O(N) after the shared sorts.
+ * Cost: O(flagged values) after the shared sorts, plus reading the data in order until the
+ * listed values are found (all of it only when a flagged value comes last).
  */
 export function outliers(input: SampleInput): OutlierReport | Unavailable {
   const sample = prepareSample(input);
@@ -110,25 +111,51 @@ export function outliers(input: SampleInput): OutlierReport | Unavailable {
       if (scale > 0) item.studentizedResidual = r;
       list.push(item);
     };
-    // Plain loop without per-value allocation: this runs over every value.
     const limit = scale * STUDENTIZED_RESIDUAL_LIMIT;
-    for (let i = 0; i < n; i++) {
-      const x = centred[i] as number;
-      if (x < lowMild || x > highMild) {
-        const r = scale > 0 ? (x - m.mean) / scale : 0;
-        if (x < lowExtreme || x > highExtreme) {
-          out.extremeCount++;
-          flag(out.extreme, i, r);
-        } else {
-          out.mildCount++;
-          flag(out.mild, i, r);
-        }
-      }
+    const isLargeResidual = (x: number): boolean => {
       const e = x - m.mean;
-      if (scale > 0 && (e > limit || e < -limit)) {
+      return scale > 0 && (e > limit || e < -limit);
+    };
+    // Counts from the sorted values: x < fence and x − mean < −limit hold on a run at the
+    // bottom, x > fence and x − mean > limit on a run at the top (both monotone in x), so only
+    // the flagged values are read; a value in the bottom run is never counted again at the top.
+    const mildSide = (x: number) => x < lowMild || x > highMild;
+    const extremeSide = (x: number) => x < lowExtreme || x > highExtreme;
+    const count = (x: number) => {
+      if (extremeSide(x)) out.extremeCount++;
+      else out.mildCount++;
+    };
+    let bottom = 0;
+    while (bottom < n && (sorted[bottom] as number) < lowMild) count(sorted[bottom++] as number);
+    for (let i = n - 1; i >= bottom && (sorted[i] as number) > highMild; i--) count(sorted[i] as number);
+    if (scale > 0) {
+      bottom = 0;
+      while (bottom < n && (sorted[bottom] as number) - m.mean < -limit) bottom++;
+      out.largeResidualCount = bottom;
+      for (let i = n - 1; i >= bottom && (sorted[i] as number) - m.mean > limit; i--)
         out.largeResidualCount++;
-        flag(out.largeResidual, i, e / scale);
+    }
+    // The listed values come in input order: read the data only until every list is complete
+    // (checked only when a value is listed, so the loop stays two comparisons a value).
+    const complete = () =>
+      out.extreme.length >= Math.min(out.extremeCount, MAX_LISTED_OUTLIERS) &&
+      out.mild.length >= Math.min(out.mildCount, MAX_LISTED_OUTLIERS) &&
+      out.largeResidual.length >= Math.min(out.largeResidualCount, MAX_LISTED_OUTLIERS);
+    const mean = m.mean;
+    const checkResiduals = scale > 0;
+    for (let i = 0; i < n && !complete(); i++) {
+      for (; i < n; i++) {
+        const x = centred[i] as number;
+        const e = x - mean;
+        if (x < lowMild || x > highMild || (checkResiduals && (e > limit || e < -limit))) break;
       }
+      if (i === n) break;
+      const x = centred[i] as number;
+      if (mildSide(x)) {
+        const r = scale > 0 ? (x - mean) / scale : 0;
+        flag(extremeSide(x) ? out.extreme : out.mild, i, r);
+      }
+      if (isLargeResidual(x)) flag(out.largeResidual, i, (x - mean) / scale);
     }
     totalMild += out.mildCount;
     totalExtreme += out.extremeCount;

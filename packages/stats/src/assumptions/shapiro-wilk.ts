@@ -27,6 +27,56 @@ function poly(c: readonly number[], x: number): number {
   return r;
 }
 
+/** Coefficients by n: groups of equal size, and the per-group normality check, reuse them. */
+const coefficientCache = new Map<number, Float64Array>();
+const COEFFICIENT_CACHE_SIZE = 32;
+
+/**
+ * The Shapiro–Wilk coefficients for n values (Royston 1992): a[i] weighs the (i+1)-th
+ * largest value, for i < ⌊n/2⌋. They depend on n alone, so they are computed once per n
+ * (⌊n/2⌋ normal quantiles) and kept for the most recent sizes. Do not modify the result.
+ */
+function coefficients(n: number): Float64Array {
+  const cached = coefficientCache.get(n);
+  if (cached) return cached;
+  const half = Math.floor(n / 2);
+  // a[i] for i = 0..half-1 is the coefficient of the (i+1)-th largest value (positive).
+  const a = new Float64Array(half);
+  if (n === 3) {
+    a[0] = Math.SQRT1_2;
+  } else {
+    const m = new Float64Array(half);
+    let summ2 = 0;
+    for (let i = 0; i < half; i++) {
+      const q = normalQuantile((i + 1 - 0.375) / (n + 0.25)); // negative: lower tail scores
+      m[i] = q;
+      summ2 += q * q;
+    }
+    summ2 *= 2;
+    const ssumm2 = Math.sqrt(summ2);
+    const rsn = 1 / Math.sqrt(n);
+    const m0 = m[0] as number;
+    const a1 = poly(C1, rsn) - m0 / ssumm2;
+    let first: number;
+    let fac: number;
+    if (n > 5) {
+      const m1 = m[1] as number;
+      const a2 = -m1 / ssumm2 + poly(C2, rsn);
+      fac = Math.sqrt((summ2 - 2 * m0 * m0 - 2 * m1 * m1) / (1 - 2 * a1 * a1 - 2 * a2 * a2));
+      a[1] = a2;
+      first = 2;
+    } else {
+      fac = Math.sqrt((summ2 - 2 * m0 * m0) / (1 - 2 * a1 * a1));
+      first = 1;
+    }
+    a[0] = a1;
+    for (let i = first; i < half; i++) a[i] = -(m[i] as number) / fac;
+  }
+  if (coefficientCache.size >= COEFFICIENT_CACHE_SIZE) coefficientCache.clear();
+  coefficientCache.set(n, a);
+  return a;
+}
+
 /**
  * Shapiro–Wilk test of normality, W = (Σ aᵢ x₍ᵢ₎)² / Σ(xᵢ − x̄)², with Royston's
  * approximations: coefficients aᵢ from Blom-type normal scores mᵢ = Φ⁻¹((i − 3/8)/(n + 1/4))
@@ -62,38 +112,7 @@ export function shapiroWilk(sorted: ArrayLike<number>): ShapiroWilkResult | Unav
     };
 
   const half = Math.floor(n / 2);
-  // a[i] for i = 0..half-1 is the coefficient of the (i+1)-th largest value (positive).
-  const a = new Float64Array(half);
-  if (n === 3) {
-    a[0] = Math.SQRT1_2;
-  } else {
-    const m = new Float64Array(half);
-    let summ2 = 0;
-    for (let i = 0; i < half; i++) {
-      const q = normalQuantile((i + 1 - 0.375) / (n + 0.25)); // negative: lower tail scores
-      m[i] = q;
-      summ2 += q * q;
-    }
-    summ2 *= 2;
-    const ssumm2 = Math.sqrt(summ2);
-    const rsn = 1 / Math.sqrt(n);
-    const m0 = m[0] as number;
-    const a1 = poly(C1, rsn) - m0 / ssumm2;
-    let first: number;
-    let fac: number;
-    if (n > 5) {
-      const m1 = m[1] as number;
-      const a2 = -m1 / ssumm2 + poly(C2, rsn);
-      fac = Math.sqrt((summ2 - 2 * m0 * m0 - 2 * m1 * m1) / (1 - 2 * a1 * a1 - 2 * a2 * a2));
-      a[1] = a2;
-      first = 2;
-    } else {
-      fac = Math.sqrt((summ2 - 2 * m0 * m0) / (1 - 2 * a1 * a1));
-      first = 1;
-    }
-    a[0] = a1;
-    for (let i = first; i < half; i++) a[i] = -(m[i] as number) / fac;
-  }
+  const a = coefficients(n);
 
   // Correlation form on median-centred, range-scaled values.
   const med =

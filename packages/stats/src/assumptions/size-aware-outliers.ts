@@ -2,6 +2,7 @@ import { tQuantile } from "../distributions/t.js";
 import type { SampleInput } from "../numeric/centred-sample.js";
 import { groupMoments } from "../numeric/group-moments.js";
 import { prepareSample } from "../numeric/prepare-sample.js";
+import { sortedValues } from "../numeric/sorted-values.js";
 import { toOriginal } from "../numeric/to-original.js";
 import type { CheckReading } from "./check-reading.js";
 import { MAX_LISTED_OUTLIERS } from "./outliers.js";
@@ -63,7 +64,8 @@ export function grubbsCritical(n: number, alpha = OUTLIER_FALSE_FLAG_RATE): numb
  * Reference: Grubbs (1969), Technometrics 11, 1–21; Tukey's fences stay in `outliers` for
  * description.
  * Example: values 10, 11, 9, 10, 12, 10, 11, 9, 10, 30 → 30 flagged (z = 2.82 > 2.29 for n = 10).
- * Cost: O(N) plus one t quantile per group.
+ * Cost: O(flagged values) after the shared sorts, plus reading the data in order until the
+ * listed values are found; one t quantile per group.
  */
 export function sizeAwareOutliers(input: SampleInput): SizeAwareOutlierReport {
   const sample = prepareSample(input);
@@ -90,14 +92,16 @@ export function sizeAwareOutliers(input: SampleInput): SizeAwareOutlierReport {
     const G = grubbsCritical(n);
     const flagged: SizeAwareFlag[] = [];
     let flaggedCount = 0;
-    for (let i = 0; i < n; i++) {
+    // z is monotone in x, so the flagged values are a run at each end of the sorted values:
+    // count them there, then read the data in order only until the listed ones are found.
+    const sorted = sortedValues(g);
+    for (let i = 0; i < n && ((sorted[i] as number) - m.mean) / sd < -G; i++) flaggedCount++;
+    for (let i = n - 1; i >= 0 && ((sorted[i] as number) - m.mean) / sd > G; i--) flaggedCount++;
+    const listed = Math.min(flaggedCount, MAX_LISTED_OUTLIERS);
+    for (let i = 0; i < n && flagged.length < listed; i++) {
       const x = g.centred[i] as number;
       const z = (x - m.mean) / sd;
-      if (Math.abs(z) > G) {
-        flaggedCount++;
-        if (flagged.length < MAX_LISTED_OUTLIERS)
-          flagged.push({ value: toOriginal(sample, x), row: g.rows?.[i] ?? i + 1, z });
-      }
+      if (Math.abs(z) > G) flagged.push({ value: toOriginal(sample, x), row: g.rows?.[i] ?? i + 1, z });
     }
     const lowerFence = toOriginal(sample, m.mean - G * sd);
     const upperFence = toOriginal(sample, m.mean + G * sd);

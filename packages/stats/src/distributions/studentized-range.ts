@@ -255,6 +255,11 @@ function outer(q: number, k: number, df: number, upper: boolean): number {
   for (const step of [1, -1]) {
     let negligible = 0;
     for (let j = first + step; j >= jMin && j <= jMax; j += step) {
+      // The weight is unimodal in u with its mode at u = 0 and the inner value is at most 1,
+      // so once past the mode with the weight underflowed every further term is exactly 0.
+      // Without this stop a tail that underflows (a huge q) scanned the whole grid.
+      const u = j * h - logQ;
+      if (step * u > 0 && logWeight(u) < -745) break;
       const t = term(j);
       sum += t;
       if (sum > 0 && t <= 1e-18 * sum) {

@@ -1,3 +1,4 @@
+import { sortedRuns } from "../numeric/sorted-runs.js";
 import type { Unavailable } from "../types/group-summary.js";
 
 export type RankBiserial = { available: true; r: number; u: number } | Unavailable;
@@ -21,8 +22,10 @@ export function rankBiserial(a: readonly number[], b: readonly number[]): RankBi
 }
 
 /**
- * The same from two ascending arrays, by one merge: for each x in a, U_a gains the count of b
- * below x plus half the count equal to x. Cost: O(n_a + n_b).
+ * The same from two ascending arrays, by one merge over their runs of equal values (shared
+ * per array, see sortedRuns): each run of x in a gains (its length) × (the count of b below
+ * x plus half the count equal to x). All terms are halves of integers: the sum is exact.
+ * Cost: O(distinct values of a and b), plus O(n_a + n_b) the first time an array is seen.
  */
 export function rankBiserialSorted(a: ArrayLike<number>, b: ArrayLike<number>): RankBiserial {
   const na = a.length;
@@ -33,20 +36,21 @@ export function rankBiserialSorted(a: ArrayLike<number>, b: ArrayLike<number>): 
       reason: "The rank-biserial correlation needs at least one value in each of the two groups",
     };
   }
-  let below = 0; // first index in b with b ≥ x
-  let notAbove = 0; // first index in b with b > x
+  const ra = sortedRuns(a);
+  const rb = sortedRuns(b);
+  const bValues = rb.values;
+  const bEnds = rb.ends;
+  let bi = 0; // first run of b with value ≥ x
   let u = 0;
-  // Runs of equal x gain the same amount each; measured data repeat values often (3 decimals,
-  // 10^5 values), so one step per run. All terms are halves of integers: the sum is exact.
-  for (let i = 0; i < na;) {
-    const x = a[i] as number;
-    let j = i + 1;
-    while (j < na && a[j] === x) j++;
-    while (below < nb && (b[below] as number) < x) below++;
-    if (notAbove < below) notAbove = below;
-    while (notAbove < nb && (b[notAbove] as number) <= x) notAbove++;
-    u += (j - i) * (below + 0.5 * (notAbove - below));
-    i = j;
+  let from = 0;
+  for (let r = 0; r < ra.count; r++) {
+    const x = ra.values[r] as number;
+    const end = ra.ends[r] as number;
+    while (bi < rb.count && (bValues[bi] as number) < x) bi++;
+    const below = bi > 0 ? (bEnds[bi - 1] as number) : 0;
+    const notAbove = bi < rb.count && bValues[bi] === x ? (bEnds[bi] as number) : below;
+    u += (end - from) * (below + 0.5 * (notAbove - below));
+    from = end;
   }
   return { available: true, r: (2 * u) / (na * nb) - 1, u };
 }

@@ -168,9 +168,11 @@ const scratch: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long:
 /**
  * Reads one cell. Example: readValue(" 4.50 ") → { kind: "number", text: "4.50" };
  * readValue("NA") → { kind: "missing" }; readValue("1,234.5") → refused, "thousands-separator".
+ * For a number, `parsed` (when given) is left holding its decimal (parseDecimal's reading),
+ * so a caller that needs the mantissa and exponent does not parse the text twice.
  * Cost: O(length of the cell), and O(1) beyond MAX_VALUE_CHARS after trimming.
  */
-export function readValue(cell: string): ValueReading {
+export function readValue(cell: string, parsed: DecimalParse = scratch): ValueReading {
   const text = cell.trim();
   if (MISSING.has(text.length <= 4 ? text.toLowerCase() : text)) return { kind: "missing", text };
   if (text.length > MAX_VALUE_CHARS)
@@ -179,7 +181,7 @@ export function readValue(cell: string): ValueReading {
       "too-long",
       `${quote(text)} is ${text.length.toLocaleString("en")} characters long; a value is at most ${MAX_VALUE_CHARS}`,
     );
-  const d = parseDecimal(text, scratch);
+  const d = parseDecimal(text, parsed);
   if (d.kind === "number") {
     // Below the smallest double a non-zero value would silently read as 0.
     const magnitude = d.exponent + (d.mantissa === 0 ? 0 : Math.floor(Math.log10(Math.abs(d.mantissa))));

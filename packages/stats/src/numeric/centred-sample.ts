@@ -44,7 +44,8 @@ export interface CentredSample {
 /** What methods accept: raw groups (numbers or decimal text) or an already-prepared sample. */
 export interface GroupInput {
   readonly name: string;
-  readonly values: readonly (number | string | null | undefined)[];
+  /** Numbers or decimal text; a Float64Array (NaN = missing) when every value is a number. */
+  readonly values: readonly (number | string | null | undefined)[] | Float64Array;
   /** Optional original row numbers (e.g. CSV line numbers), used in messages and outlier lists. */
   readonly rows?: readonly number[];
 }

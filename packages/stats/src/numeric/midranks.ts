@@ -1,4 +1,5 @@
 import type { CentredSample } from "./centred-sample.js";
+import { sortedRuns } from "./sorted-runs.js";
 import { sortedValues } from "./sorted-values.js";
 
 export interface Midranks {
@@ -58,9 +59,17 @@ function byHistogram(sample: CentredSample, withRanks: boolean): Midranks | unde
   if (N === 0) return undefined;
   const range = hi - lo + 1;
   if (!(range <= HISTOGRAM_RANGE_FACTOR * N + HISTOGRAM_RANGE_FLOOR)) return undefined;
+  // Per run of equal values (shared with the rank-biserial U): one rounding per distinct value.
+  const runs = sorted.map((s) => sortedRuns(s));
   const counts = new Float64Array(range);
-  for (const s of sorted)
-    for (let i = 0; i < s.length; i++) counts[Math.round((s[i] as number) * divisor) - lo]! += 1;
+  for (const r of runs) {
+    let from = 0;
+    for (let j = 0; j < r.count; j++) {
+      const end = r.ends[j] as number;
+      counts[Math.round((r.values[j] as number) * divisor) - lo]! += end - from;
+      from = end;
+    }
+  }
   // counts → midrank per integer value, and the tie term.
   let below = 0;
   let tieSum = 0;
@@ -74,13 +83,21 @@ function byHistogram(sample: CentredSample, withRanks: boolean): Midranks | unde
   const rankSums: number[] = [];
   const ranks = withRanks ? new Float64Array(N) : undefined;
   let k = 0;
-  for (const s of sorted) {
+  // Midranks are halves of whole numbers; while N(N + 1)/2 < 2^51 every partial sum is exact,
+  // so adding a run's ranks at once gives the same number as adding them one at a time.
+  const exactSums = N * (N + 1) < 2 ** 52;
+  for (const r of runs) {
     let sum = 0;
-    for (let i = 0; i < s.length; i++) {
-      const r = counts[Math.round((s[i] as number) * divisor) - lo] as number;
-      sum += r;
-      if (ranks) ranks[k++] = r;
+    let from = 0;
+    for (let j = 0; j < r.count; j++) {
+      const end = r.ends[j] as number;
+      const rank = counts[Math.round((r.values[j] as number) * divisor) - lo] as number;
+      if (exactSums) sum += rank * (end - from);
+      else for (let t = from; t < end; t++) sum += rank;
+      if (ranks) ranks.fill(rank, k + from, k + end);
+      from = end;
     }
+    k += from;
     rankSums.push(sum);
   }
   return { rankSums, tieSum, N, ranks };

@@ -3,7 +3,7 @@ import type { CentredGroup, CentredSample, CentringMethod, SampleInput } from ".
 import { parseDecimal, type DecimalParse } from "./parse-decimal.js";
 import { parseDecimalBig } from "./parse-decimal-big.js";
 import { POWERS_OF_TEN, powerOfTen } from "./powers-of-ten.js";
-import { shortDecimalOfNumber } from "./short-decimal-of-number.js";
+import { shortDecimalOfNumberFrom } from "./short-decimal-of-number.js";
 
 /** Beyond this spread of decimal exponents exact centring gains nothing and BigInts get long. */
 const MAX_EXPONENT_SPREAD = 40;
@@ -65,7 +65,8 @@ export function prepareSample(input: SampleInput): CentredSample {
   for (const g of groups) total += g.values.length;
   const mantissas = new Float64Array(total);
   const exponents = new Int32Array(total);
-  const kinds = new Uint8Array(total);
+  // Kinds other than SHORT are rare: the array is made when the first one appears.
+  let kinds: Uint8Array | undefined;
   const sizes: number[] = [];
   const missingCounts: number[] = [];
   const keptRows: (number[] | undefined)[] = [];
@@ -77,8 +78,10 @@ export function prepareSample(input: SampleInput): CentredSample {
   let anyBinary = false;
   let minExp = Infinity;
   let maxExp = -Infinity;
+  let maxMantissa = 0; // largest |mantissa| of the decimal values
   let k = 0;
   const scratch = { mantissa: 0, exponent: 0 };
+  let lastDecimals = 0; // the previous number's decimals: the first guess for the next one
   const textScratch: DecimalParse = { kind: "missing", mantissa: 0, exponent: 0, long: false };
 
   for (const g of groups) {
@@ -102,9 +105,14 @@ export function prepareSample(input: SampleInput): CentredSample {
             infinite.push({ group: g.name, position, row: g.rows?.[position], text: String(v) });
           continue;
         }
-        if (shortDecimalOfNumber(v, scratch)) {
+        if (shortDecimalOfNumberFrom(v, scratch, lastDecimals)) {
           mantissa = scratch.mantissa;
           exponent = scratch.exponent;
+          lastDecimals = -exponent;
+        } else if (!mayHaveShortDecimal(v)) {
+          // No decimal of 15 digits or fewer rounds to v: String(v) would have 16–17 digits.
+          mantissa = v;
+          kind = BINARY;
         } else {
           // Try the shortest text: fewer than 16 digits still means a decimal was intended.
           const parsed = parseDecimal(String(v), textScratch);
@@ -141,10 +149,12 @@ export function prepareSample(input: SampleInput): CentredSample {
       }
       mantissas[k] = mantissa;
       exponents[k] = exponent;
-      kinds[k] = kind;
+      if (kind !== SHORT) (kinds ??= new Uint8Array(total))[k] = kind;
       if (kind === LONG) anyLong = true;
       if (kind === BINARY) anyBinary = true;
       else if (mantissa !== 0) {
+        const a = Math.abs(mantissa);
+        if (a > maxMantissa) maxMantissa = a;
         if (exponent < minExp) minExp = exponent;
         if (exponent > maxExp) maxExp = exponent;
       }
@@ -172,7 +182,9 @@ export function prepareSample(input: SampleInput): CentredSample {
   let method: CentringMethod = "scaled-integer";
   if (anyBinary || maxExp - minExp > MAX_EXPONENT_SPREAD || minExp < -300) method = "binary";
   else if (anyLong) method = "big-integer";
-  else {
+  else if (!(maxExp - minExp <= 22 && maxMantissa * (POWERS_OF_TEN[maxExp - minExp] as number) < 2 ** 53)) {
+    // Only when the largest mantissa at the largest shift might not fit is each value checked
+    // (rounding is monotone, so that bound covers every value).
     const P = POWERS_OF_TEN;
     for (let i = 0; i < k; i++) {
       const m = mantissas[i] as number;
@@ -186,7 +198,9 @@ export function prepareSample(input: SampleInput): CentredSample {
   }
 
   const pick = pickOffsetIndex(mantissas, exponents, k);
-  const centredAll = new Float64Array(k);
+  // The centred values overwrite the mantissas in place (each is read before it is written,
+  // and the offset is taken first), which saves a second array of N doubles.
+  const centredAll = mantissas.subarray(0, k);
   let offset = 0;
   let offsetInteger = 0;
   const E = minExp;
@@ -219,7 +233,7 @@ export function prepareSample(input: SampleInput): CentredSample {
     for (let i = 0; i < k; i++) {
       const t = texts[i];
       const b =
-        kinds[i] === LONG && t !== undefined
+        kinds?.[i] === LONG && t !== undefined
           ? parseDecimalBig(t)
           : { mantissa: BigInt(mantissas[i] as number), exponent: exponents[i] as number };
       exact.push(b);
@@ -232,7 +246,7 @@ export function prepareSample(input: SampleInput): CentredSample {
     offset = Number(`${C}e${e}`);
   } else {
     const value = (i: number): number => {
-      if (kinds[i] === BINARY) return mantissas[i] as number;
+      if (kinds?.[i] === BINARY) return mantissas[i] as number;
       return Number(`${mantissas[i]}e${exponents[i]}`);
     };
     offset = k > 0 ? value(pick) : 0;
@@ -254,6 +268,26 @@ export function prepareSample(input: SampleInput): CentredSample {
     start += n;
   });
   return { kind: "centred-sample", groups: out, offset, centring: method, scaleExponent: E, offsetInteger };
+}
+
+/**
+ * False only when no decimal of at most 15 significant digits rounds to x, found without
+ * building String(x) (full-precision doubles would otherwise each be printed and re-read).
+ * If x = fl(M·10^-s) with M < 10^15, then x·10^s lies within 0.25 of M, so M = round(x·10^s)
+ * and M/10^s (correctly rounded: M < 2^53, 10^s exact) gives back x. The scale s that gives
+ * M 15 digits comes from log10, which may be off by one near powers of ten, so s ± 1 are
+ * tried too. Outside 10^-7 ≤ |x| < 10^14 (scales beyond the exact powers) it answers true.
+ */
+function mayHaveShortDecimal(x: number): boolean {
+  const ax = Math.abs(x);
+  if (!(ax >= 1e-7 && ax < 1e14)) return true;
+  const s0 = 14 - Math.floor(Math.log10(ax));
+  for (let s = s0 - 1; s <= s0 + 1; s++) {
+    const p = POWERS_OF_TEN[s] as number;
+    const m = Math.round(ax * p);
+    if (m < 2 ** 53 && m / p === ax) return true;
+  }
+  return false;
 }
 
 /** Index of a value near the middle of the data (median of evenly spaced probes). */

@@ -25,14 +25,16 @@ export function residualOrderStatistics(sample: CentredSample, ranks: readonly n
   const posLo = new Int32Array(k);
   const posHi = new Int32Array(k);
   const posMid = new Int32Array(k);
-  // Number of residuals ≤ v in each group (into pos), and their total.
-  const countAtMost = (v: number, pos: Int32Array): number => {
+  // Number of residuals ≤ v in each group (into pos), and their total. `from` and `to` hold
+  // each group's count at a value known to be ≤ v and ≥ v: the search stays between them
+  // (the count is monotone in v, so the answer is the same, found in fewer steps).
+  const countAtMost = (v: number, pos: Int32Array, from: Int32Array, to?: Int32Array): number => {
     let c = 0;
     for (let g = 0; g < k; g++) {
       const s = sorted[g] as Float64Array;
       const m = means[g] as number;
-      let lo = 0;
-      let hi = s.length;
+      let lo = from[g] as number;
+      let hi = to ? (to[g] as number) : s.length;
       while (lo < hi) {
         const mid = (lo + hi) >>> 1;
         if ((s[mid] as number) - m <= v) lo = mid + 1;
@@ -70,7 +72,7 @@ export function residualOrderStatistics(sample: CentredSample, ranks: readonly n
   let floor = min; // ranks ascend, so each answer bounds the next from below
   let step = 0;
   for (const r of ranks) {
-    let cLo = countAtMost(floor, posLo);
+    let cLo = countAtMost(floor, posLo, posLo); // posLo: counts at an earlier value ≤ floor
     if (cLo >= r) {
       out.push(floor); // floor is a residual (min or the previous answer) and holds rank r
       continue;
@@ -80,14 +82,14 @@ export function residualOrderStatistics(sample: CentredSample, ranks: readonly n
     let hi = max;
     let cHi = -1;
     if (step > 0 && floor + 2 * step < max) {
-      cHi = countAtMost(floor + 2 * step, posHi);
+      cHi = countAtMost(floor + 2 * step, posHi, posLo);
       if (cHi >= r) hi = floor + 2 * step;
     }
-    if (hi === max) cHi = countAtMost(hi, posHi);
+    if (hi === max) cHi = countAtMost(hi, posHi, posLo);
     while (cHi - cLo > SMALL_BRACKET && !singleValue()) {
       const mid = lo + (hi - lo) / 2;
       if (mid <= lo || mid >= hi) break; // collapsed onto one value: a tie block at hi
-      const c = countAtMost(mid, posMid);
+      const c = countAtMost(mid, posMid, posLo, posHi);
       if (c >= r) {
         hi = mid;
         cHi = c;

@@ -38,3 +38,31 @@ export function shortDecimalOfNumber(x: number, out: { mantissa: number; exponen
   }
   return false;
 }
+
+/**
+ * shortDecimalOfNumber with a guess s0 at the number of decimals (the previous value's, since
+ * measured data mostly share one): when x = m·10^-s0 with m not a multiple of 10, no shorter
+ * decimal can round to x (its scaled mantissa would be m/10^j, so m would end in a zero), so
+ * the answer is the one the full scan finds; otherwise it falls back to the full scan.
+ * Example: shortDecimalOfNumberFrom(50.123, out, 3) → true, out = { mantissa: 50123, exponent: -3 }.
+ * Cost: one multiply-round-divide step on the usual path.
+ */
+export function shortDecimalOfNumberFrom(
+  x: number,
+  out: { mantissa: number; exponent: number },
+  s0: number,
+): boolean {
+  if (s0 > 0 && s0 <= 22) {
+    const p = POWERS_OF_TEN[s0] as number;
+    const m = Math.round(x * p);
+    // m not a multiple of 10, tested without the slow remainder of a double: m·0.1 rounds to
+    // the whole number m/10 exactly when m is a multiple (|m| < 2^52 keeps the error far
+    // below one half), and lies at least 0.1 away from one otherwise.
+    if (Math.abs(m) <= MAX_FAST_MANTISSA && m / p === x && Math.round(m * 0.1) * 10 !== m) {
+      out.mantissa = m;
+      out.exponent = -s0;
+      return true;
+    }
+  }
+  return shortDecimalOfNumber(x, out);
+}

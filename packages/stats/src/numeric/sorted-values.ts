@@ -1,4 +1,5 @@
 import type { CentredGroup } from "./centred-sample.js";
+import { rememberRuns } from "./sorted-runs.js";
 
 const cache = new WeakMap<CentredGroup, Float64Array>();
 
@@ -48,12 +49,24 @@ function countingSort(values: Float64Array, divisor: number): Float64Array | und
     counts[d] = (counts[d] as number) + 1;
   }
   const out = new Float64Array(n);
+  let distinct = 0;
+  for (let d = 0; d < range; d++) if (counts[d] !== 0) distinct++;
+  // The runs of equal values come for free here (sortedRuns would find the same ones).
+  const runValues = new Float64Array(distinct);
+  const runEnds = new Int32Array(distinct);
   let j = 0;
+  let r = 0;
+  let distinctDoubles = true;
   for (let d = 0; d < range; d++) {
     let c = counts[d] as number;
     if (c === 0) continue;
     const v = (d + lo) / divisor;
     while (c-- > 0) out[j++] = v;
+    if (r > 0 && v === runValues[r - 1]) distinctDoubles = false;
+    runValues[r] = v;
+    runEnds[r++] = j;
   }
+  // Two integers could only share a double far beyond this range; checked all the same.
+  if (distinctDoubles) rememberRuns(out, { count: distinct, values: runValues, ends: runEnds });
   return out;
 }

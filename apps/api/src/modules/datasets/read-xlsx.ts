@@ -58,6 +58,53 @@ async function parsePart(
   }
 }
 
+/** Ends a peek once it has what it needs. */
+class PeekDone extends Error {}
+
+/** Refuses a sheet whose declared size (`<dimension ref="A1:F1000000">`) passes the bounds. */
+function refuseDeclaredSize(ref: string | undefined): void {
+  const limits = TABLE_LIMITS;
+  const m = /:([A-Z]{1,3})(\d{1,7})$/.exec(ref ?? "");
+  if (!m) return;
+  const cols = columnOf(m[1]!);
+  if (cols > limits.maxColumns)
+    throw invalid(
+      `The first sheet spans ${m[1]} columns; Waymark reads at most ${limits.maxColumns} columns.`,
+    );
+  if (cols * Number(m[2]) > limits.maxCells)
+    throw invalid(
+      `The first sheet spans ${Number(m[2]).toLocaleString("en")} rows × ${cols} columns; Waymark reads at most ${limits.maxCells.toLocaleString("en")} cells.`,
+    );
+}
+
+/**
+ * Reads the sheet's declared size from its first inflated piece, before the shared strings or
+ * any cell are parsed, so a workbook that says it is too large is refused at once. Only a hint:
+ * a missing or small declaration proves nothing, and cells are still counted as they are read.
+ * Damage is left for the full read to report.
+ */
+async function peekDeclaredSize(bytes: Buffer, sheet: ZipEntry): Promise<void> {
+  let ref: string | undefined;
+  const scanner = new XmlScanner(
+    {
+      open: (name, attrs) => {
+        if (name === "dimension") ref = attrs.ref;
+        if (name === "dimension" || name === "sheetData") throw new PeekDone();
+      },
+    },
+    64 * 1024,
+  );
+  try {
+    await inflateEntry(bytes, sheet, new InflateBudget(), (chunk) => {
+      scanner.write(new TextDecoder("utf-8").decode(chunk, { stream: true }));
+      throw new PeekDone(); // one piece (256 KB) is enough: the declaration comes before the cells
+    });
+  } catch (e) {
+    if (!(e instanceof PeekDone)) return;
+  }
+  refuseDeclaredSize(ref);
+}
+
 export async function readXlsx(bytes: Buffer): Promise<Table> {
   const limits = TABLE_LIMITS;
   const entries = new Map<string, ZipEntry>();
@@ -108,6 +155,7 @@ export async function readXlsx(bytes: Buffer): Promise<Table> {
   }
   const sheet = entries.get(sheetPath);
   if (!sheet) throw invalid(DAMAGED);
+  await peekDeclaredSize(bytes, sheet);
 
   const shared: string[] = [];
   const sst = entries.get("xl/sharedStrings.xml");
@@ -209,19 +257,10 @@ export async function readXlsx(bytes: Buffer): Promise<Table> {
           case "rPh":
             skip++;
             break;
-          case "dimension": {
+          case "dimension":
             // A declared size may refuse early; a small one proves nothing, so cells are counted too.
-            const ref = /:([A-Z]{1,3})(\d{1,7})$/.exec(attrs.ref ?? "");
-            if (ref && columnOf(ref[1]!) > limits.maxColumns)
-              throw invalid(
-                `The first sheet spans ${ref[1]} columns; Waymark reads at most ${limits.maxColumns} columns.`,
-              );
-            if (ref && columnOf(ref[1]!) * Number(ref[2]) > limits.maxCells)
-              throw invalid(
-                `The first sheet spans ${Number(ref[2]).toLocaleString("en")} rows × ${columnOf(ref[1]!)} columns; Waymark reads at most ${limits.maxCells.toLocaleString("en")} cells.`,
-              );
+            refuseDeclaredSize(attrs.ref);
             break;
-          }
         }
       },
       close: (name) => {

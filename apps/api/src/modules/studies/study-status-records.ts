@@ -95,7 +95,20 @@ export async function openReviewComments(db: DataSource | EntityManager, studyId
         order: { id: "ASC" },
       })
     : [];
+  return presentOpenReview(round, comments, replies);
+}
+
+export type OpenReview = ReturnType<typeof presentOpenReview> | null;
+
+/** The open round as the study page shows it: each comment with its replies, oldest first. */
+export function presentOpenReview(round: ReviewRound, comments: ReviewComment[], replies: ReviewReply[]) {
   const person = (u: { id: number; displayName: string }) => ({ id: u.id, displayName: u.displayName });
+  const repliesTo = new Map<number, ReviewReply[]>();
+  for (const r of replies) {
+    const list = repliesTo.get(r.commentId);
+    if (list) list.push(r);
+    else repliesTo.set(r.commentId, [r]);
+  }
   return {
     round: round.round,
     decidedAt: round.decidedAt,
@@ -106,9 +119,12 @@ export async function openReviewComments(db: DataSource | EntityManager, studyId
       body: c.body,
       author: person(c.author),
       createdAt: c.createdAt,
-      replies: replies
-        .filter((r) => r.commentId === c.id)
-        .map((r) => ({ id: r.id, body: r.body, author: person(r.author), createdAt: r.createdAt })),
+      replies: (repliesTo.get(c.id) ?? []).map((r) => ({
+        id: r.id,
+        body: r.body,
+        author: person(r.author),
+        createdAt: r.createdAt,
+      })),
     })),
   };
 }

@@ -1,7 +1,8 @@
 import type { DataSource, EntityManager } from "typeorm";
 import { lockRowForWrite } from "../../db/row-lock.js";
 import { ConflictError, ForbiddenError, NotFoundError } from "../../http/errors.js";
-import { Study } from "./study.entity.js";
+import type { Study } from "./study.entity.js";
+import { findStudies } from "./study-list-records.js";
 
 type Db = DataSource | EntityManager;
 
@@ -10,7 +11,7 @@ export async function loadReadableStudy(db: Db, id: number, user: Express.User):
   const valid = Number.isInteger(id) && id > 0;
   // Within a write transaction the study's state is checked under its row lock (PostgreSQL).
   if (valid) await lockRowForWrite(db, "studies", id);
-  const study = valid ? await db.getRepository(Study).findOneBy({ id }) : null;
+  const study = valid ? ((await findStudies(db, { id }))[0] ?? null) : null;
   if (!study) throw new NotFoundError(`There is no study ${id}.`);
   if (user.role === "analyst" && study.ownerId !== user.id)
     throw new ForbiddenError("This study belongs to another analyst.");

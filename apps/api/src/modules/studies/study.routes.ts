@@ -6,8 +6,16 @@ import { parseBody } from "../../http/validate.js";
 import { loadSettings } from "../organization/organization.routes.js";
 import { loadReadableStudy } from "./study.access.js";
 import { createStudySchema, designSchema, planSchema, updateStudySchema } from "./study.schema.js";
-import { createStudy, lockPlan, saveDesign, savePlan, studyDto, updateStudy } from "./study.service.js";
-import { Study } from "./study.entity.js";
+import {
+  createStudy,
+  lockPlan,
+  saveDesign,
+  savePlan,
+  studyDto,
+  studyDtos,
+  updateStudy,
+} from "./study.service.js";
+import { findStudies } from "./study-list-records.js";
 
 const ANY_ROLE = policy.roles("analyst", "reviewer", "writer", "admin");
 const ANALYST = policy.roles("analyst");
@@ -23,16 +31,15 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       handlers: [
         async (req, res) => {
           const user = req.user!;
-          const studies = await ds.getRepository(Study).find({
-            where:
-              user.role === "analyst"
-                ? { ownerId: user.id }
-                : user.role === "writer"
-                  ? { status: "approved" }
-                  : {},
-            order: { updatedAt: "DESC" },
-          });
-          res.json({ studies: await Promise.all(studies.map((s) => studyDto(ds, s))) });
+          const studies = await findStudies(
+            ds,
+            user.role === "analyst"
+              ? { ownerId: user.id }
+              : user.role === "writer"
+                ? { status: "approved" }
+                : {},
+          );
+          res.json({ studies: await studyDtos(ds, studies) });
         },
       ],
     },
@@ -63,7 +70,7 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       handlers: [
         async (req, res) => {
           const study = await loadReadableStudy(ds, id(req.params.id), req.user!);
-          res.json({ study: await studyDto(ds, study) });
+          res.json({ study: (await studyDtos(ds, [study]))[0] });
         },
       ],
     },

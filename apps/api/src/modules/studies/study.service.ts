@@ -11,6 +11,7 @@ import { DEFAULT_PLAN, testPlanOf, type PlanSettings } from "./plan.js";
 import { loadEditableStudy, requireUnlockedPlan } from "./study.access.js";
 import { Study } from "./study.entity.js";
 import { presentStudy } from "./study.presenter.js";
+import { loadStudyViews } from "./study-list-records.js";
 import { loadStatusRecords, openReviewComments } from "./study-status-records.js";
 import { studyStatus } from "./study-status.js";
 import type { createStudySchema, planSchema, updateStudySchema } from "./study.schema.js";
@@ -43,6 +44,25 @@ export async function studyDto(ds: DataSource, study: Study) {
     activeDataset: records.activeDatasetRow,
     progress: studyStatus(records),
     openReview: await openReviewComments(ds, study.id),
+  });
+}
+
+/**
+ * Many studies as `studyDto` gives each, from a fixed number of queries (study-list-records.ts)
+ * and the same status function and presenter.
+ */
+export async function studyDtos(ds: DataSource, studies: Study[]) {
+  const views = await loadStudyViews(ds, studies);
+  return studies.map((study) => {
+    const v = views.get(study.id)!;
+    return presentStudy(study, {
+      datasetCount: v.datasetCount,
+      latestDataset: v.latestDataset,
+      latestAnalysisId: v.latestAnalysisId,
+      activeDataset: v.activeDataset,
+      progress: studyStatus(v.status),
+      openReview: v.openReview,
+    });
   });
 }
 
