@@ -12,7 +12,7 @@
 // How the cores are shared (see CPU_PLAN below): with 2 cores, each instance is pinned to a core
 // of its own (taskset), while PostgreSQL, HAProxy and this load generator float over both; with
 // one instance, it has core 0 and the rest float the same way. BENCH_PIN=0 leaves all to the scheduler.
-import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { Client } from "./client.js";
@@ -55,6 +55,26 @@ function machineCpu(): { busy: number; total: number } | null {
     const idle = n[3]! + (n[4] ?? 0);
     const total = n.slice(0, 8).reduce((x, y) => x + y, 0);
     return { busy: (total - idle) / 100, total: total / 100 };
+  } catch {
+    return null;
+  }
+}
+
+/** CPU seconds of the cluster's postmaster and its live children (the connections' backends). */
+function postgresCpuSeconds(dataDir: string): number | null {
+  try {
+    const postmaster = Number(readFileSync(path.join(dataDir, "postmaster.pid"), "utf8").split("\n")[0]);
+    let sum = cpuSeconds(postmaster) ?? 0;
+    for (const entry of readdirSync("/proc")) {
+      if (!/^\d+$/.test(entry)) continue;
+      try {
+        const after = readFileSync(`/proc/${entry}/stat`, "utf8").split(") ")[1]!.split(" ");
+        if (Number(after[1]) === postmaster) sum += (Number(after[11]) + Number(after[12])) / 100;
+      } catch {
+        // The process ended while we looked.
+      }
+    }
+    return sum;
   } catch {
     return null;
   }
@@ -147,6 +167,7 @@ async function phase(instances: 1 | 2) {
       loadGenerator: process.cpuUsage(),
       instances: started.map((i) => cpuSeconds(i.child.pid)),
       proxy: cpuSeconds(proxy.child.pid),
+      postgres: postgresCpuSeconds(pg.dir),
     };
     const record = async (kind: Sample["kind"], send: () => ReturnType<Client["request"]>) => {
       const start = performance.now();
@@ -186,6 +207,7 @@ async function phase(instances: 1 | 2) {
       loadGeneratorS: round((lg.user + lg.system) / 1e6, 1),
       instancesS: started.map((i, k) => diff(cpu0.instances[k] ?? null, cpuSeconds(i.child.pid))),
       proxyS: diff(cpu0.proxy, cpuSeconds(proxy.child.pid)),
+      postgresS: diff(cpu0.postgres, postgresCpuSeconds(pg.dir)),
     };
     const served: Record<string, number> = {};
     for (const c of clients) for (const [k, n] of c.servedBy) served[k] = (served[k] ?? 0) + n;
@@ -279,6 +301,7 @@ console.log(
 );
 console.log(row("CPU s: load generator", (p) => p.cpu.loadGeneratorS));
 console.log(row("CPU s: HAProxy", (p) => p.cpu.proxyS));
+console.log(row("CPU s: PostgreSQL", (p) => p.cpu.postgresS));
 console.log(row("CPU s: machine busy", (p) => `${p.cpu.machineBusyS} of ${p.cpu.machineTotalS}`));
 console.log("  (machine busy includes PostgreSQL and anything else running on the machine at the time)");
 for (const e of [...one.errorSamples, ...two.errorSamples]) console.log(`  error sample: ${e}`);
