@@ -303,6 +303,6 @@ console.log(row("CPU s: load generator", (p) => p.cpu.loadGeneratorS));
 console.log(row("CPU s: HAProxy", (p) => p.cpu.proxyS));
 console.log(row("CPU s: PostgreSQL", (p) => p.cpu.postgresS));
 console.log(row("CPU s: machine busy", (p) => `${p.cpu.machineBusyS} of ${p.cpu.machineTotalS}`));
-console.log("  (machine busy includes PostgreSQL and anything else running on the machine at the time)");
+console.log("  (machine busy also counts whatever else ran on the machine at the time)");
 for (const e of [...one.errorSamples, ...two.errorSamples]) console.log(`  error sample: ${e}`);
 console.log(`Wrote ${path.relative(repoRoot, path.join(outDir, "instances.json"))}`);
