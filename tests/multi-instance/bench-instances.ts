@@ -29,7 +29,7 @@ import { lockedStudy, uploadDataset, yieldCsv } from "./workload.js";
 
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const DURATION_S = Number(process.env.BENCH_DURATION_S ?? 30);
-const GROUP_SIZE = Number(process.env.BENCH_GROUP_SIZE ?? 50);
+const GROUP_SIZE = Number(process.env.BENCH_GROUP_SIZE ?? 200);
 const STUDIES = 5;
 const cores = os.availableParallelism();
 /** Which CPUs each instance is pinned to; undefined leaves the scheduler free (one core, or taskset missing). */
@@ -223,6 +223,8 @@ async function phase(instances: 1 | 2) {
         seconds,
       ),
       servedBy: served,
+      // Runs claimed more than once: taken over after a lease lapsed (wasted work when it happens under load).
+      runsClaimedAgain: pg.count(`SELECT count(*) FROM analysis_runs WHERE attempts > 1`),
       cpu,
       errorSamples: [...errorBodies],
     };
@@ -242,7 +244,7 @@ const figures = {
   machine: { cpus: cores, cpuModel: os.cpus()[0]?.model ?? null, node: process.version },
   setup: {
     database: "PostgreSQL (Debian) in a throwaway cluster on 127.0.0.1, fsync off",
-    proxy: "HAProxy with deploy/haproxy.cfg (round robin, readiness checks)",
+    proxy: "HAProxy with deploy/haproxy.cfg (least connections, readiness checks)",
     server:
       "node apps/api/dist/server.js, NODE_ENV=production, WAYMARK_DEMO=1, one analysis worker thread per instance",
     cpuPlan: !pinned
@@ -281,6 +283,7 @@ console.log(row("runs completed", (p) => p.runs.completed));
 console.log(row("runs /s", (p) => p.runs.perSecond));
 console.log(row("runs p50 / p95 ms", (p) => `${p.runs.p50Ms} / ${p.runs.p95Ms}`));
 console.log(row("runs errors", (p) => p.runs.errors));
+console.log(row("runs claimed again", (p) => p.runsClaimedAgain));
 console.log(
   row("requests per instance", (p) =>
     Object.entries(p.servedBy)

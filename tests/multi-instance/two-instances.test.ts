@@ -170,7 +170,7 @@ describe.sequential("two API instances on one PostgreSQL database behind HAProxy
     expect(failures, failures.slice(0, 5).join("\n")).toEqual([]);
     expect(workers).toHaveLength(PEOPLE);
 
-    // Round robin spread the work: both instances answered a good share of the requests.
+    // The proxy spread the work: both instances answered a good share of the requests.
     const served = new Map<string, number>();
     for (const w of workers) for (const [k, n] of w.client.servedBy) served.set(k, (served.get(k) ?? 0) + n);
     expect([...served.keys()].sort()).toEqual(["api1", "api2"]);
