@@ -35,8 +35,13 @@ function uploadPath(bytes: Buffer): Outcome {
 
 function commandLinePath(text: string): Outcome {
   const csv = readGroupedCsv(text, "Line", "Yield (g)");
+  // The command line hands over numbers (missing = NaN) or, where a number would change the
+  // decimal the engine reads, the cell's text.
   const cells = csv.groups.flatMap((g) =>
-    g.values.map((v, i) => [g.rows![i]!, String(v)] as [number, string]),
+    Array.from(
+      g.values as ArrayLike<string | number | null | undefined>,
+      (v, i) => [g.rows![i]!, Number.isNaN(v) ? "" : String(v ?? "")] as [number, string],
+    ),
   );
   return {
     kept: cells.filter(([, v]) => v !== "").sort(byRow),
