@@ -21,5 +21,11 @@ export function useCreateAnalysis(id: number) {
       void qc.invalidateQueries({ queryKey: studyKeys.detail(id), exact: true });
       void qc.invalidateQueries({ queryKey: studyKeys.all, exact: true });
     },
+    // A run whose instance stopped mid-request is finished by another instance, so a failed
+    // request may still have produced an analysis: the list is read again either way.
+    onError: () => {
+      void qc.invalidateQueries({ queryKey: studyKeys.analyses(id), exact: true });
+      void qc.invalidateQueries({ queryKey: studyKeys.detail(id), exact: true });
+    },
   });
 }
