@@ -69,7 +69,7 @@ describe("invite-admin: the first admin of a new database", () => {
       ip: null,
       summary: "Invited founder@example.org as admin from the command line",
     });
-    expect(events[0].after).toEqual({
+    expect(events[0]?.after).toEqual({
       email: "founder@example.org",
       role: "admin",
       invitationId: inv.id,
@@ -78,7 +78,7 @@ describe("invite-admin: the first admin of a new database", () => {
 
     const mail = await ds.getRepository(OutboxMessage).findBy({ to: "founder@example.org" });
     expect(mail).toHaveLength(1);
-    expect(mail[0].text).toContain(r.link);
+    expect(mail[0]?.text).toContain(r.link);
 
     // The link's page, then accepting it through the HTTP API, as the web app does.
     const agent = request.agent(app);
