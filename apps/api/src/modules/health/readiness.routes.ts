@@ -2,31 +2,18 @@ import type { DataSource } from "typeorm";
 import { policy } from "../../auth/policy.js";
 import { HttpError } from "../../http/errors.js";
 import type { RouteSpec } from "../../http/route-table.js";
-import { isDraining } from "../../lifecycle/shutdown.js";
-
-/** A database that has not answered in this long counts as unreachable (common practice: well under a load balancer's check interval). */
-const DATABASE_TIMEOUT_MS = 2000;
-
-async function databaseAnswers(ds: DataSource): Promise<boolean> {
-  let timer: NodeJS.Timeout | undefined;
-  try {
-    return await Promise.race([
-      ds.query("SELECT 1").then(() => true),
-      new Promise<boolean>((resolve) => (timer = setTimeout(() => resolve(false), DATABASE_TIMEOUT_MS))),
-    ]);
-  } catch {
-    return false;
-  } finally {
-    clearTimeout(timer);
-  }
-}
+import { isDraining, onShutdown } from "../../lifecycle/shutdown.js";
+import { DATABASE_TIMEOUT_MS, databaseProbe } from "./database-probe.js";
 
 /**
  * Readiness, for a load balancer: 200 while this instance can serve, 503 while it is shutting
  * down (lifecycle/shutdown.ts) or cannot reach the database. `/api/health` stays a liveness check
- * that touches nothing.
+ * that touches nothing. The database check (database-probe.ts) measures the database, not the wait
+ * for a pooled connection; its own connection is closed with the other shutdown steps.
  */
 export function readinessRoutes(ds: DataSource): RouteSpec[] {
+  const probe = databaseProbe(ds);
+  onShutdown("Closing the readiness probe's connection", () => probe.close());
   return [
     {
       method: "get",
@@ -38,7 +25,7 @@ export function readinessRoutes(ds: DataSource): RouteSpec[] {
           res.set("Cache-Control", "no-store");
           if (isDraining())
             throw new HttpError(503, "draining", "This instance is shutting down; send requests to another.");
-          if (!(await databaseAnswers(ds)))
+          if (!(await probe.answers()))
             throw new HttpError(
               503,
               "database_unreachable",

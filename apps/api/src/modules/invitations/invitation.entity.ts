@@ -32,12 +32,13 @@ export class Invitation {
   @Column(DATETIME, { name: "expires_at" })
   expiresAt: Date;
 
-  @Column("integer", { name: "invited_by_id" })
-  invitedById: number;
+  /** Null for an invitation made at the command line (`npm run invite-admin`). */
+  @Column("integer", { name: "invited_by_id", nullable: true })
+  invitedById: number | null;
 
-  @ManyToOne(() => User, { eager: true })
+  @ManyToOne(() => User, { eager: true, nullable: true })
   @JoinColumn({ name: "invited_by_id" })
-  invitedBy: Relation<User>;
+  invitedBy: Relation<User> | null;
 
   @CreateDateColumn({ name: "created_at", type: DATETIME })
   createdAt: Date;

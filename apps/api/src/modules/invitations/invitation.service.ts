@@ -27,13 +27,26 @@ export function stateOf(i: Invitation, now = Date.now()): InvitationState {
   return "open";
 }
 
-/** Invites a person with a role; re-inviting the same address revokes the earlier link. */
-export async function invite(
+/**
+ * Who invites: a signed-in admin, or the operator at the command line (`npm run invite-admin`,
+ * for the first admin of a new database), who has no account; the audit trail shows it as system.
+ */
+export type Inviter = Actor | "command line";
+
+/** The inviter as the e-mail names them. */
+const COMMAND_LINE_INVITER = { displayName: "The administrator of this Waymark", email: "" };
+
+/**
+ * Invites a person with a role; re-inviting the same address revokes the earlier link. Returns
+ * the invitation and its one-time link (only its hash is stored).
+ */
+export async function inviteWithLink(
   ds: DataSource,
-  actor: Actor,
+  inviter: Inviter,
   input: { email: string; role: Role },
   baseUrl: string,
-): Promise<Invitation> {
+): Promise<{ invitation: Invitation; link: string }> {
+  const byCommandLine = inviter === "command line";
   const email = input.email.toLowerCase();
   if (
     await ds
@@ -45,6 +58,7 @@ export async function invite(
     throw new ConflictError(`${email} already has an account.`);
   }
   const token = randomBytes(32).toString("base64url");
+  const link = `${baseUrl}/invite/${token}`;
   const id = await inTransaction(ds, async (tx) => {
     const repo = tx.getRepository(Invitation);
     await repo.update({ email, usedAt: IsNull(), revokedAt: IsNull() }, { revokedAt: new Date() });
@@ -54,20 +68,38 @@ export async function invite(
         role: input.role,
         tokenHash: hashToken(token),
         expiresAt: new Date(Date.now() + INVITATION_HOURS * 3600_000),
-        invitedById: actor.user.id,
+        invitedById: byCommandLine ? null : inviter.user.id,
         usedAt: null,
         revokedAt: null,
       }),
     );
-    await recordAudit(tx, actor, {
+    await recordAudit(tx, byCommandLine ? { user: null, ip: null } : inviter, {
       action: "invitation.sent",
-      summary: `Invited ${email} as ${input.role}`,
-      after: { email, role: input.role, invitationId: saved.id },
+      summary: `Invited ${email} as ${input.role}${byCommandLine ? " from the command line" : ""}`,
+      after: {
+        email,
+        role: input.role,
+        invitationId: saved.id,
+        ...(byCommandLine && { via: "command line" }),
+      },
     });
-    await enqueueMail(tx, invitationMessage(email, input.role, actor.user, `${baseUrl}/invite/${token}`));
+    await enqueueMail(
+      tx,
+      invitationMessage(email, input.role, byCommandLine ? COMMAND_LINE_INVITER : inviter.user, link),
+    );
     return saved.id;
   });
-  return ds.getRepository(Invitation).findOneByOrFail({ id });
+  return { invitation: await ds.getRepository(Invitation).findOneByOrFail({ id }), link };
+}
+
+/** Invites a person with a role from a signed-in admin's request. */
+export async function invite(
+  ds: DataSource,
+  actor: Actor,
+  input: { email: string; role: Role },
+  baseUrl: string,
+): Promise<Invitation> {
+  return (await inviteWithLink(ds, actor, input, baseUrl)).invitation;
 }
 
 /** Looks up an invitation by its token, with a message for each way it may no longer work. */
