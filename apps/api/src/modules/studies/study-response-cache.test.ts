@@ -4,6 +4,7 @@ import { createApp } from "../../app.js";
 import { startServices } from "../../bootstrap.js";
 import { loadEnv } from "../../config/env.js";
 import { isPostgres } from "../../db/driver.js";
+import { inTransaction } from "../../db/in-transaction.js";
 import { MARKED_TABLES } from "../../db/migrations/1764900000200-data-change-marker.js";
 import { seedDemoStudies } from "../../db/seeds/demo-studies.js";
 import { seedDemoUsers } from "../../db/seeds/demo-users.js";
@@ -33,6 +34,7 @@ const stops: Array<() => Promise<void>> = [];
 const agents: Array<Record<Role, Agent>> = [];
 const apps: Array<Awaited<ReturnType<typeof instance>>["app"]> = [];
 let password: string;
+const instances: DataSource[] = [];
 
 async function instance(ds: DataSource) {
   const env = loadEnv({
@@ -65,6 +67,7 @@ beforeAll(async () => {
   for (const ds of [first, second]) {
     const { app } = await instance(ds);
     apps.push(app);
+    instances.push(ds);
     const byRole = {} as Record<Role, Agent>;
     for (const role of ROLES) byRole[role] = await signedIn(app, role, password);
     agents.push(byRole);
@@ -213,7 +216,7 @@ describe("the studies response cache", () => {
     await expectFresh("made a reviewer again");
   }, 300_000);
 
-  it("answers 304 to a client holding the current version, and the new bytes after a write", async () => {
+  it("answers 304 to a client holding the current version, the new bytes after a write, gzipped when asked", async () => {
     const analyst = agents[0]!.analyst;
     const first = await analyst.get("/api/studies").expect(200);
     const etag = first.headers.etag as string;
@@ -227,6 +230,30 @@ describe("the studies response cache", () => {
     const after = await analyst.get("/api/studies").set("If-None-Match", etag).expect(200);
     expect(after.headers.etag).not.toBe(etag);
     expect(after.body.studies.find((s: { id: number }) => s.id === mine!.id).title).toBe("Changed again");
+    // The gzip form (made once per entry) decodes to the same list; the plain form names its length.
+    const zipped = await analyst.get("/api/studies").set("Accept-Encoding", "gzip").expect(200);
+    expect(zipped.headers["content-encoding"]).toBe("gzip");
+    expect(zipped.body).toEqual(after.body);
+    const identity = await analyst.get("/api/studies").set("Accept-Encoding", "identity").expect(200);
+    expect(identity.headers["content-encoding"]).toBeUndefined();
+    expect(Number(identity.headers["content-length"])).toBe(Buffer.byteLength(JSON.stringify(after.body)));
+  });
+
+  it("never keeps rows a transaction rolled back, though a read saw them before the rollback", async () => {
+    // SQLite: the app's one connection lets a request read an open transaction's rows and marker.
+    const analyst = agents[0]!.analyst;
+    const [mine] = await findStudies(fresh, listFilter(await userOf("analyst")));
+    await expect(
+      inTransaction(instances[0]!, async (tx) => {
+        await sql(tx, `UPDATE studies SET title = 'Rolled back' WHERE id = :id`, { id: mine!.id });
+        await analyst.get("/api/studies").expect(200);
+        await analyst.get(`/api/studies/${mine!.id}`).expect(200);
+        throw new Error("roll back");
+      }),
+    ).rejects.toThrow("roll back");
+    // A committed write takes the marker value the rolled-back one had.
+    await sql(fresh, `UPDATE studies SET objective = 'Committed' WHERE id = :id`, { id: mine!.id });
+    await expectFresh("after a rollback and a committed write");
   });
 
   it("moves the marker on a write to each table the list reads, and the list reads no other table", async () => {
