@@ -82,7 +82,7 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
 
   // Named indexes only (idx_…, uq_…): each driver names the ones behind UNIQUE columns its own way.
   // A migration that adds an index adds its name here, and both suites then check it.
-  it("has the same named indexes and immutability triggers", async () => {
+  it("has the same named indexes, immutability triggers and change-marker triggers", async () => {
     expect(await indexNames()).toEqual([
       "idx_analyses_study",
       "idx_analysis_runs_due",
@@ -103,14 +103,36 @@ describe("the migrated schema (same on SQLite and PostgreSQL)", () => {
       "idx_studies_owner",
       "uq_analysis_runs_analysis",
     ]);
-    // PostgreSQL adds statement triggers refusing TRUNCATE (SQLite has no TRUNCATE); left out here.
+    // PostgreSQL adds statement triggers on TRUNCATE (refusing it, or moving the change marker);
+    // SQLite has no TRUNCATE, so they are left out here.
     expect(await triggerNames()).toEqual([
+      "trg_analyses_changed_delete",
+      "trg_analyses_changed_insert",
+      "trg_analyses_changed_update",
       "trg_analyses_no_update",
       "trg_audit_no_delete",
       "trg_audit_no_update",
+      "trg_datasets_changed_delete",
+      "trg_datasets_changed_insert",
+      "trg_datasets_changed_update",
       "trg_datasets_no_update",
+      "trg_review_comments_changed_delete",
+      "trg_review_comments_changed_insert",
+      "trg_review_comments_changed_update",
+      "trg_review_replies_changed_delete",
+      "trg_review_replies_changed_insert",
+      "trg_review_replies_changed_update",
+      "trg_review_rounds_changed_delete",
+      "trg_review_rounds_changed_insert",
+      "trg_review_rounds_changed_update",
       "trg_signatures_no_delete",
       "trg_signatures_no_update",
+      "trg_studies_changed_delete",
+      "trg_studies_changed_insert",
+      "trg_studies_changed_update",
+      "trg_users_changed_delete",
+      "trg_users_changed_insert",
+      "trg_users_changed_update",
     ]);
   });
 

@@ -8,6 +8,7 @@ import { PosthocMethodIds1764806400000 } from "./1764806400000-posthoc-method-id
 import { CreateSignInThrottle1764900000000 } from "./1764900000000-create-sign-in-throttle.js";
 import { MailOutboxClaims1764900000001 } from "./1764900000001-mail-outbox-claims.js";
 import { CreateAnalysisRuns1764900000100 } from "./1764900000100-create-analysis-runs.js";
+import { DataChangeMarker1764900000200 } from "./1764900000200-data-change-marker.js";
 import { InvitationsFromCommandLine1764950000000 } from "./1764950000000-invitations-from-command-line.js";
 
 /** Migrations in order; listed explicitly so they load the same from src (tsx) and dist. */
@@ -22,5 +23,6 @@ export const migrations = [
   CreateSignInThrottle1764900000000,
   MailOutboxClaims1764900000001,
   CreateAnalysisRuns1764900000100,
+  DataChangeMarker1764900000200,
   InvitationsFromCommandLine1764950000000,
 ];

@@ -2,7 +2,7 @@ import type { DataSource, EntityManager } from "typeorm";
 import { lockRowForWrite } from "../../db/row-lock.js";
 import { ConflictError, ForbiddenError, NotFoundError } from "../../http/errors.js";
 import type { Study } from "./study.entity.js";
-import { findStudies } from "./study-list-records.js";
+import { findStudies, type StudyFilter } from "./study-list-records.js";
 
 type Db = DataSource | EntityManager;
 
@@ -13,6 +13,12 @@ export async function loadReadableStudy(db: Db, id: number, user: Express.User):
   if (valid) await lockRowForWrite(db, "studies", id);
   const study = valid ? ((await findStudies(db, { id }))[0] ?? null) : null;
   if (!study) throw new NotFoundError(`There is no study ${id}.`);
+  assertReadable(study, user);
+  return study;
+}
+
+/** Analysts read their own studies, writers approved ones, other roles any (also used on cached pages). */
+export function assertReadable(study: Pick<Study, "ownerId" | "status">, user: Express.User): void {
   if (user.role === "analyst" && study.ownerId !== user.id)
     throw new ForbiddenError("This study belongs to another analyst.");
   // Writers turn approved results into text: drafts, their data and their analyses are not theirs to read.
@@ -20,7 +26,6 @@ export async function loadReadableStudy(db: Db, id: number, user: Express.User):
     throw new ForbiddenError(
       `Writers see approved studies only; this study is ${study.status.replace("_", " ")}.`,
     );
-  return study;
 }
 
 /** Loads a study the caller may change: only its owning analyst, and only while it is a draft. */
@@ -38,4 +43,13 @@ export function requireUnlockedPlan(study: Study): void {
       `The plan was locked on ${study.planLockedAt.toISOString()}; the design, plan, levels and α can no longer change.`,
     );
   }
+}
+
+/** The studies a caller's list shows: analysts their own, writers approved ones, other roles all. */
+export function listFilter(user: Express.User): StudyFilter {
+  return user.role === "analyst"
+    ? { ownerId: user.id }
+    : user.role === "writer"
+      ? { status: "approved" }
+      : {};
 }

@@ -4,7 +4,9 @@ import { actorOf } from "../../http/actor.js";
 import type { RouteSpec } from "../../http/route-table.js";
 import { parseBody } from "../../http/validate.js";
 import { loadSettings } from "../organization/organization.routes.js";
-import { loadReadableStudy } from "./study.access.js";
+import { assertReadable, listFilter } from "./study.access.js";
+import { StudyResponseCache, serialize } from "./study-response-cache.js";
+import { NotFoundError } from "../../http/errors.js";
 import { createStudySchema, designSchema, planSchema, updateStudySchema } from "./study.schema.js";
 import {
   createStudy,
@@ -22,6 +24,8 @@ const ANALYST = policy.roles("analyst");
 
 export function studyRoutes(ds: DataSource): RouteSpec[] {
   const id = (raw: unknown) => Number(raw);
+  // Serialized list and study page responses, keyed by the database's change marker.
+  const cache = new StudyResponseCache(ds);
   return [
     {
       method: "get",
@@ -30,16 +34,12 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       summary: "List studies (analysts: their own; writers: approved ones)",
       handlers: [
         async (req, res) => {
-          const user = req.user!;
-          const studies = await findStudies(
-            ds,
-            user.role === "analyst"
-              ? { ownerId: user.id }
-              : user.role === "writer"
-                ? { status: "approved" }
-                : {},
+          // The list depends on the data and on which studies the caller's role shows (the key).
+          const filter = listFilter(req.user!);
+          const entry = await cache.get(`list:${JSON.stringify(filter)}`, async () =>
+            serialize({ studies: await studyDtos(ds, await findStudies(ds, filter)) }),
           );
-          res.json({ studies: await studyDtos(ds, studies) });
+          cache.send(req, res, entry);
         },
       ],
     },
@@ -69,8 +69,18 @@ export function studyRoutes(ds: DataSource): RouteSpec[] {
       summary: "One study with its design, plan and latest data",
       handlers: [
         async (req, res) => {
-          const study = await loadReadableStudy(ds, id(req.params.id), req.user!);
-          res.json({ study: (await studyDtos(ds, [study]))[0] });
+          const studyId = id(req.params.id);
+          if (!Number.isInteger(studyId) || studyId <= 0)
+            throw new NotFoundError(`There is no study ${studyId}.`);
+          // The page is the same for every reader; who may read it is checked on each request.
+          const entry = await cache.get(`study:${studyId}`, async () => {
+            const study = (await findStudies(ds, { id: studyId }))[0];
+            if (!study) throw new NotFoundError(`There is no study ${studyId}.`);
+            const [dto] = await studyDtos(ds, [study]);
+            return serialize({ study: dto }, { ownerId: study.ownerId, status: study.status });
+          });
+          assertReadable(entry.meta!, req.user!);
+          cache.send(req, res, entry);
         },
       ],
     },
