@@ -24,7 +24,8 @@ const columns = h.columns([
       );
     },
   }),
-  h.accessor((i) => i.invitedBy?.displayName ?? "—", {
+  // Only the server's `invite-admin` command invites without a person (the first admin).
+  h.accessor((i) => i.invitedBy?.displayName ?? "Command line (npm run invite-admin)", {
     id: "invitedBy",
     header: "Invited by",
     sortFn: "text",
