@@ -35,10 +35,17 @@ const rows = [
     api.importAppJs.medianS <= 1.5,
   ],
   [
-    "(c) analyze() time ÷ scipy's",
+    "(c) analyze() time ÷ scipy's, same work",
     String(stats.ratioWaymarkToScipy),
     "≤ 0.5",
     stats.ratioWaymarkToScipy <= 0.5,
+  ],
+  // The smaller subset earlier rounds timed, kept so the figure stays comparable across rounds.
+  [
+    "(c) analyze() time ÷ scipy's earlier subset",
+    String(stats.ratioWaymarkToScipySubset),
+    "≤ 0.5",
+    stats.ratioWaymarkToScipySubset <= 0.5,
   ],
   [
     "(d) command line, 1,000,000 rows",
