@@ -9,6 +9,7 @@ import { startApi, type ApiProcess } from "../test-support/api-process.js";
 import { HttpSession } from "../test-support/http-session.js";
 import { largeCsv } from "./large-csv.js";
 import { readStoredInvariants } from "./stored-invariants.js";
+import { FIXTURE_DESIGN } from "../test-support/locked-study.js";
 
 /**
  * Kills the real server process with SIGKILL in the middle of a large upload and of an
@@ -137,20 +138,7 @@ describe.skipIf(ENTITY_DRIVER === "postgres")("a server killed mid-request leave
       201,
     );
     studyId = created.study.id;
-    await analyst.json(
-      "PUT",
-      `/api/studies/${studyId}/design`,
-      {
-        independence: "independent",
-        scale: "continuous",
-        question: "means",
-        groupSizes: "equal",
-        hasControl: "no",
-        comparisons: "all-pairs",
-        assignment: "randomized",
-      },
-      200,
-    );
+    await analyst.json("PUT", `/api/studies/${studyId}/design`, FIXTURE_DESIGN, 200);
     await analyst.json("POST", `/api/studies/${studyId}/plan/lock`, undefined, 200);
   }, TIMEOUT);
 

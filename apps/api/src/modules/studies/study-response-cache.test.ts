@@ -17,6 +17,7 @@ import { listFilter } from "./study.access.js";
 import { studyDtos } from "./study.service.js";
 import { findStudies } from "./study-list-records.js";
 import { readChangeMarker } from "./study-response-cache.js";
+import { FIXTURE_DESIGN } from "../../test-support/locked-study.js";
 
 // Property (common practice for a cache): after every write, through the API, in plain SQL, or
 // through another instance on the same database, each role's cached list and study pages equal
@@ -139,18 +140,7 @@ describe("the studies response cache", () => {
       .expect(201);
     const id = created.body.study.id as number;
     await expectFresh("created");
-    await b.analyst
-      .put(`/api/studies/${id}/design`)
-      .send({
-        independence: "independent",
-        scale: "continuous",
-        question: "means",
-        groupSizes: "equal",
-        hasControl: "no",
-        comparisons: "all-pairs",
-        assignment: "randomized",
-      })
-      .expect(200);
+    await b.analyst.put(`/api/studies/${id}/design`).send(FIXTURE_DESIGN).expect(200);
     await expectFresh("design answered (other instance)");
     await a.analyst.post(`/api/studies/${id}/plan/lock`).expect(200);
     await expectFresh("plan locked");

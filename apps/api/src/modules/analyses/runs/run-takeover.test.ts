@@ -14,6 +14,7 @@ import { sql } from "../../../test-support/sql.js";
 import { closeTestDatabase, openTestDatabase } from "../../../test-support/test-database.js";
 import { AuditEvent } from "../../audit/audit-event.entity.js";
 import { AnalysisRun } from "./analysis-run.entity.js";
+import { FIXTURE_DESIGN } from "../../../test-support/locked-study.js";
 
 /**
  * Two real server processes on one database: a SQLite file, or with WAYMARK_TEST_DB=postgres a
@@ -94,20 +95,7 @@ async function study(levels: string[], factor: string, outcome: string): Promise
     201,
   );
   const id = created.study.id;
-  await analystA.json(
-    "PUT",
-    `/api/studies/${id}/design`,
-    {
-      independence: "independent",
-      scale: "continuous",
-      question: "means",
-      groupSizes: "equal",
-      hasControl: "no",
-      comparisons: "all-pairs",
-      assignment: "randomized",
-    },
-    200,
-  );
+  await analystA.json("PUT", `/api/studies/${id}/design`, FIXTURE_DESIGN, 200);
   await analystA.json("POST", `/api/studies/${id}/plan/lock`, undefined, 200);
   return id;
 }
