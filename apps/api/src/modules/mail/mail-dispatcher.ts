@@ -1,5 +1,4 @@
-import { randomBytes } from "node:crypto";
-import os from "node:os";
+import { newInstanceId } from "../../lifecycle/instance-id.js";
 import nodemailer, { type Transporter } from "nodemailer";
 import { In, type DataSource } from "typeorm";
 import { isPostgres } from "../../db/driver.js";
@@ -37,7 +36,7 @@ export function outboxMessageId(m: Pick<OutboxMessage, "id" | "createdAt">, from
  */
 export class MailDispatcher {
   /** Written into claimed rows: host, process and a random part, unique per dispatcher. */
-  readonly instanceId = `${os.hostname().slice(0, 60)}:${process.pid}:${randomBytes(4).toString("hex")}`;
+  readonly instanceId = newInstanceId();
   private transport: Transporter | null;
   private running: Promise<void> | null = null;
   private timer: NodeJS.Timeout | null = null;

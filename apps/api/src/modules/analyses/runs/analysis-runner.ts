@@ -1,5 +1,4 @@
-import { randomBytes } from "node:crypto";
-import os from "node:os";
+import { newInstanceId } from "../../../lifecycle/instance-id.js";
 import type { DataSource } from "typeorm";
 import type { Env } from "../../../config/env.js";
 import { inTransaction } from "../../../db/in-transaction.js";
@@ -53,11 +52,6 @@ export function runSettingsFrom(env: Env): RunSettings {
     // Long enough for every attempt to time out in the worker and its lease to lapse.
     waitMs: env.ANALYSIS_RUN_MAX_ATTEMPTS * (env.TASK_TIMEOUT_SECONDS * 1000 + leaseMs),
   };
-}
-
-/** Names this process among the instances sharing the database: host, process id and a random part. */
-export function newInstanceId(): string {
-  return `${os.hostname().slice(0, 80)}:${process.pid}:${randomBytes(4).toString("hex")}`;
 }
 
 type Outcome =
